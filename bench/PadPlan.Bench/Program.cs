@@ -1,0 +1,1 @@
+Console.WriteLine("benchmarks come with the placement work");

@@ -1,0 +1,44 @@
+using PadPlan.IO;
+
+namespace PadPlan.Cli;
+
+/// <summary>Where a command writes: results to Out, messages and progress to Err. Runs a command body and turns failures into exit codes.</summary>
+public sealed class CommandContext(TextWriter stdout, TextWriter stderr)
+{
+    public TextWriter Out { get; } = stdout;
+    public TextWriter Err { get; } = stderr;
+
+    /// <summary>Runs a command body: bad input becomes exit 2 with a message naming the place; anything unexpected becomes exit 3.</summary>
+    public int Guarded(Func<int> body)
+    {
+        try
+        {
+            return body();
+        }
+        catch (InputException e)
+        {
+            Err.WriteLine($"error: {e.Describe()}");
+            return ExitCodes.InputError;
+        }
+        catch (UsageException e)
+        {
+            Err.WriteLine($"error: {e.Message}");
+            return ExitCodes.InputError;
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            Err.WriteLine($"error: {e.Message}");
+            return ExitCodes.InputError;
+        }
+        catch (Exception e)
+        {
+            Err.WriteLine($"internal error: {e.GetType().Name}: {e.Message}");
+            Err.WriteLine("This is a fault in PadPlan, not in your files. Please report it with the input that caused it.");
+            Err.WriteLine(e.StackTrace);
+            return ExitCodes.InternalError;
+        }
+    }
+}
+
+/// <summary>A command line that parses but asks for something impossible (e.g. conflicting options).</summary>
+public sealed class UsageException(string message) : Exception(message);

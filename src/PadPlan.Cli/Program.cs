@@ -1,0 +1,1 @@
+return PadPlan.Cli.PadPlanCli.Run(args, Console.Out, Console.Error);

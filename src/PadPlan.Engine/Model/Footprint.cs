@@ -1,0 +1,85 @@
+namespace PadPlan.Model;
+
+/// <summary>How a part sits on the board, which decides how its leads reach pads.</summary>
+public enum MountStyle
+{
+    /// <summary>Lies flat; leads leave the body ends and bend down to pads (resistors, diodes, axial chokes).</summary>
+    Axial,
+    /// <summary>Stands up; leads leave the underside and splay out to pads (capacitors, TO-92, crystals, LEDs).</summary>
+    Upright,
+    /// <summary>Sits on scored strips; each lead lands on the segment beneath it (DIP ICs).</summary>
+    Strip,
+    /// <summary>An off-board wire landing: each wire end lands on a pad near the edge.</summary>
+    Landing,
+}
+
+/// <summary>One physical lead: where it leaves the body (footprint coordinates, part origin at 0,0) and how far it can reach.</summary>
+public sealed record FootprintLead(string Name, Point Exit, double Diameter, double MinReach, double MaxReach)
+{
+    public string Name { get; } = Guard.Name(Name, "lead name");
+    public Point Exit { get; } = Guard.Finite(Exit, "lead exit");
+    public double Diameter { get; } = Guard.Positive(Diameter, "lead diameter");
+    public double MinReach { get; } = Guard.NonNegative(MinReach, "minimum reach");
+    public double MaxReach { get; } = MaxReach >= MinReach && double.IsFinite(MaxReach)
+        ? MaxReach : throw new ArgumentOutOfRangeException(nameof(MaxReach), MaxReach, "maximum reach must be at least the minimum reach.");
+}
+
+/// <summary>A named pin order: the symbol pin name carried by each physical lead, in lead order (e.g. TO-92 "EBC").</summary>
+public sealed record PinVariant(string Name, ValueList<string> Pins)
+{
+    public string Name { get; } = Guard.Name(Name, "variant name");
+}
+
+/// <summary>A physical package: plan-view body, height, leads and pin orders.</summary>
+public sealed record Footprint
+{
+    public Footprint(string name, string family, string description, ValueList<Point> body, double height, ValueList<FootprintLead> leads, MountStyle mount, string source, ValueList<PinVariant>? variants = null)
+    {
+        Name = Guard.Name(name, "footprint name");
+        Family = family ?? "";
+        Description = description ?? "";
+        if (body.Count < 3) throw new ArgumentException($"Footprint {name}: the body outline needs at least three points.", nameof(body));
+        Body = body;
+        Height = Guard.Positive(height, "body height");
+        if (leads.Count == 0) throw new ArgumentException($"Footprint {name} has no leads.", nameof(leads));
+        var dup = leads.GroupBy(l => l.Name, StringComparer.Ordinal).FirstOrDefault(g => g.Count() > 1);
+        if (dup is not null) throw new ArgumentException($"Footprint {name}: lead name '{dup.Key}' appears twice.", nameof(leads));
+        Leads = leads;
+        Mount = mount;
+        Source = source ?? "";
+        Variants = variants ?? ValueList<PinVariant>.Empty;
+        foreach (var v in Variants)
+            if (v.Pins.Count != leads.Count)
+                throw new ArgumentException($"Footprint {name}: variant '{v.Name}' names {v.Pins.Count} pins for {leads.Count} leads.", nameof(variants));
+    }
+
+    public string Name { get; init; }
+    public string Family { get; init; }
+    public string Description { get; init; }
+    /// <summary>Body outline in plan view, footprint coordinates (mm), part origin at (0,0).</summary>
+    public ValueList<Point> Body { get; init; }
+    public double Height { get; init; }
+    public ValueList<FootprintLead> Leads { get; init; }
+    public MountStyle Mount { get; init; }
+    /// <summary>Where the dimensions come from: a JEDEC outline, or "typical, common practice".</summary>
+    public string Source { get; init; }
+    public ValueList<PinVariant> Variants { get; init; }
+
+    /// <summary>The symbol pin name each lead carries, in lead order, for a variant (or the lead names when none is given).</summary>
+    public IReadOnlyList<string> PinNames(string? variant)
+    {
+        if (string.IsNullOrEmpty(variant)) return Variants.Count > 0 ? Variants[0].Pins : Leads.Select(l => l.Name).ToList();
+        var v = Variants.FirstOrDefault(x => string.Equals(x.Name, variant, StringComparison.OrdinalIgnoreCase))
+            ?? throw new ArgumentException($"Footprint {Name} has no pin-order variant '{variant}'; it has {string.Join(", ", Variants.Select(x => x.Name))}.", nameof(variant));
+        return v.Pins;
+    }
+
+    /// <summary>The lead that carries a symbol pin under a variant, or null when no lead does.</summary>
+    public FootprintLead? LeadForPin(string pin, string? variant)
+    {
+        var names = PinNames(variant);
+        for (var i = 0; i < names.Count; i++)
+            if (string.Equals(names[i], pin, StringComparison.OrdinalIgnoreCase)) return Leads[i];
+        return null;
+    }
+}

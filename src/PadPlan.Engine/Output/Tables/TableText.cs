@@ -1,0 +1,39 @@
+using System.Text;
+
+namespace PadPlan.Output.Tables;
+
+/// <summary>Renders report tables as aligned plain text or as RFC 4180 CSV.</summary>
+public static class TableText
+{
+    public static string ToText(ReportTable table)
+    {
+        var widths = table.Columns.Select(c => c.Length).ToArray();
+        foreach (var row in table.Rows)
+            for (var i = 0; i < row.Count; i++) widths[i] = Math.Max(widths[i], row[i].Length);
+        var sb = new StringBuilder();
+        sb.Append(table.Title).Append('\n');
+        AppendRow(sb, table.Columns, widths);
+        sb.Append(string.Join("  ", widths.Select(w => new string('-', w)))).Append('\n');
+        foreach (var row in table.Rows) AppendRow(sb, row, widths);
+        foreach (var note in table.Notes) sb.Append(note).Append('\n');
+        return sb.ToString();
+    }
+
+    private static void AppendRow(StringBuilder sb, IReadOnlyList<string> cells, int[] widths)
+    {
+        var line = string.Join("  ", cells.Select((c, i) => c.PadRight(widths[i])));
+        sb.Append(line.TrimEnd()).Append('\n');
+    }
+
+    /// <summary>CSV per RFC 4180: comma separated, CRLF line ends, fields with commas, quotes or line breaks quoted.</summary>
+    public static string ToCsv(ReportTable table)
+    {
+        var sb = new StringBuilder();
+        sb.Append(string.Join(",", table.Columns.Select(Quote))).Append("\r\n");
+        foreach (var row in table.Rows) sb.Append(string.Join(",", row.Select(Quote))).Append("\r\n");
+        return sb.ToString();
+    }
+
+    private static string Quote(string cell) =>
+        cell.IndexOfAny([',', '"', '\r', '\n']) >= 0 ? "\"" + cell.Replace("\"", "\"\"") + "\"" : cell;
+}

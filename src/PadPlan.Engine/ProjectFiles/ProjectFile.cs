@@ -1,0 +1,94 @@
+using System.Text.Json;
+using PadPlan.IO;
+using PadPlan.Model;
+
+namespace PadPlan.ProjectFiles;
+
+/// <summary>Reads and writes PadPlan project files (JSON, format "padplan-project/1", usual name *.padplan.json).</summary>
+public static class ProjectFile
+{
+    public const string FormatTag = "padplan-project/1";
+    public const string FormatPrefix = "padplan-project/";
+    public const string Extension = ".padplan.json";
+
+    /// <summary>Reads and checks a project file; throws <see cref="InputException"/> naming the place of any problem.</summary>
+    public static Project Read(string path)
+    {
+        byte[] bytes;
+        try
+        {
+            bytes = File.ReadAllBytes(path);
+        }
+        catch (FileNotFoundException)
+        {
+            throw new InputException(path, "no such project file. Create one with 'padplan import NETLIST -o FILE.padplan.json'.");
+        }
+        catch (DirectoryNotFoundException)
+        {
+            throw new InputException(path, "the folder of this project file does not exist.");
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new InputException(path, $"cannot read the project file: {e.Message}");
+        }
+        return Parse(bytes, path);
+    }
+
+    /// <summary>Parses and checks project JSON; the file name is used in messages only.</summary>
+    public static Project Parse(byte[] bytes, string fileName)
+    {
+        ProjectDto? dto;
+        try
+        {
+            dto = JsonSerializer.Deserialize(bytes, ProjectJsonContext.Default.ProjectDto);
+        }
+        catch (JsonException e)
+        {
+            throw new InputException(fileName, Explain(e), (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1, e.Path, e);
+        }
+        if (dto is null) throw new InputException(fileName, "the file holds JSON null, not a project.", 1);
+        var reader = new DtoReader(fileName, bytes);
+        if (dto.Format is null)
+            throw reader.Fail("$.format", $"missing \"format\": a PadPlan project file starts with \"format\": \"{FormatTag}\".");
+        if (dto.Format != FormatTag)
+            throw reader.Fail("$.format", dto.Format.StartsWith(FormatPrefix, StringComparison.Ordinal)
+                ? $"this file is format \"{dto.Format}\"; this PadPlan reads \"{FormatTag}\". Use a PadPlan version that knows that format."
+                : $"\"{dto.Format}\" is not a PadPlan project format; expected \"{FormatTag}\".");
+        var project = new Project(
+            reader.Need(dto.Name, "$.name", "project name"),
+            reader.Board(dto.Board, "$.board"),
+            reader.Toolkit(dto.Toolkit, "$.toolkit"),
+            reader.Rules(dto.Rules, "$.rules"),
+            (dto.Nets ?? []).Select((n, i) => reader.Net(n, $"$.nets[{i}]")).ToValueList(),
+            reader.Need(dto.Parts, "$.parts", "part list").Select((p, i) => reader.Part(p, $"$.parts[{i}]")).ToValueList(),
+            (dto.Footprints ?? []).Select((f, i) => reader.Footprint(f, $"$.footprints[{i}]")).ToValueList(),
+            dto.Layout is null ? null : reader.Layout(dto.Layout, "$.layout"),
+            dto.Description ?? "",
+            dto.FootprintDirs?.ToValueList());
+        var problem = ProjectValidator.FirstProblem(project);
+        if (problem is not null) throw reader.Fail(problem.Value.Path, problem.Value.Message);
+        return project;
+    }
+
+    /// <summary>The JSON bytes of a project: UTF-8, indented, LF line ends, ending in a newline. Same project, same bytes.</summary>
+    public static byte[] ToBytes(Project project)
+    {
+        var json = JsonSerializer.Serialize(DtoWriter.Project(project), ProjectJsonContext.Default.ProjectDto);
+        return System.Text.Encoding.UTF8.GetBytes(json.ReplaceLineEndings("\n") + "\n");
+    }
+
+    /// <summary>Writes a project atomically: the old file stays whole until the new one is complete.</summary>
+    public static void Write(Project project, string path) => AtomicFile.WriteAllBytes(path, ToBytes(project));
+
+    private static string Explain(JsonException e)
+    {
+        var message = e.Message;
+        var cut = message.IndexOf(" Path:", StringComparison.Ordinal);
+        if (cut > 0) message = message[..cut];
+        if (message.Contains("could not be converted", StringComparison.Ordinal))
+            message += " Check the value's type: numbers without quotes, true/false, text in quotes, lists in [ ].";
+        if (message.Contains("'0x", StringComparison.Ordinal) || message.Contains("end of data", StringComparison.OrdinalIgnoreCase) || message.Contains("expected depth", StringComparison.OrdinalIgnoreCase))
+            message += " The JSON is broken or cut short; check brackets, commas and quotes.";
+        return message;
+    }
+}
