@@ -85,10 +85,22 @@ public static class ProjectFile
         var message = e.Message;
         var cut = message.IndexOf(" Path:", StringComparison.Ordinal);
         if (cut > 0) message = message[..cut];
-        if (message.Contains("could not be converted", StringComparison.Ordinal))
-            message += " Check the value's type: numbers without quotes, true/false, text in quotes, lists in [ ].";
+        var converted = System.Text.RegularExpressions.Regex.Match(message, @"could not be converted to (?<type>[^ ]+?)\.?$");
+        if (converted.Success)
+            message = $"expected {FriendlyType(converted.Groups["type"].Value)} here. Numbers go without quotes, text in quotes, lists in [ ].";
         if (message.Contains("'0x", StringComparison.Ordinal) || message.Contains("end of data", StringComparison.OrdinalIgnoreCase) || message.Contains("expected depth", StringComparison.OrdinalIgnoreCase))
             message += " The JSON is broken or cut short; check brackets, commas and quotes.";
         return message;
     }
+
+    private static string FriendlyType(string clrType) => clrType switch
+    {
+        _ when clrType.Contains("Double", StringComparison.Ordinal) && clrType.Contains("[]", StringComparison.Ordinal) => "a point [x, y]",
+        _ when clrType.Contains("Double", StringComparison.Ordinal) || clrType.Contains("Int32", StringComparison.Ordinal) => "a number",
+        _ when clrType.Contains("Boolean", StringComparison.Ordinal) => "true or false",
+        _ when clrType.Contains("List", StringComparison.Ordinal) => "a list [ ... ]",
+        _ when clrType.Contains("Dictionary", StringComparison.Ordinal) => "an object { \"name\": \"value\" }",
+        "System.String" => "text in quotes",
+        _ => "an object { ... }",
+    };
 }
