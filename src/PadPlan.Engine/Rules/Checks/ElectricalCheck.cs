@@ -26,7 +26,7 @@ internal static class ElectricalCheck
         var high = ctx.Plan.Project.Nets.Where(n => Math.Abs(n.Voltage ?? 0) >= CautionVolts).Select(n => n.Name).ToList();
         if (high.Count > 0)
             yield return Findings.Info(RuleIds.HvCaution,
-                $"nets {string.Join(", ", high)} carry {CautionVolts} V or more. Capacitors hold a lethal charge after switch-off: discharge through a resistor and measure before touching; keep one hand away from the chassis.",
+                $"{(high.Count == 1 ? "net" : "nets")} {string.Join(", ", high)} {(high.Count == 1 ? "carries" : "carry")} {CautionVolts} V or more. Capacitors hold a lethal charge after switch-off: discharge through a resistor and measure before touching; keep one hand away from the chassis.",
                 "Follow local codes and licensed practice for mains and high-voltage wiring; this check does not replace them.",
                 null, high);
 
