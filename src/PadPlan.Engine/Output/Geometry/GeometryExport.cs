@@ -31,7 +31,7 @@ public static class GeometryExport
                 Outline = area.Outline().Select(Xy).ToList(),
                 Margin = R(area.Margin),
                 Thickness = R(project.Board.Thickness),
-                Keepouts = project.Board.Keepouts.Select(k => Shape(CopperGeometry.Shape(k))).ToList(),
+                Keepouts = project.Board.Keepouts.Select(Keepout).ToList(),
             },
             Nets = project.Nets.Select(n => new NetGeometry
             {
@@ -124,6 +124,14 @@ public static class GeometryExport
     private static ShapeGeometry Shape(Island island) => island.Shape == IslandShape.Round
         ? new ShapeGeometry { Id = island.Id, Net = island.Net, Shape = "round", X = R(island.Center.X), Y = R(island.Center.Y), D = R(island.Width) }
         : new ShapeGeometry { Id = island.Id, Net = island.Net, Shape = "rect", X = R(island.Center.X), Y = R(island.Center.Y), W = R(island.Width), H = R(island.Height) };
+
+    // Keep-outs call a round shape a circle, as the project file does.
+    private static ShapeGeometry Keepout(Keepout keepout)
+    {
+        var shape = Shape(CopperGeometry.Shape(keepout));
+        if (keepout is CircleKeepout) shape.Shape = "circle";
+        return shape;
+    }
 
     private static double[] Xy(Point p) => [R(p.X), R(p.Y)];
 
