@@ -9,20 +9,32 @@ internal static class PlacementCheck
     public static IEnumerable<Finding> Run(CheckContext ctx)
     {
         var parts = ctx.Plan.Parts;
-        for (var i = 0; i < parts.Count; i++)
-            for (var k = i + 1; k < parts.Count; k++)
-                if (Polygons.Overlap(parts[i].Body, parts[k].Body))
-                    yield return Findings.Error(RuleIds.BodyOverlap,
-                        $"the bodies of {parts[i].Ref} and {parts[k].Ref} overlap.",
-                        "Move or turn one of the parts.", Polygons.Centre(parts[i].Body), parts[i].Ref, parts[k].Ref);
-
-        foreach (var part in parts)
-        {
-            var own = part.Nets.Select(ctx.Plan.Canonical).ToHashSet(StringComparer.Ordinal);
-            foreach (var c in ctx.Plan.Copper)
+        var boxes = parts.Select(p => Bounds.Of(p.Body)).ToArray();
+        // Sweep along x: parts sorted by their left edge; stop once a part starts right of this one's right edge.
+        var order = Enumerable.Range(0, parts.Count).OrderBy(i => boxes[i].Left).ToArray();
+        var overlaps = new List<(int, int)>();
+        for (var p = 0; p < order.Length; p++)
+            for (var q = p + 1; q < order.Length && boxes[order[q]].Left < boxes[order[p]].Right; q++)
             {
+                var (i, k) = (Math.Min(order[p], order[q]), Math.Max(order[p], order[q]));
+                if (boxes[i].Overlaps(boxes[k]) && Polygons.Overlap(parts[i].Body, parts[k].Body)) overlaps.Add((i, k));
+            }
+        overlaps.Sort();
+        foreach (var (i, k) in overlaps)
+            yield return Findings.Error(RuleIds.BodyOverlap,
+                $"the bodies of {parts[i].Ref} and {parts[k].Ref} overlap.",
+                "Move or turn one of the parts.", Polygons.Centre(parts[i].Body), parts[i].Ref, parts[k].Ref);
+
+        var copperBoxes = ctx.Plan.Copper.Select(c => Bounds.Of(c.Island)).ToArray();
+        for (var i = 0; i < parts.Count; i++)
+        {
+            var part = parts[i];
+            var own = part.Nets.Select(ctx.Plan.Canonical).ToHashSet(StringComparer.Ordinal);
+            for (var k = 0; k < copperBoxes.Length; k++)
+            {
+                var c = ctx.Plan.Copper[k];
                 var net = ctx.NetOf(c);
-                if (net is null || own.Contains(net) || !Polygons.Overlap(part.Body, c.Island)) continue;
+                if (net is null || own.Contains(net) || !boxes[i].Overlaps(copperBoxes[k]) || !Polygons.Overlap(part.Body, c.Island)) continue;
                 yield return Findings.Warning(RuleIds.BodyOverPad,
                     $"the body of {part.Ref} lies over pad {c.Id} of net {net}, which it does not connect to.",
                     "Fine for an insulated body lying flat; otherwise move the part so nothing presses on the joint.",
