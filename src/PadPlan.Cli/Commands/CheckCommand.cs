@@ -1,5 +1,8 @@
 using System.CommandLine;
+using PadPlan.IO;
 using PadPlan.ProjectFiles;
+using PadPlan.Rules;
+using PadPlan.Rules.Reporting;
 
 namespace PadPlan.Cli.Commands;
 
@@ -9,13 +12,31 @@ public static class CheckCommand
     public static Command Create(CommandContext context)
     {
         var project = SharedOptions.ProjectArgument();
-        var command = new Command("check", "Check a plan against its circuit: connectivity, spacing, reach, high voltage; estimate parasitics.") { project };
+        var json = new Option<FileInfo?>("--json") { Description = "Also write the findings as JSON to this file." };
+        var strict = new Option<bool>("--strict") { Description = "Fail (exit 1) on warnings too, not only on errors." };
+        var parasitics = new Option<bool>("--parasitics") { Description = "Estimate pad capacitance and lead inductance for every net, not only rf nets." };
+        var quiet = SharedOptions.Quiet();
+        var command = new Command("check", "Check a plan against its circuit: connectivity, spacing, reach, high voltage; estimate parasitics.")
+        {
+            project, json, strict, parasitics, quiet,
+        };
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
-            ProjectFile.Read(file.FullName);
-            context.Err.WriteLine("padplan check: this step is not built yet.");
-            return ExitCodes.InputError;
+            var plan = ProjectFile.Read(file.FullName);
+            var isStrict = parse.GetValue(strict);
+            var report = Checker.Check(plan, new CheckOptions(parse.GetValue(parasitics)));
+            if (parse.GetValue(json) is { } jsonFile)
+            {
+                AtomicFile.WriteAllBytes(jsonFile.FullName, CheckReportJson.ToBytes(plan.Name, report, isStrict));
+                context.Err.WriteLine($"Wrote {jsonFile.FullName}");
+            }
+            if (parse.GetValue(quiet))
+            {
+                if (!report.Passed(isStrict)) context.Out.WriteLine(CheckReportTables.Summary(plan.Name, report, isStrict));
+            }
+            else context.Out.Write(CheckReportTables.ToText(plan.Name, report, isStrict));
+            return report.Passed(isStrict) ? ExitCodes.Success : ExitCodes.RuleViolations;
         }));
         return command;
     }
