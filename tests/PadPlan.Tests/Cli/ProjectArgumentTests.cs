@@ -10,7 +10,7 @@ public sealed class ProjectArgumentTests
     public void A_missing_project_file_exits_2_naming_the_file(string command)
     {
         var missing = Path.Combine(TestPaths.NewTempDir(), "nothing.padplan.json");
-        var result = CliRunner.Run(command, missing);
+        var result = CliRunner.Run(WithRequiredOptions(command, missing));
         Assert.Equal(2, result.ExitCode);
         Assert.Contains("nothing.padplan.json", result.Err);
         Assert.False(File.Exists(missing));
@@ -25,12 +25,20 @@ public sealed class ProjectArgumentTests
         var text = File.ReadAllText(TestPaths.TinyBuffer).Replace("\"width\": 50", "\"width\": \"wide\"", StringComparison.Ordinal);
         File.WriteAllText(file, text);
         var before = File.ReadAllBytes(file);
-        var result = CliRunner.Run(command, file);
+        var result = CliRunner.Run(WithRequiredOptions(command, file));
         Assert.Equal(2, result.ExitCode);
         Assert.Contains("$.board.width", result.Err);
         Assert.Equal(before, File.ReadAllBytes(file));
         Assert.Single(Directory.GetFiles(dir));
     }
+
+    // Options a command needs besides the project; their outputs go to a folder of their own.
+    private static string[] WithRequiredOptions(string command, string project) => command switch
+    {
+        "export" => [command, project, "--geometry", Path.Combine(TestPaths.NewTempDir(), "geometry.json")],
+        "sheets" => [command, project, "-o", TestPaths.NewTempDir()],
+        _ => [command, project],
+    };
 
     [Fact]
     public void An_unknown_command_is_a_usage_error()
