@@ -49,7 +49,7 @@ public static class SheetsCommand
         return command;
     }
 
-    internal static SheetFormats ParseFormats(string text)
+    public static SheetFormats ParseFormats(string text)
     {
         var formats = SheetFormats.None;
         foreach (var item in text.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
@@ -66,7 +66,7 @@ public static class SheetsCommand
     }
 
     /// <summary>--date wins; else SOURCE_DATE_EPOCH (seconds since 1970, UTC, the reproducible-builds convention); else today.</summary>
-    internal static DateOnly ResolveDate(string? option, string? sourceDateEpoch)
+    public static DateOnly ResolveDate(string? option, string? sourceDateEpoch)
     {
         if (!string.IsNullOrWhiteSpace(option))
         {

@@ -116,8 +116,9 @@ internal static class AssemblySheet
         {
             var box = view.ToPage(TemplateSheet.IslandBox(island));
             var idSize = SheetStyle.TextTiny;
-            if (TextMetrics.Width(island.Id, idSize) < box.Width * 0.7 && idSize < box.Height * 0.6)
-                page.Text(island.Id, new Point(box.Center.X, box.Center.Y + idSize * 0.36), idSize, TextAnchor.Middle, ink: SheetStyle.Mid);
+            // in the upper part of the pad, clear of the lead landings, which mostly sit at its centre
+            if (TextMetrics.Width(island.Id, idSize) < box.Width * 0.7 && idSize * 3.2 < box.Height)
+                page.Text(island.Id, new Point(box.Center.X, box.Top + idSize * (island.Shape == IslandShape.Round ? 1.6 : 1.2)), idSize, TextAnchor.Middle, ink: SheetStyle.Mid);
             if (island.Net is null) continue;
             var (w, h) = Label.Size(island.Net, SheetStyle.TextSmall, FontWeight.Bold);
             var chosen = placer.Place(LabelPlacer.Around(box, w, h, 0.4));

@@ -24,7 +24,8 @@ internal sealed class LabelPlacer(Box bounds)
             }
             if (cost == 0) break;
         }
-        _taken.Add(best);
+        // keep a little air round each label so neighbouring labels do not read as one
+        _taken.Add(best.Inflate(1.0));
         return best;
     }
 

@@ -51,9 +51,9 @@ internal static class TemplateSheet
                 Marks.Alignment(inner, p);
                 inner.Text(name, p + new Point(2.6, -2.6), SheetStyle.TextSmall, weight: FontWeight.Bold);
             }
-            if (plan.IsTiled) DrawSeams(inner, tile, view);
+            if (plan.IsTiled) DrawSeams(inner, plan, tile, view);
             page.Clipped(clip, inner);
-            var caption = "Pad template, 1:1" + (plan.IsTiled ? $" — part {tile.Row * plan.Columns + tile.Column + 1} of {plan.Tiles.Count} (row {tile.Row + 1}, column {tile.Column + 1})" : "");
+            var caption = "Pad template, 1:1" + (plan.IsTiled ? $" — part {SheetNumber(plan, tile.Row, tile.Column)} of {plan.Tiles.Count} (row {tile.Row + 1}, column {tile.Column + 1})" : "");
             var bar = DrawFooter(page, project, frame, plan, tile);
             drafts.Add(new SheetDraft(SheetKind.Template, frame, caption, page.Shapes(), view, bar));
         }
@@ -249,14 +249,26 @@ internal static class TemplateSheet
 
     private static string MarkName(int i) => i < 26 ? ((char)('A' + i)).ToString() : $"{(char)('A' + i / 26 - 1)}{(char)('A' + i % 26)}";
 
-    /// <summary>Dashed seams where this tile meets a neighbour: trim along a seam and lay it over the neighbour's overlap.</summary>
-    private static void DrawSeams(PageBuilder page, Tile tile, BoardView view)
+    /// <summary>Dashed seams where this tile meets the neighbour before it: trim along a seam and lay this sheet over that one.</summary>
+    private static void DrawSeams(PageBuilder page, TilePlan plan, Tile tile, BoardView view)
     {
         var seam = Stroke.Dashed(Ink.Black, 0.4, 3, 1.5);
         var region = view.ToPage(tile.Region);
-        if (tile.Column > 0) page.Line(new Point(region.Left, region.Top), new Point(region.Left, region.Bottom), seam);
-        if (tile.Row > 0) page.Line(new Point(region.Left, region.Top), new Point(region.Right, region.Top), seam);
+        var size = SheetStyle.TextSmall;
+        if (tile.Column > 0)
+        {
+            page.Line(new Point(region.Left, region.Top), new Point(region.Left, region.Bottom), seam);
+            page.Text($"Trim along this line and lay over sheet {SheetNumber(plan, tile.Row, tile.Column - 1)}", new Point(region.Left + 1 + size, region.Center.Y), size, TextAnchor.Middle, ink: SheetStyle.Mid, angle: -90);
+        }
+        if (tile.Row > 0)
+        {
+            page.Line(new Point(region.Left, region.Top), new Point(region.Right, region.Top), seam);
+            page.Text($"Trim along this line and lay over sheet {SheetNumber(plan, tile.Row - 1, tile.Column)}", new Point(region.Center.X, region.Top + 1 + size), size, TextAnchor.Middle, ink: SheetStyle.Mid);
+        }
     }
+
+    /// <summary>Template pages come first in the book, in row order, so a tile's sheet number is its place in the grid.</summary>
+    private static int SheetNumber(TilePlan plan, int row, int column) => row * plan.Columns + column + 1;
 
     /// <summary>Check bars, legend, tile map and the notes; returns the box of the 50 mm bar.</summary>
     private static Box DrawFooter(PageBuilder page, Project project, PageFrame frame, TilePlan plan, Tile tile)
@@ -268,7 +280,7 @@ internal static class TemplateSheet
 
         var mapWidth = plan.IsTiled ? 34.0 : 0;
         var legendLeft = body.Left + 66;
-        DrawLegend(page, new Box(legendLeft, top + 2.5, body.Right - mapWidth, top + 2.5 + CheckBar.Height + 4), plan.IsTiled);
+        DrawLegend(page, new Box(legendLeft, top + 2.5, body.Right - mapWidth, top + 2.5 + CheckBar.Height + 4.5), plan.IsTiled);
         if (plan.IsTiled) DrawTileMap(page, new Box(body.Right - mapWidth + 4, top + 2.5, body.Right, top + 2.5 + CheckBar.Height), plan, tile);
 
         var y = top + CheckBar.Height + 9;
@@ -296,7 +308,7 @@ internal static class TemplateSheet
             (p => page.Rect(Box.Around(p, 4.4, 2.2), SheetStyle.FaintLine), "Faint: part bodies, for orientation only"),
         };
         if (tiled) entries.Add((p => { page.Circle(p, 1.3, SheetStyle.Fine); page.Cross(p, 2.0, SheetStyle.Fine); }, "Alignment: lay sheets so the marks meet"));
-        const double rowHeight = 3.6;
+        const double rowHeight = 3.5;
         var rows = Math.Max(1, (int)Math.Floor(area.Height / rowHeight));
         var columns = (int)Math.Ceiling(entries.Count / (double)rows);
         var columnWidth = area.Width / columns;
@@ -317,7 +329,7 @@ internal static class TemplateSheet
         {
             var box = Box.Of(area.Left + tile.Column * cell, area.Top + 3 + tile.Row * cell, cell, cell);
             page.Rect(box, SheetStyle.Fine, tile == current ? SheetStyle.Shade : null);
-            var number = (tile.Row * plan.Columns + tile.Column + 1).ToString(CultureInfo.InvariantCulture);
+            var number = SheetNumber(plan, tile.Row, tile.Column).ToString(CultureInfo.InvariantCulture);
             page.Text(number, new Point(box.Center.X, box.Center.Y + cell * 0.18), Math.Min(SheetStyle.TextSmall, cell * 0.5), TextAnchor.Middle, tile == current ? FontWeight.Bold : FontWeight.Regular);
         }
     }
