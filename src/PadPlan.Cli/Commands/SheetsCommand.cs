@@ -1,4 +1,9 @@
 using System.CommandLine;
+using System.Globalization;
+using PadPlan.IO;
+using PadPlan.Output.Drawing;
+using PadPlan.Output.Sheets;
+using PadPlan.Output.Tables;
 using PadPlan.ProjectFiles;
 
 namespace PadPlan.Cli.Commands;
@@ -9,14 +14,71 @@ public static class SheetsCommand
     public static Command Create(CommandContext context)
     {
         var project = SharedOptions.ProjectArgument();
-        var command = new Command("sheets", "Print 1:1 template, assembly view and report pages (PDF, SVG, PNG).") { project };
+        var output = new Option<DirectoryInfo>("--output", "-o") { Description = "Folder to write the sheets into (created if missing).", Required = true };
+        var paper = new Option<string>("--paper") { Description = "Paper size: a4, letter or a3.", DefaultValueFactory = _ => "a4" };
+        var formats = new Option<string>("--formats") { Description = "Comma-separated file kinds to write: pdf, svg, png.", DefaultValueFactory = _ => "pdf,svg,png" };
+        var dpi = new Option<int>("--dpi") { Description = $"Resolution of the PNG previews, {PngWriter.MinDpi:0} to {PngWriter.MaxDpi:0} dots per inch.", DefaultValueFactory = _ => 150 };
+        var date = new Option<string?>("--date") { Description = "Date printed on the sheets, YYYY-MM-DD. Default: from SOURCE_DATE_EPOCH if set, else today." };
+        var command = new Command("sheets", "Print 1:1 template, assembly view and report pages (PDF, SVG, PNG).") { project, output, paper, formats, dpi, date };
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
-            ProjectFile.Read(file.FullName);
-            context.Err.WriteLine("padplan sheets: this step is not built yet.");
-            return ExitCodes.InputError;
+            var chosenPaper = Paper.Find(parse.GetValue(paper) ?? "a4")
+                ?? throw new UsageException($"--paper: unknown paper '{parse.GetValue(paper)}'; use a4, letter or a3.");
+            var chosenFormats = ParseFormats(parse.GetValue(formats) ?? "");
+            var resolution = parse.GetValue(dpi);
+            if (resolution < PngWriter.MinDpi || resolution > PngWriter.MaxDpi)
+                throw new UsageException($"--dpi: {resolution} is out of range; use {PngWriter.MinDpi:0} to {PngWriter.MaxDpi:0}.");
+            var printedDate = ResolveDate(parse.GetValue(date), Environment.GetEnvironmentVariable("SOURCE_DATE_EPOCH"));
+
+            var plan = ProjectFile.Read(file.FullName);
+            if (SheetBook.Problem(plan) is { } problem) throw new InputException(file.FullName, problem);
+            // The checker (issue 5) and the materials tables (issue 7) are wired in at merge.
+            var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate), check: null, tables: Array.Empty<ReportTable>());
+            var dir = parse.GetValue(output)!.FullName;
+            Directory.CreateDirectory(dir);
+            foreach (var sheetFile in SheetFiles.Render(book, chosenFormats, resolution))
+            {
+                var path = Path.Combine(dir, sheetFile.Name);
+                AtomicFile.WriteAllBytes(path, sheetFile.Bytes);
+                context.Out.WriteLine(path);
+            }
+            context.Err.WriteLine($"{book.Sheets.Count} sheet(s) on {chosenPaper.Name}, dated {printedDate:yyyy-MM-dd}. Print the template at actual size and measure its check bar before cutting.");
+            return ExitCodes.Success;
         }));
         return command;
+    }
+
+    public static SheetFormats ParseFormats(string text)
+    {
+        var formats = SheetFormats.None;
+        foreach (var item in text.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
+        {
+            formats |= item.ToLowerInvariant() switch
+            {
+                "pdf" => SheetFormats.Pdf,
+                "svg" => SheetFormats.Svg,
+                "png" => SheetFormats.Png,
+                _ => throw new UsageException($"--formats: unknown kind '{item}'; use pdf, svg and/or png, separated by commas."),
+            };
+        }
+        return formats == SheetFormats.None ? throw new UsageException("--formats: name at least one of pdf, svg, png.") : formats;
+    }
+
+    /// <summary>--date wins; else SOURCE_DATE_EPOCH (seconds since 1970, UTC, the reproducible-builds convention); else today.</summary>
+    public static DateOnly ResolveDate(string? option, string? sourceDateEpoch)
+    {
+        if (!string.IsNullOrWhiteSpace(option))
+        {
+            return DateOnly.TryParseExact(option.Trim(), "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out var d)
+                ? d : throw new UsageException($"--date: '{option}' is not a date of the form YYYY-MM-DD.");
+        }
+        if (!string.IsNullOrWhiteSpace(sourceDateEpoch))
+        {
+            return long.TryParse(sourceDateEpoch.Trim(), NumberStyles.None, CultureInfo.InvariantCulture, out var seconds) && seconds <= 253402300799
+                ? DateOnly.FromDateTime(DateTimeOffset.FromUnixTimeSeconds(seconds).UtcDateTime)
+                : throw new UsageException($"SOURCE_DATE_EPOCH: '{sourceDateEpoch}' is not a whole number of seconds since 1970-01-01.");
+        }
+        return DateOnly.FromDateTime(DateTime.Now);
     }
 }

@@ -1,0 +1,42 @@
+using PadPlan.Model;
+using PadPlan.Output.Drawing;
+using PadPlan.Output.Tables;
+using PadPlan.Rules;
+
+namespace PadPlan.Output.Sheets;
+
+/// <summary>All printed pages of a plan, numbered: template page(s), the assembly view, then the report pages.</summary>
+public sealed record SheetBook(string Title, DateOnly Date, ValueList<Sheet> Sheets)
+{
+    /// <summary>Why a project cannot be printed yet (no layout, no board size), or null when it can.</summary>
+    public static string? Problem(Project project)
+    {
+        if (project.Layout is null) return "the project has no layout yet; run 'padplan place' first or add a \"layout\" section.";
+        if (project.Board.IsAuto) return "the board size is still automatic; run 'padplan place' to fix it or set board width and height.";
+        return null;
+    }
+
+    /// <summary>Builds every page. The check report and tables come from the checker and the materials step; pass null / none to leave them out.</summary>
+    public static SheetBook Build(Project project, SheetOptions options, CheckReport? check, IReadOnlyList<ReportTable> tables)
+    {
+        if (Problem(project) is { } problem) throw new ArgumentException($"Project {project.Name}: {problem}", nameof(project));
+        var drafts = new List<SheetDraft>();
+        drafts.AddRange(TemplateSheet.Build(project, options));
+        drafts.Add(AssemblySheet.Build(project, options));
+        drafts.AddRange(ReportSheets.Build(project, options, check, tables));
+
+        var sheets = new List<Sheet>();
+        var perKind = new Dictionary<SheetKind, int>();
+        for (var i = 0; i < drafts.Count; i++)
+        {
+            var draft = drafts[i];
+            perKind[draft.Kind] = perKind.GetValueOrDefault(draft.Kind) + 1;
+            var page = new PageBuilder();
+            foreach (var shape in draft.Body) page.Add(shape);
+            TitleBlock.Draw(page, draft.Frame, project, draft.Caption, options.Date, i + 1, drafts.Count);
+            var title = $"{project.Name}: {draft.Caption} (sheet {i + 1} of {drafts.Count})";
+            sheets.Add(new Sheet(draft.Kind, perKind[draft.Kind], page.ToPage(draft.Frame.Width, draft.Frame.Height, title), draft.View, draft.CheckBar));
+        }
+        return new SheetBook($"{project.Name}: PadPlan sheets", options.Date, sheets.ToValueList());
+    }
+}

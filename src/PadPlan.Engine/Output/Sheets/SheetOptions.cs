@@ -1,0 +1,10 @@
+namespace PadPlan.Output.Sheets;
+
+/// <summary>What the sheets are printed on and the date they carry (fixed by the caller so that output repeats byte for byte).</summary>
+public sealed record SheetOptions(Paper Paper, DateOnly Date)
+{
+    /// <summary>Least overlap between neighbouring tiles of a board larger than the paper (mm); common practice, no source.</summary>
+    public double TileOverlap { get; init; } = 12;
+    /// <summary>Largest enlargement of the assembly view for a small board.</summary>
+    public double MaxAssemblyScale { get; init; } = 6;
+}
