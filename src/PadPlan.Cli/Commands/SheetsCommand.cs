@@ -1,3 +1,4 @@
+using PadPlan.Rules;
 using System.CommandLine;
 using System.Globalization;
 using PadPlan.IO;
@@ -33,8 +34,8 @@ public static class SheetsCommand
 
             var plan = ProjectFile.Read(file.FullName);
             if (SheetBook.Problem(plan) is { } problem) throw new InputException(file.FullName, problem);
-            // The checker (issue 5) and the materials tables (issue 7) are wired in at merge.
-            var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate), check: null, tables: Array.Empty<ReportTable>());
+            var check = Checker.Check(plan);
+            var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate), check, tables: Array.Empty<ReportTable>());
             var dir = parse.GetValue(output)!.FullName;
             Directory.CreateDirectory(dir);
             foreach (var sheetFile in SheetFiles.Render(book, chosenFormats, resolution))
