@@ -22,10 +22,15 @@ public static class DefaultFootprints
             PartKind.Transformer => part.Pins.Count is >= 2 and <= 6 ? ($"toroid-13mm-{part.Pins.Count}", true) : null,
             PartKind.Landing => part.Pins.Count <= 8 ? ($"landing-{part.Pins.Count}", false) : null,
             PartKind.Subcircuit when Crystal(model) && part.Pins.Count == 2 => ("hc49-u", false),
-            PartKind.Subcircuit => GenericDip(part.Pins.Count) is { } dip ? (dip, true) : null,
+            PartKind.Subcircuit => GenericDip(PinsNeeded(part)) is { } dip ? (dip, true) : null,
             _ => null,
         };
     }
+
+    /// <summary>Leads a part needs: its pin count, or its highest pin number when pins are named by lead number (own-format ICs).</summary>
+    public static int PinsNeeded(NetlistPart part) =>
+        part.Positional ? part.Pins.Count
+        : Math.Max(part.Pins.Count, part.Pins.Select(p => int.TryParse(p.Name, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out var n) ? n : 0).DefaultIfEmpty(0).Max());
 
     /// <summary>The smallest DIP in the library with at least this many pins, for an IC whose package is unknown.</summary>
     public static string? GenericDip(int pins) => pins <= 8 ? "dip-8" : pins <= 14 ? "dip-14" : pins <= 16 ? "dip-16" : null;

@@ -52,7 +52,8 @@ public static class FootprintFileReader
         return new InputException(file, message, JsonLineLocator.LineOf(bytes, path), jsonPath: path);
     }
 
-    private static string FirstSentence(string message)
+    /// <summary>A System.Text.Json message without its trailing path and position, which the caller reports itself.</summary>
+    internal static string FirstSentence(string message)
     {
         var cut = message.IndexOf(" Path:", StringComparison.Ordinal);
         return cut > 0 ? message[..cut] : message;

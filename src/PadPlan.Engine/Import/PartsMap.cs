@@ -55,9 +55,7 @@ public sealed class PartsMap
         }
         catch (JsonException e)
         {
-            var message = e.Message;
-            var cut = message.IndexOf(" Path:", StringComparison.Ordinal);
-            throw new InputException(file, $"not a readable parts map: {(cut > 0 ? message[..cut] : message)}", (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1, e.Path, e);
+            throw new InputException(file, $"not a readable parts map: {FootprintFileReader.FirstSentence(e.Message)}", (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1, e.Path, e);
         }
         var reader = new DtoReader(file, bytes);
         if (dto is null) throw new InputException(file, "the file holds JSON null, not a parts map.", 1);

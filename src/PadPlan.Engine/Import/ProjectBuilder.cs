@@ -99,6 +99,7 @@ public static class ProjectBuilder
 
     private static string AssumedNote(NetlistPart part, string footprint) => part.Kind switch
     {
+        PartKind.Subcircuit when !part.Positional => $"{part.Ref}: no footprint given, so the generic {footprint} is assumed, its pins taken as lead numbers. Name the footprint after the value (see 'padplan footprints').",
         PartKind.Subcircuit => $"{part.Ref}: {part.Model ?? "this part"} has no known footprint, so the generic {footprint} is assumed, pins in call order on leads 1, 2, 3... Add \"{part.Model ?? part.Ref}\": {{\"footprint\": \"...\", \"pins\": {{...}}}} under \"values\" in a parts map (--parts).",
         PartKind.Transformer => $"{part.Ref}: coupled windings ({part.Value}) are put on {footprint}; the core size is a guess. Add \"{part.Model}\" (the K line) or \"{part.Ref}\" with the right toroid to a parts map.",
         _ => $"{part.Ref}: value {part.Value} is not known, so {footprint} is assumed; name the footprint in a parts map.",
@@ -115,7 +116,11 @@ public static class ProjectBuilder
         Func<char, NetlistPart, IReadOnlyDictionary<string, string>?> pinsOf;
         if (entry?.Footprint is not null || first.Footprint is not null || !first.Positional)
         {
-            name = entry?.Footprint ?? first.Footprint ?? DefaultFootprints.GenericDip(package.Sections.Max(s => s.Part.Pins.Count)) ?? "dip-16";
+            assumed = entry?.Footprint is null && first.Footprint is null;
+            var highest = package.Sections.Max(s => DefaultFootprints.PinsNeeded(s.Part));
+            name = entry?.Footprint ?? first.Footprint ?? DefaultFootprints.GenericDip(highest)
+                ?? throw Bad($"its pins go up to {highest}, more than any generic footprint; name the footprint.");
+            if (assumed) notes.Add(new ImportNote(file, first.Line, $"{package.Ref}: no footprint given, so the generic {name} is assumed; name it after the value."));
             pinsOf = (letter, part) => entry is null ? null
                 : entry.Sections.TryGetValue(letter.ToString(), out var pins) ? pins
                 : entry.Sections.Count > 0 ? throw Bad($"the parts map gives no pin mapping for section {letter}; add \"{letter}\" under \"sections\".", part.Line)

@@ -80,3 +80,26 @@ public class PpnImportTests
         Assert.Equal(["4k7", "R47", "2u2", "100u", "1M"], p.Parts.Select(x => x.Value));
     }
 }
+
+public class PpnSectionTests
+{
+    [Fact]
+    public void Sections_join_on_their_package_leads_and_an_ic_without_footprint_gets_a_dip_by_its_highest_pin()
+    {
+        var r = ImportFixture.ImportData("sections.ppn");
+        var u1 = r.Project.FindPart("U1")!;
+        Assert.Equal("dip-8", u1.Footprint);
+        Assert.Equal(["1", "2", "3", "4", "5", "6", "7", "8"], u1.Pins.Select(p => p.Pin));
+        var u2 = r.Project.FindPart("U2")!;
+        Assert.Equal(("dip-14", true), (u2.Footprint, u2.FootprintAssumed));
+        Assert.Contains(r.Notes, n => n.Message.Contains("U2") && n.Message.Contains("dip-14"));
+    }
+
+    [Fact]
+    public void Sections_that_put_a_shared_lead_on_two_nets_are_an_error()
+    {
+        var e = Assert.Throws<PadPlan.IO.InputException>(() => ImportFixture.Import("U1A x dip-8 1=A 2=B 3=C 8=VP\nU1B x dip-8 5=D 6=E 7=F 8=VQ\n", "s.ppn"));
+        Assert.Equal(2, e.Line);
+        Assert.Contains("lead 8", e.Message);
+    }
+}
