@@ -120,6 +120,21 @@ public class ImportCommandTests
     }
 
     [Fact]
+    public void A_footprints_line_in_a_ppn_names_a_folder_relative_to_the_netlist()
+    {
+        var dir = TestPaths.NewTempDir();
+        var own = Directory.CreateDirectory(Path.Combine(dir, "parts")).FullName;
+        File.WriteAllText(Path.Combine(own, "mine.json"), File.ReadAllText(Path.Combine(TestPaths.Footprints, "leds.json")).Replace("\"led-", "\"panel-led-"));
+        var netlist = Write(dir, "n.ppn", "footprints parts\nLED1 red panel-led-5mm A=V K=K1\nR1 1k 1=K1 2=GND\nJ1 supply 1=V 2=GND\n");
+        var output = Path.Combine(dir, "out", "n.padplan.json");
+        var r = CliRunner.Run("import", netlist, "-o", output);
+        Assert.True(r.ExitCode == 0, r.Err);
+        var p = ProjectFile.Read(output);
+        Assert.Equal("panel-led-5mm", p.FindPart("LED1")!.Footprint);
+        Assert.Equal(["../parts"], p.FootprintDirs);
+    }
+
+    [Fact]
     public void Footprints_lists_one_a_line_and_shows_details()
     {
         var list = CliRunner.Run("footprints");
