@@ -1,4 +1,6 @@
 using System.CommandLine;
+using PadPlan.Import;
+using PadPlan.ProjectFiles;
 
 namespace PadPlan.Cli.Commands;
 
@@ -9,12 +11,72 @@ public static class ImportCommand
     {
         var netlist = new Argument<FileInfo>("netlist") { Description = "The netlist: PadPlan text format (*.ppn) or SPICE (*.cir, *.sp, *.net, *.spice)." };
         var output = new Option<FileInfo>("--output", "-o") { Description = "The project file to create (*.padplan.json).", Required = true };
-        var command = new Command("import", "Read a netlist (PadPlan text or SPICE) and create a project file.") { netlist, output };
+        var board = new Option<string?>("--board") { Description = "Board size WIDTHxHEIGHT in mm (e.g. 80x50); left out, the placer sizes it." };
+        var parts = new Option<FileInfo?>("--parts") { Description = "A parts map (JSON) choosing footprints by reference, value or model, and stating net facts." };
+        var dirs = SharedOptions.FootprintDirs();
+        var force = new Option<bool>("--force") { Description = "Replace the output file if it exists (its layout is lost)." };
+        var quiet = SharedOptions.Quiet();
+        var command = new Command("import", "Read a netlist (PadPlan text or SPICE) and create a project file.") { netlist, output, board, parts, dirs, force, quiet };
         command.SetAction(parse => context.Guarded(() =>
         {
-            context.Err.WriteLine("padplan import: this step is not built yet.");
-            return ExitCodes.InputError;
+            var outFile = parse.GetValue(output)!;
+            if (outFile.Exists && !parse.GetValue(force))
+                throw new UsageException($"{outFile.FullName} already exists and may hold a layout. Give another -o file, or --force to replace it.");
+            (double, double)? size = null;
+            if (parse.GetValue(board) is { } boardText)
+            {
+                size = PpnReader.BoardSize(boardText, out var error);
+                if (error is not null) throw new UsageException($"--board: {error}");
+            }
+            var extraDirs = (parse.GetValue(dirs) ?? []).Select(d => d.FullName).ToList();
+            var library = FootprintLibrary.Load(extraDirs);
+            var map = parse.GetValue(parts) is { } partsFile ? PartsMap.Read(partsFile.FullName, library) : null;
+            var inFile = parse.GetValue(netlist)!;
+            var projectDir = outFile.Directory?.FullName ?? ".";
+            var recorded = extraDirs.Select(d => Path.GetRelativePath(projectDir, d).Replace('\\', '/')).ToList();
+            var netlistBytes = ReadNetlist(inFile);
+            var preview = NetlistImporter.Read(netlistBytes, inFile.ToString());
+            // Footprint folders named in the netlist are relative to the netlist: load them too before building.
+            if (preview.FootprintDirs is { Count: > 0 } own)
+            {
+                var netlistDir = inFile.Directory?.FullName ?? ".";
+                var full = own.Select(d => Path.GetFullPath(Path.Combine(netlistDir, d))).ToList();
+                library = FootprintLibrary.Load(extraDirs.Concat(full));
+                recorded.AddRange(full.Select(d => Path.GetRelativePath(projectDir, d).Replace('\\', '/')));
+                preview = preview with { FootprintDirs = null };
+                if (map is not null) map = PartsMap.Read(parse.GetValue(parts)!.FullName, library);
+            }
+            var result = ProjectBuilder.Build(preview, new ImportOptions(library, map, size, recorded.Distinct().ToList()));
+            foreach (var note in result.Notes) context.Err.WriteLine($"warning: {note.Describe()}");
+            ProjectFile.Write(result.Project, outFile.FullName);
+            if (!parse.GetValue(quiet))
+            {
+                var p = result.Project;
+                var assumed = p.Parts.Count(x => x.FootprintAssumed);
+                context.Err.WriteLine($"imported {p.Parts.Count} parts, {p.Nets.Count} nets, {p.Footprints.Count} footprints" +
+                    (assumed > 0 ? $" ({assumed} assumed: see the warnings)" : "") + $"; wrote {outFile.FullName}");
+                var hv = p.Nets.Where(n => n.Class == Model.NetClass.Hv).Select(n => n.Name).ToList();
+                if (hv.Count > 0)
+                    context.Err.WriteLine($"caution: high voltage on {string.Join(", ", hv)}. Filter capacitors hold a lethal charge after switch-off: discharge and measure before touching. Mains wiring follows local codes and licensed practice.");
+            }
+            return ExitCodes.Success;
         }));
         return command;
+    }
+
+    private static byte[] ReadNetlist(FileInfo file)
+    {
+        try
+        {
+            return File.ReadAllBytes(file.FullName);
+        }
+        catch (FileNotFoundException)
+        {
+            throw new IO.InputException(file.ToString(), "no such netlist file.");
+        }
+        catch (DirectoryNotFoundException)
+        {
+            throw new IO.InputException(file.ToString(), "no such netlist file (its folder does not exist).");
+        }
     }
 }

@@ -1,0 +1,61 @@
+using System.Text.Json;
+using PadPlan.IO;
+using PadPlan.Model;
+using PadPlan.ProjectFiles;
+
+namespace PadPlan.Import;
+
+/// <summary>Reads one footprint library file (format "padplan-footprints/1": one family, a list of footprints).</summary>
+public static class FootprintFileReader
+{
+    public const string FormatTag = "padplan-footprints/1";
+
+    /// <summary>The footprints of a file, each with its JSON path for later messages.</summary>
+    public static IReadOnlyList<(Footprint Footprint, string Path)> Read(string file)
+    {
+        byte[] bytes;
+        try
+        {
+            bytes = File.ReadAllBytes(file);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new InputException(file, $"cannot read the footprint file: {e.Message}");
+        }
+        return Parse(bytes, file);
+    }
+
+    public static IReadOnlyList<(Footprint Footprint, string Path)> Parse(byte[] bytes, string file)
+    {
+        FootprintFileDto? dto;
+        try
+        {
+            dto = JsonSerializer.Deserialize(bytes, ProjectJsonContext.Default.FootprintFileDto);
+        }
+        catch (JsonException e)
+        {
+            throw new InputException(file, $"not a readable footprint file: {FirstSentence(e.Message)}", (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1, e.Path, e);
+        }
+        var reader = new DtoReader(file, bytes);
+        if (dto is null) throw new InputException(file, "the file holds JSON null, not footprints.", 1);
+        if (dto.Format != FormatTag)
+            throw reader.Fail("$.format", $"a footprint file starts with \"format\": \"{FormatTag}\" (found {(dto.Format is null ? "nothing" : $"\"{dto.Format}\"")}).");
+        var family = reader.Need(dto.Family, "$.family", "family name (e.g. \"resistors\")");
+        var list = reader.Need(dto.Footprints, "$.footprints", "footprint list");
+        return list.Select((f, i) => (reader.Footprint(f, $"$.footprints[{i}]", family), $"$.footprints[{i}]")).ToList();
+    }
+
+    internal static InputException Fail(string file, string path, string message)
+    {
+        byte[] bytes;
+        try { bytes = File.ReadAllBytes(file); } catch (IOException) { bytes = []; }
+        return new InputException(file, message, JsonLineLocator.LineOf(bytes, path), jsonPath: path);
+    }
+
+    /// <summary>A System.Text.Json message without its trailing path and position, which the caller reports itself.</summary>
+    internal static string FirstSentence(string message)
+    {
+        var cut = message.IndexOf(" Path:", StringComparison.Ordinal);
+        return cut > 0 ? message[..cut] : message;
+    }
+}

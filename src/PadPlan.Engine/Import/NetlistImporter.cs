@@ -1,0 +1,58 @@
+using PadPlan.IO;
+
+namespace PadPlan.Import;
+
+/// <summary>Reads a netlist file in either format (told apart by content, then by extension) and builds a project from it.</summary>
+public static class NetlistImporter
+{
+    public enum Format { Ppn, Spice }
+
+    public static ImportResult ImportFile(string path, ImportOptions options)
+    {
+        byte[] bytes;
+        try
+        {
+            bytes = File.ReadAllBytes(path);
+        }
+        catch (FileNotFoundException)
+        {
+            throw new InputException(path, "no such netlist file.");
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new InputException(path, $"cannot read the netlist: {e.Message}");
+        }
+        return Import(bytes, path, options);
+    }
+
+    public static ImportResult Import(byte[] bytes, string file, ImportOptions options) => ProjectBuilder.Build(Read(bytes, file), options);
+
+    public static Netlist Read(byte[] bytes, string file)
+    {
+        var lines = NetlistText.Lines(bytes, file);
+        return Detect(lines, file) == Format.Ppn ? PpnReader.Read(lines, file) : SpiceReader.Read(lines, file);
+    }
+
+    /// <summary>SPICE marks itself with dot commands, '*' comments and '+' continuations; the own format with '#' comments, net/board/title lines and PIN=NET words. The extension decides a tie.</summary>
+    public static Format Detect(string[] lines, string file)
+    {
+        int spice = 0, ppn = 0;
+        foreach (var raw in lines.Skip(1).Take(400))
+        {
+            var line = raw.TrimStart();
+            if (line.Length == 0) continue;
+            var lower = line.ToLowerInvariant();
+            if (line[0] is '.' or '*' or '+') spice++;
+            else if (line[0] == '#' || lower.StartsWith("net ", StringComparison.Ordinal) || lower.StartsWith("board ", StringComparison.Ordinal) || lower.StartsWith("title ", StringComparison.Ordinal)) ppn++;
+            else if (line.Split([' ', '\t'], StringSplitOptions.RemoveEmptyEntries).Skip(1).Any(w => w.Length > 2 && w.IndexOf('=') is > 0 and var at && at < w.Length - 1 && !w.Contains('('))
+                     && !line.Contains('(')) ppn++;
+        }
+        var first = lines.Length > 0 ? lines[0].TrimStart().ToLowerInvariant() : "";
+        if (first.StartsWith('#') || first.StartsWith("title ", StringComparison.Ordinal) || first.StartsWith("net ", StringComparison.Ordinal) || first.StartsWith("board ", StringComparison.Ordinal)) ppn += 2;
+        if (spice != ppn) return spice > ppn ? Format.Spice : Format.Ppn;
+        var ext = Path.GetExtension(file).ToLowerInvariant();
+        if (ext == PpnReader.Extension) return Format.Ppn;
+        if (SpiceReader.Extensions.Contains(ext)) return Format.Spice;
+        throw new InputException(file, "cannot tell whether this is a PadPlan netlist or a SPICE netlist. Name it *.ppn (PadPlan) or *.cir (SPICE).", 1);
+    }
+}
