@@ -101,7 +101,7 @@ public static class ProjectBuilder
     {
         PartKind.Subcircuit when !part.Positional => $"{part.Ref}: no footprint given, so the generic {footprint} is assumed, its pins taken as lead numbers. Name the footprint after the value (see 'padplan footprints').",
         PartKind.Subcircuit => $"{part.Ref}: {part.Model ?? "this part"} has no known footprint, so the generic {footprint} is assumed, pins in call order on leads 1, 2, 3... Add \"{part.Model ?? part.Ref}\": {{\"footprint\": \"...\", \"pins\": {{...}}}} under \"values\" in a parts map (--parts).",
-        PartKind.Transformer => $"{part.Ref}: coupled windings ({part.Value}) are put on {footprint}; the core size is a guess. Add \"{part.Model}\" (the K line) or \"{part.Ref}\" with the right toroid to a parts map.",
+        PartKind.Transformer => $"{part.Ref}: coupled windings ({part.Value}) are put on {footprint}; the core size is a guess. In a parts map, add \"{part.Model}\" (the K line) under \"values\", or \"{part.Ref}\" under \"parts\", with the right toroid.",
         _ => $"{part.Ref}: value {part.Value} is not known, so {footprint} is assumed; name the footprint in a parts map.",
     };
 
