@@ -59,4 +59,38 @@ public sealed class MaterialsCliTests
         Assert.Equal(2, r.ExitCode);
         Assert.Contains("padplan place", r.Err);
     }
+
+    [Fact]
+    public void Bom_prints_the_bom_and_with_build_order_the_steps_and_writes_csv_beside()
+    {
+        var dir = TestPaths.NewTempDir();
+        var csv = Path.Combine(dir, "parts.csv");
+        var r = CliRunner.Run("bom", TestPaths.TinyBuffer, "--build-order", "--csv", csv);
+        Assert.Equal(0, r.ExitCode);
+        Assert.Contains("Bill of materials", r.Out);
+        Assert.Contains("Build order", r.Out);
+        Assert.StartsWith("Qty,Part,Value,Code,Series,Footprint,References\r\n", File.ReadAllText(csv));
+        Assert.StartsWith("Step,Do,What,Where,Note\r\n", File.ReadAllText(Path.Combine(dir, "parts-build-order.csv")));
+        var plain = CliRunner.Run("bom", TestPaths.TinyBuffer);
+        Assert.DoesNotContain("Build order", plain.Out);
+    }
+
+    [Fact]
+    public void Testplan_prints_the_sheet_and_rejects_a_bad_threshold()
+    {
+        var r = CliRunner.Run("testplan", TestPaths.TinyBuffer);
+        Assert.Equal(0, r.ExitCode);
+        Assert.Contains("Continuity test plan", r.Out);
+        Assert.Contains("Paths through parts", r.Out);
+        var bad = CliRunner.Run("testplan", TestPaths.TinyBuffer, "--beep-below", "-3");
+        Assert.Equal(2, bad.ExitCode);
+        Assert.Contains("--beep-below", bad.Err);
+    }
+
+    [Fact]
+    public void Output_is_the_same_bytes_on_every_run()
+    {
+        foreach (var command in new[] { "cutlist", "bom", "testplan" })
+            Assert.Equal(CliRunner.Run(command, TestPaths.TinyBuffer).Out, CliRunner.Run(command, TestPaths.TinyBuffer).Out);
+    }
 }

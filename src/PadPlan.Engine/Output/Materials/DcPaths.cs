@@ -165,7 +165,7 @@ public sealed class DcPaths
             var at = members.Select((g, i) => (g, i)).ToDictionary(x => x.g, x => x.i);
             var n = members.Count - 1; // member 0 is held at 0 V
             var g = new double[n, n];
-            foreach (var e in edges.Where(e => e.Ohms > 0))
+            foreach (var e in edges.Where(e => e.Ohms > 0 && at.ContainsKey(Find(e.A))))
             {
                 int a = at[Find(e.A)] - 1, b = at[Find(e.B)] - 1;
                 if (a == b) continue;

@@ -61,25 +61,32 @@ public static class PartKinds
         _ => kind.ToString().ToLowerInvariant(),
     };
 
-    /// <summary>Orders references as a builder reads them: R2 before R10.</summary>
+    /// <summary>Orders references as a builder reads them: R2 before R10, U1.2 before U1.10 (runs of digits compare as numbers).</summary>
     public static int CompareRefs(string? a, string? b)
     {
         if (a is null || b is null) return string.CompareOrdinal(a, b);
-        var (pa, na, ra) = Split(a);
-        var (pb, nb, rb) = Split(b);
-        var c = string.CompareOrdinal(pa, pb);
-        if (c != 0) return c;
-        c = na.CompareTo(nb);
-        return c != 0 ? c : string.CompareOrdinal(ra, rb);
+        int i = 0, j = 0;
+        while (i < a.Length && j < b.Length)
+        {
+            if (char.IsAsciiDigit(a[i]) && char.IsAsciiDigit(b[j]))
+            {
+                var (si, sj) = (i, j);
+                while (i < a.Length && char.IsAsciiDigit(a[i])) i++;
+                while (j < b.Length && char.IsAsciiDigit(b[j])) j++;
+                var (x, y) = (a[si..i].TrimStart('0'), b[sj..j].TrimStart('0'));
+                var c = x.Length != y.Length ? x.Length.CompareTo(y.Length) : string.CompareOrdinal(x, y);
+                if (c != 0) return c;
+            }
+            else
+            {
+                if (a[i] != b[j]) return a[i].CompareTo(b[j]);
+                i++;
+                j++;
+            }
+        }
+        var rest = (a.Length - i).CompareTo(b.Length - j);
+        return rest != 0 ? rest : string.CompareOrdinal(a, b);
     }
 
     public static IComparer<string> RefOrder { get; } = Comparer<string>.Create(CompareRefs);
-
-    private static (string Prefix, long Number, string Tail) Split(string reference)
-    {
-        var letters = new string(reference.TakeWhile(c => !char.IsAsciiDigit(c)).ToArray());
-        var digits = new string(reference.Skip(letters.Length).TakeWhile(char.IsAsciiDigit).ToArray());
-        var number = digits.Length is > 0 and < 18 ? long.Parse(digits, System.Globalization.CultureInfo.InvariantCulture) : -1;
-        return (letters, number, reference[(letters.Length + digits.Length)..]);
-    }
 }

@@ -74,7 +74,11 @@ public static class TestPlan
         "Paths through parts (these read low on a sound board)",
         ["Net A", "Net B", "Reads", "Through", "Note"],
         paths.Paths.Select(p => new[] { p.NetA, p.NetB, ReadingText(p), p.Through, p.Note }),
-        [$"Worked out from the netlist: windings, beads and fuses about 0 Ω; resistor networks as the meter sees them (series and parallel); threshold {Mm.Of(paths.Threshold)} Ω. '{DcPaths.Plane}' is ground."]);
+        [
+            paths.Paths.Count == 0
+                ? "No part makes a path that reads low: every 'apart' test must be silent."
+                : $"Worked out from the netlist: windings, beads and fuses about 0 Ω; resistor networks as the meter sees them (series and parallel); threshold {Mm.Of(paths.Threshold)} Ω. '{DcPaths.Plane}' is ground.",
+        ]);
 
     private static string Expect(DcPaths paths, string? a, string b)
     {
