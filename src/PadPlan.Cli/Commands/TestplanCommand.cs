@@ -1,5 +1,5 @@
 using System.CommandLine;
-using PadPlan.ProjectFiles;
+using PadPlan.Output.Materials;
 
 namespace PadPlan.Cli.Commands;
 
@@ -9,13 +9,23 @@ public static class TestplanCommand
     public static Command Create(CommandContext context)
     {
         var project = SharedOptions.ProjectArgument();
-        var command = new Command("testplan", "Write a continuity test sheet for checking the finished board.") { project };
+        var csv = SharedOptions.CsvOption();
+        var threshold = new Option<double>("--beep-below")
+        {
+            Description = "Resistance below which your continuity beeper sounds, in ohms.",
+            DefaultValueFactory = _ => DcPaths.DefaultThreshold,
+        };
+        var command = new Command("testplan", "Write a continuity test sheet for checking the finished board.") { project, csv, threshold };
         command.SetAction(parse => context.Guarded(() =>
         {
-            var file = parse.GetValue(project)!;
-            ProjectFile.Read(file.FullName);
-            context.Err.WriteLine("padplan testplan: this step is not built yet.");
-            return ExitCodes.InputError;
+            var placed = TableOutput.ReadPlaced(parse.GetValue(project)!);
+            var ohms = parse.GetValue(threshold);
+            if (!(ohms > 0) || !double.IsFinite(ohms)) throw new UsageException($"--beep-below {ohms}: give your beeper's threshold in ohms, more than 0 (often 30 to 50).");
+            var tables = TestPlan.Tables(placed, ohms);
+            TableOutput.Print(context, tables);
+            var csvFile = parse.GetValue(csv);
+            if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, [("tests", tables[0]), ("paths", tables[1])]);
+            return ExitCodes.Success;
         }));
         return command;
     }

@@ -1,0 +1,40 @@
+using PadPlan.IO;
+using PadPlan.Model;
+using PadPlan.Output.Tables;
+using PadPlan.ProjectFiles;
+
+namespace PadPlan.Cli.Commands;
+
+/// <summary>Shared steps of the table commands (cutlist, bom, testplan): read a project, print tables, write CSV files.</summary>
+public static class TableOutput
+{
+    /// <summary>Reads a project that must already hold a layout.</summary>
+    public static Project ReadPlaced(FileInfo file)
+    {
+        var project = ProjectFile.Read(file.FullName);
+        if (project.Layout is null || project.Layout.Pads.Count == 0)
+            throw new InputException(file.FullName, "the project has no layout (no pads) yet. Run 'padplan place' on it first, or add a layout by hand.");
+        return project;
+    }
+
+    /// <summary>Prints the tables as text to standard output, a blank line between them.</summary>
+    public static void Print(CommandContext context, IEnumerable<ReportTable> tables) =>
+        context.Out.Write(string.Join("\n", tables.Select(TableText.ToText)));
+
+    /// <summary>
+    /// Writes each table as CSV: the first to the file named, the others beside it with the table's name added
+    /// ("bom.csv", "bom-build-order.csv"), so each file is one plain table a spreadsheet opens.
+    /// </summary>
+    public static void WriteCsv(CommandContext context, FileInfo file, IReadOnlyList<(string Suffix, ReportTable Table)> tables)
+    {
+        var dir = file.DirectoryName ?? ".";
+        var stem = Path.GetFileNameWithoutExtension(file.Name);
+        var ext = file.Extension.Length > 0 ? file.Extension : ".csv";
+        for (var i = 0; i < tables.Count; i++)
+        {
+            var path = i == 0 ? file.FullName : Path.Combine(dir, $"{stem}-{tables[i].Suffix}{ext}");
+            AtomicFile.WriteAllText(path, TableText.ToCsv(tables[i].Table));
+            context.Err.WriteLine($"wrote {path}");
+        }
+    }
+}

@@ -1,0 +1,45 @@
+using PadPlan.Model;
+using PadPlan.Model.Values;
+using PadPlan.Output.Tables;
+
+namespace PadPlan.Output.Materials;
+
+/// <summary>The bill of materials: parts grouped by kind, normalised value and footprint, with quantities and references.</summary>
+public static class BomTable
+{
+    public static ReportTable From(Project project)
+    {
+        var lines = project.Parts
+            .Select(p => (Part: p, Kind: PartKinds.Of(p, project.FindFootprint(p.Footprint))))
+            .Select(x => (x.Part, x.Kind, Value: PartValue.Read(x.Part, x.Kind)))
+            .GroupBy(x => (x.Kind, Key: x.Value is { } v ? Key(v) : x.Part.Value.Trim().ToLowerInvariant(), Footprint: x.Part.Footprint.ToLowerInvariant()))
+            .OrderBy(g => g.Key.Kind).ThenBy(g => g.First().Value?.Number ?? double.MaxValue).ThenBy(g => g.Key.Key, StringComparer.Ordinal).ThenBy(g => g.Key.Footprint, StringComparer.Ordinal)
+            .Select(g =>
+            {
+                var first = g.First();
+                var series = first.Value is { } v && PartKinds.HasSeriesValue(g.Key.Kind) ? SeriesText(v.Number) : "";
+                var code = first.Value is { } c && PartKinds.HasSeriesValue(g.Key.Kind) ? c.ToIecCode() : "";
+                var refs = g.Select(x => x.Part.Ref).Order(PartKinds.RefOrder);
+                return new[]
+                {
+                    g.Count().ToString(), PartKinds.Name(g.Key.Kind), PartValue.Display(first.Part, first.Kind), code, series,
+                    first.Part.Footprint, string.Join(" ", refs),
+                };
+            })
+            .ToList();
+        return ReportTable.Create(
+            "Bill of materials",
+            ["Qty", "Part", "Value", "Code", "Series", "Footprint", "References"],
+            lines,
+            [
+                $"{project.Parts.Count} parts in {lines.Count} lines.",
+                "Values normalised; Code is the IEC 60062 letter-and-digit code; Series is the smallest IEC 60063 series (E12, E24) holding the value, or 'off E24'.",
+            ]);
+    }
+
+    // Values equal to 9 significant digits are the same value, however they were written (4k7, 4.7k, 4700).
+    private static string Key(ComponentValue value) =>
+        value.Number.ToString("G9", System.Globalization.CultureInfo.InvariantCulture) + value.Unit;
+
+    private static string SeriesText(double number) => ESeries.SeriesOf(number) is { Length: > 0 } s ? s : "off E24";
+}

@@ -1,0 +1,9 @@
+using PadPlan.Model;
+
+namespace PadPlan.Planning.Cutting;
+
+/// <summary>Round pads of one punch diameter and one stock thickness.</summary>
+public sealed record PunchGroup(double Diameter, double Thickness, ValueList<string> Pads)
+{
+    public int Count => Pads.Count;
+}
