@@ -1,3 +1,4 @@
+using PadPlan.Output.Materials;
 using PadPlan.Rules;
 using System.CommandLine;
 using System.Globalization;
@@ -35,7 +36,7 @@ public static class SheetsCommand
             var plan = ProjectFile.Read(file.FullName);
             if (SheetBook.Problem(plan) is { } problem) throw new InputException(file.FullName, problem);
             var check = Checker.Check(plan);
-            var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate), check, tables: Array.Empty<ReportTable>());
+            var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate), check, MaterialsTables.All(plan));
             var dir = parse.GetValue(output)!.FullName;
             Directory.CreateDirectory(dir);
             foreach (var sheetFile in SheetFiles.Render(book, chosenFormats, resolution))
