@@ -17,7 +17,7 @@ internal sealed partial class AnnealState
         var lead = _leads[l];
         var island = _islands[s];
         return Landing.Find(_exX[l], _exY[l], _ouX[l], _ouY[l], island.Round, _isX[s], _isY[s], _isHW[s], _isHH[s],
-            lead.Diameter, lead.MinReach, lead.MaxReach, out ax, out ay, out violation);
+            lead.Diameter + 2 * _slack, lead.MinReach, lead.MaxReach - _slack, out ax, out ay, out violation);
     }
 
     /// <summary>Cost of one net: weighted lead lengths to the islands they are given (nearest first, within capacity) and the jumpers joining its islands.</summary>
@@ -133,10 +133,12 @@ internal sealed partial class AnnealState
         {
             viol += Geometry.OutsideRegion(_gX[l], _gY[l], _gX[l], _gY[l], in r);
             cost += _leads[l].GroundReach[GroundChoice[l]] * _w.GroundLead;
+            // Within one part the strips and pins are fixed geometry: no annealing slack, only the rule itself.
+            var need = _groundNeed - _slack;
             foreach (var s in item.Islands)
             {
                 var d = Geometry.PointToIsland(_gX[l], _gY[l], _islands[s].Round, _isX[s], _isY[s], _isHW[s], _isHH[s]);
-                if (d < _groundNeed) viol += _groundNeed - d;
+                if (d < need) viol += need - d;
             }
         }
         var keepouts = _p.Keepouts;
@@ -196,7 +198,7 @@ internal sealed partial class AnnealState
         var b = _items[j];
         var v = 0.0;
         if (a.HasBody && b.HasBody)
-            v += Geometry.BoxIntrusion(_bMinX[i], _bMinY[i], _bMaxX[i], _bMaxY[i], _bMinX[j], _bMinY[j], _bMaxX[j], _bMaxY[j], PlacerLimits.BodyGap);
+            v += Geometry.BoxIntrusion(_bMinX[i], _bMinY[i], _bMaxX[i], _bMaxY[i], _bMinX[j], _bMinY[j], _bMaxX[j], _bMaxY[j], _bodyNeed);
         foreach (var s in a.Islands)
         {
             var sa = _islands[s];

@@ -23,4 +23,17 @@ internal sealed partial class AnnealState
         }
         return found.OrderByDescending(f => f.V).Select(f => f.Text);
     }
+
+    /// <summary>Total length of all leads as they land now (mm).</summary>
+    public double LeadTotal()
+    {
+        var total = 0.0;
+        for (var l = 0; l < _leads.Length; l++)
+        {
+            var lead = _leads[l];
+            if (lead.Ground) total += lead.GroundReach[GroundChoice[l]];
+            else if (lead.OwnIsland < 0 && IslandOf(l) >= 0) total += Land(l, IslandOf(l), out _, out _, out _);
+        }
+        return total;
+    }
 }

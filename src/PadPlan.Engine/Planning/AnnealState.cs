@@ -10,8 +10,8 @@ internal sealed partial class AnnealState
     private readonly ProblemLead[] _leads;
     private readonly ProblemNet[] _nets;
     private readonly CostWeights _w;
-    private readonly double _padNeed, _groundNeed, _cull;
-    private readonly Region _inside;
+    private double _padNeed, _groundNeed, _bodyNeed, _slack, _cull;
+    private Region _inside;
 
     public readonly double[] X, Y;
     public readonly int[] Rot;
@@ -33,6 +33,23 @@ internal sealed partial class AnnealState
     public double Penalty { get; set; }
     public double Total => Cost + Penalty * Violation;
 
+    /// <summary>Extra room (mm) demanded on every gap and reach while annealing, so that the finished layout keeps the exact rules with a little to spare. Set it to 0 for the final check; call <see cref="Recompute"/> after changing it.</summary>
+    public double Slack
+    {
+        get => _slack;
+        set
+        {
+            _slack = value;
+            _padNeed = _p.Rules.PadGap + PlacerLimits.Safety + value;
+            _groundNeed = _p.Rules.GroundGap + PlacerLimits.Safety + value;
+            _bodyNeed = PlacerLimits.BodyGap + value;
+            _cull = Math.Max(Math.Max(_padNeed, _groundNeed), _bodyNeed) + 0.01;
+            var r = _p.Region;
+            var inset = PlacerLimits.Safety + value;
+            _inside = new Region(r.MinX + inset, r.MinY + inset, r.MaxX - inset, r.MaxY - inset);
+        }
+    }
+
     public AnnealState(PlacementProblem problem)
     {
         _p = problem;
@@ -41,11 +58,7 @@ internal sealed partial class AnnealState
         _leads = problem.Leads;
         _nets = problem.Nets;
         _w = problem.Weights;
-        _padNeed = problem.Rules.PadGap + PlacerLimits.Safety;
-        _groundNeed = problem.Rules.GroundGap + PlacerLimits.Safety;
-        _cull = Math.Max(Math.Max(_padNeed, _groundNeed), PlacerLimits.BodyGap) + 0.01;
-        var r = problem.Region;
-        _inside = new Region(r.MinX + PlacerLimits.Safety, r.MinY + PlacerLimits.Safety, r.MaxX - PlacerLimits.Safety, r.MaxY - PlacerLimits.Safety);
+        Slack = 0;
         var n = _items.Length;
         X = new double[n]; Y = new double[n]; Rot = new int[n];
         GroundChoice = new int[_leads.Length];

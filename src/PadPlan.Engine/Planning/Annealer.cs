@@ -20,7 +20,7 @@ internal sealed class Annealer
         _pads = [.. items.Where(i => !i.Fixed && !i.IsPart).Select(i => i.Index)];
         _grounded = [.. _parts.Where(i => items[i].GroundLeads.Length > 0)];
         var table = new List<(MoveKind, double)>();
-        if (_parts.Length > 0) table.AddRange([(MoveKind.ShiftPart, 0.35), (MoveKind.TurnPart, 0.08)]);
+        if (_parts.Length > 0) table.AddRange([(MoveKind.ShiftPart, 0.3), (MoveKind.TurnPart, 0.08), (MoveKind.PartToPads, 0.1)]);
         if (_parts.Length > 1) table.Add((MoveKind.SwapParts, 0.07));
         if (_pads.Length > 0) table.AddRange([(MoveKind.ShiftPad, 0.3), (MoveKind.PadToLeads, 0.1)]);
         if (_grounded.Length > 0) table.Add((MoveKind.GroundLanding, 0.1));
@@ -58,6 +58,8 @@ internal sealed class Annealer
         if (!HasMoves) return;
         var w = _s.Problem.Weights;
         _s.Penalty = w.PenaltyStart;
+        _s.Slack = PlacerLimits.AnnealSlack;
+        _s.Recompute();
         var movable = _parts.Length + _pads.Length;
         var perTemperature = (int)Math.Max(100, movesFactor * Math.Pow(movable, 4.0 / 3.0));
         var region = _s.Problem.Region;
@@ -73,7 +75,16 @@ internal sealed class Annealer
             _s.Penalty = Math.Min(w.PenaltyEnd, _s.Penalty * w.PenaltyGrowth);
             report?.Invoke(schedule.Step, _s.Total, _s.Violation);
         }
-        _s.Penalty = w.PenaltyEnd;
+        // Clean-up: while rules are still broken, keep the last temperature and double the penalty, so the layout can
+        // still climb out of the last overlaps instead of freezing with them.
+        for (var extra = 0; extra < PlacerLimits.CleanupSteps && _s.Violation > 1e-9; extra++)
+        {
+            _s.Penalty = Math.Min(w.PenaltyEnd * 64, _s.Penalty * 2);
+            for (var k = 0; k < perTemperature; k++) TryMove(schedule.Temperature, Math.Max(schedule.Range, 2.0));
+            _s.Recompute();
+            report?.Invoke(schedule.Step + extra + 1, _s.Total, _s.Violation);
+        }
+        _s.Penalty = Math.Max(_s.Penalty, w.PenaltyEnd);
         _s.Recompute();
         for (var k = 0; k < 2 * perTemperature; k++) TryMove(0, PlacerLimits.MinRange * 2);
         _s.Recompute();
@@ -148,6 +159,16 @@ internal sealed class Annealer
                 _s.Y[i] = Math.Clamp(y + _rng.Between(-jitter, jitter), r.MinY, r.MaxY);
                 break;
             }
+            case MoveKind.PartToPads:
+            {
+                var i = _parts[_rng.Next(_parts.Length)];
+                var (x, y) = PadCentre(i);
+                _s.Begin(i);
+                var jitter = Math.Min(range, 2.0);
+                _s.X[i] = Math.Clamp(x + _rng.Between(-jitter, jitter), r.MinX, r.MaxX);
+                _s.Y[i] = Math.Clamp(y + _rng.Between(-jitter, jitter), r.MinY, r.MaxY);
+                break;
+            }
             case MoveKind.SwapParts:
             {
                 var ia = _rng.Next(_parts.Length);
@@ -171,6 +192,25 @@ internal sealed class Annealer
         }
         _s.Evaluate();
         return _s.DeltaCost + _s.Penalty * _s.DeltaViolation;
+    }
+
+    /// <summary>Where a part would sit if each of its free leads' exits lay on the island it lands on, averaged; its position when it has none.</summary>
+    private (double X, double Y) PadCentre(int partItem)
+    {
+        var p = _s.Problem;
+        double sx = 0, sy = 0;
+        var n = 0;
+        foreach (var l in p.Items[partItem].Leads)
+        {
+            var island = _s.IslandOf(l);
+            if (p.Leads[l].OwnIsland >= 0 || island < 0) continue;
+            var (ix, iy, _, _) = _s.IslandBox(island);
+            var (ex, ey) = _s.Exit(l);
+            sx += ix - (ex - _s.X[partItem]);
+            sy += iy - (ey - _s.Y[partItem]);
+            n++;
+        }
+        return n == 0 ? (_s.X[partItem], _s.Y[partItem]) : (sx / n, sy / n);
     }
 
     /// <summary>The middle of the lead exits a pad serves now (or of all its net's leads when it serves none).</summary>

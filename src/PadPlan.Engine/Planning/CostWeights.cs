@@ -15,9 +15,9 @@ internal sealed record CostWeights
     /// <summary>Pull of off-board wire landings toward the nearest edge, per mm.</summary>
     public double LandingEdge { get; init; } = 0.4;
     /// <summary>Weight of hard-rule violations at the start and end of annealing; it rises step by step.</summary>
-    public double PenaltyStart { get; init; } = 2.0;
+    public double PenaltyStart { get; init; } = 20.0;
     public double PenaltyEnd { get; init; } = 400.0;
-    public double PenaltyGrowth { get; init; } = 1.12;
+    public double PenaltyGrowth { get; init; } = 1.05;
 
     public static CostWeights Default { get; } = new();
 }

@@ -3,8 +3,8 @@ namespace PadPlan.Planning;
 /// <summary>The last step of a run: moves each item that still breaks a rule to the nearest spot (and turn, and ground landing) where it breaks none, then rounds coordinates to the written step and checks again.</summary>
 internal static class Legaliser
 {
-    private const double Step = 0.5;
-    private const int Rings = 24;
+    /// <summary>Grid steps (mm) and ring counts of the spot search: 4 mm around at 0.5 mm, then 15 mm around at 1.5 mm.</summary>
+    private static readonly (double Step, int Rings)[] Searches = [(0.5, 8), (1.5, 10)];
     private const int Passes = 6;
     private const double Clean = 1e-9;
 
@@ -12,6 +12,7 @@ internal static class Legaliser
     public static bool Finish(AnnealState s)
     {
         s.Penalty = 1e4;
+        s.Slack = 0;
         for (var attempt = 0; attempt < 3; attempt++)
         {
             Repair(s);
@@ -76,7 +77,7 @@ internal static class Legaliser
         }
     }
 
-    /// <summary>Searches square rings of grid spots around the item, nearest first, in every allowed turn; stops at the first ring that clears the item.</summary>
+    /// <summary>Searches square rings of spots around the item, nearest first and in every allowed turn: a fine grid close by, then a coarse one further out. Stops at the first ring that clears the item.</summary>
     private static void TryNearbySpots(AnnealState s, int i)
     {
         var item = s.Problem.Items[i];
@@ -85,27 +86,31 @@ internal static class Legaliser
         var own = s.ViolationOf(i);
         double bestV = 0, bestC = 0;
         (double X, double Y, int R)? best = null;
-        for (var ring = 0; ring <= Rings; ring++)
+        foreach (var (step, rings) in Searches)
         {
-            for (var dx = -ring; dx <= ring; dx++)
-                for (var dy = -ring; dy <= ring; dy++)
-                {
-                    if (Math.Max(Math.Abs(dx), Math.Abs(dy)) != ring) continue;
-                    for (var t = 0; t < turns; t++)
+            for (var ring = 0; ring <= rings; ring++)
+            {
+                for (var dx = -ring; dx <= ring; dx++)
+                    for (var dy = -ring; dy <= ring; dy++)
                     {
-                        var rot = (r0 + t) % (item.IsPart ? 4 : 2);
-                        if (ring == 0 && t == 0) continue;
-                        s.Begin(i);
-                        s.X[i] = x0 + dx * Step;
-                        s.Y[i] = y0 + dy * Step;
-                        s.Rot[i] = rot;
-                        s.Evaluate();
-                        if (Better(s.DeltaViolation, s.DeltaCost, bestV, bestC)) { best = (s.X[i], s.Y[i], rot); bestV = s.DeltaViolation; bestC = s.DeltaCost; }
-                        s.Rollback();
+                        if (Math.Max(Math.Abs(dx), Math.Abs(dy)) != ring) continue;
+                        for (var t = 0; t < turns; t++)
+                        {
+                            if (ring == 0 && t == 0) continue;
+                            var rot = (r0 + t) % (item.IsPart ? 4 : 2);
+                            s.Begin(i);
+                            s.X[i] = x0 + dx * step;
+                            s.Y[i] = y0 + dy * step;
+                            s.Rot[i] = rot;
+                            s.Evaluate();
+                            if (Better(s.DeltaViolation, s.DeltaCost, bestV, bestC)) { best = (s.X[i], s.Y[i], rot); bestV = s.DeltaViolation; bestC = s.DeltaCost; }
+                            s.Rollback();
+                        }
                     }
-                }
-            if (best is not null && bestV <= -own + Clean) break;
+                if (best is not null && bestV <= -own + Clean) goto found;
+            }
         }
+        found:
         if (best is null) return;
         s.Begin(i);
         (s.X[i], s.Y[i], s.Rot[i]) = best.Value;

@@ -5,6 +5,8 @@ internal static class PlacerLimits
 {
     /// <summary>Kept inside every hard limit so that rounding coordinates to 0.01 mm can never break a rule.</summary>
     public const double Safety = 0.03;
+    /// <summary>Extra room demanded on every gap and reach while annealing, dropped for the final check, so small leftovers of annealing are still legal.</summary>
+    public const double AnnealSlack = 0.4;
     /// <summary>Gap kept between part bodies so parts do not touch (common practice, no source).</summary>
     public const double BodyGap = 0.3;
     /// <summary>Coordinates written to the project are rounded to this step (mm).</summary>
@@ -23,6 +25,8 @@ internal static class PlacerLimits
     public const double StopFraction = 0.005;
     /// <summary>Safety stop on the number of temperature steps.</summary>
     public const int MaxSteps = 400;
+    /// <summary>Extra temperature steps at the final temperature while rules are still broken.</summary>
+    public const int CleanupSteps = 12;
     /// <summary>Smallest move range (mm).</summary>
     public const double MinRange = 0.5;
     /// <summary>Times the automatic board region may grow when a layout does not fit.</summary>

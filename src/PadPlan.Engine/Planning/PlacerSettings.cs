@@ -15,8 +15,8 @@ public sealed record PlacerSettings(int Seed = 1, Effort Effort = Effort.Normal,
     /// <summary>Scale of moves per temperature relative to the VPR default of N^(4/3).</summary>
     public double MovesFactor => Effort switch
     {
-        Effort.Quick => 0.3,
-        Effort.Thorough => 4.0,
-        _ => 1.0,
+        Effort.Quick => 0.5,
+        Effort.Thorough => 6.0,
+        _ => 2.0,
     };
 }

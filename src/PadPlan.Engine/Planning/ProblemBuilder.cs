@@ -71,7 +71,11 @@ internal static class ProblemBuilder
             var netLeads = leads.Select((l, i) => (l, i)).Where(x => x.l.Net == index).Select(x => x.i).ToArray();
             var spare = 0;
             foreach (var island in islands.Where(s => s.Net == index))
-                spare += island.Capacity - netLeads.Count(l => leads[l].OwnIsland >= 0 && islands[leads[l].OwnIsland] == island);
+            {
+                var room = island.Capacity - netLeads.Count(l => leads[l].OwnIsland >= 0 && islands[leads[l].OwnIsland] == island);
+                // A strip segment is counted for one extra lead only: crowding every lead of a net onto IC segments pins the IC down.
+                spare += items[island.Item].IsPart ? Math.Min(1, room) : room;
+            }
             var free = netLeads.Count(l => leads[l].OwnIsland < 0);
             foreach (var planned in PadPlanner.PlanNet(net.Net, free - spare, toolkit, rules))
             {
