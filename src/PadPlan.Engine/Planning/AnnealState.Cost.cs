@@ -1,0 +1,247 @@
+using PadPlan.Model;
+
+namespace PadPlan.Planning;
+
+internal sealed partial class AnnealState
+{
+    private readonly double[] _pairKey, _pairLen, _pairViol;
+    private readonly int[] _pairId;
+    private readonly int[] _use;
+    private readonly bool[] _taken;
+    private readonly double[] _mstDist;
+    private readonly bool[] _mstIn;
+
+    /// <summary>Lead length to an island for one lead, with its landing point and any broken reach limit.</summary>
+    public double Land(int l, int s, out double ax, out double ay, out double violation)
+    {
+        var lead = _leads[l];
+        var island = _islands[s];
+        return Landing.Find(_exX[l], _exY[l], _ouX[l], _ouY[l], island.Round, _isX[s], _isY[s], _isHW[s], _isHH[s],
+            lead.Diameter + 2 * _slack, lead.MinReach, lead.MaxReach - _slack, out ax, out ay, out violation);
+    }
+
+    /// <summary>Cost of one net: weighted lead lengths to the islands they are given (nearest first, within capacity) and the jumpers joining its islands.</summary>
+    private void EvalNet(int n, int[] assign, out double cost, out double viol)
+    {
+        var net = _nets[n];
+        var isl = net.Islands;
+        var count = isl.Length;
+        cost = 0;
+        viol = 0;
+        if (count == 0) { viol = 10 * net.Leads.Length; return; }
+        for (var k = 0; k < count; k++) _use[k] = 0;
+        foreach (var l in net.Leads)
+        {
+            var own = _leads[l].OwnIsland;
+            if (own < 0) continue;
+            var k = Array.IndexOf(isl, own);
+            if (k >= 0) _use[k]++;
+        }
+        var free = net.FreeLeads;
+        if (count == 1)
+        {
+            for (var a = 0; a < free.Length; a++)
+            {
+                var l = free[a];
+                var len = Land(l, isl[0], out _, out _, out var v);
+                cost += len * _w.Lead * _leads[l].Weight;
+                viol += v;
+                assign[l] = isl[0];
+                _use[0]++;
+            }
+        }
+        else
+        {
+            var m = 0;
+            for (var a = 0; a < free.Length; a++)
+            {
+                _taken[a] = false;
+                for (var k = 0; k < count; k++)
+                {
+                    var len = Land(free[a], isl[k], out _, out _, out var v);
+                    var id = a * count + k;
+                    _pairLen[id] = len;
+                    _pairViol[id] = v;
+                    _pairKey[m] = len + 1000 * v; // an island within reach always beats one out of reach
+                    _pairId[m] = id;
+                    m++;
+                }
+            }
+            _pairKey.AsSpan(0, m).Sort(_pairId.AsSpan(0, m));
+            var placed = 0;
+            for (var q = 0; q < m && placed < free.Length; q++)
+            {
+                var id = _pairId[q];
+                var a = id / count;
+                var k = id % count;
+                if (_taken[a] || _use[k] >= _islands[isl[k]].Capacity) continue;
+                _taken[a] = true;
+                _use[k]++;
+                placed++;
+                var l = free[a];
+                assign[l] = isl[k];
+                cost += _pairLen[id] * _w.Lead * _leads[l].Weight;
+                viol += _pairViol[id];
+            }
+            viol += 5.0 * (free.Length - placed);
+            cost += _w.Jumper * JumperLength(isl);
+        }
+        for (var k = 0; k < count; k++)
+        {
+            var over = _use[k] - _islands[isl[k]].Capacity;
+            if (over > 0) viol += 5.0 * over;
+        }
+    }
+
+    /// <summary>Length of the shortest tree of straight jumpers joining a net's islands, centre to centre (Prim).</summary>
+    private double JumperLength(int[] isl)
+    {
+        var count = isl.Length;
+        for (var k = 0; k < count; k++) { _mstIn[k] = false; _mstDist[k] = double.MaxValue; }
+        _mstDist[0] = 0;
+        var total = 0.0;
+        for (var step = 0; step < count; step++)
+        {
+            var best = -1;
+            for (var k = 0; k < count; k++)
+                if (!_mstIn[k] && (best < 0 || _mstDist[k] < _mstDist[best])) best = k;
+            _mstIn[best] = true;
+            total += _mstDist[best];
+            var s = isl[best];
+            for (var k = 0; k < count; k++)
+            {
+                if (_mstIn[k]) continue;
+                var t = isl[k];
+                var d = Math.Sqrt((_isX[s] - _isX[t]) * (_isX[s] - _isX[t]) + (_isY[s] - _isY[t]) * (_isY[s] - _isY[t]));
+                if (d < _mstDist[k]) _mstDist[k] = d;
+            }
+        }
+        return total;
+    }
+
+    /// <summary>Costs and violations of one item on its own: board edge, keep-outs, its ground leads, its pull to edges and to the middle.</summary>
+    private void EvalUnary(int i, out double cost, out double viol)
+    {
+        var item = _items[i];
+        cost = 0;
+        viol = 0;
+        ref readonly var r = ref _inside;
+        if (item.HasBody) viol += Geometry.OutsideRegion(_bMinX[i], _bMinY[i], _bMaxX[i], _bMaxY[i], in r);
+        foreach (var s in item.Islands)
+            viol += Geometry.OutsideRegion(_isX[s] - _isHW[s], _isY[s] - _isHH[s], _isX[s] + _isHW[s], _isY[s] + _isHH[s], in r);
+        foreach (var l in item.GroundLeads)
+        {
+            viol += Geometry.OutsideRegion(_gX[l], _gY[l], _gX[l], _gY[l], in r);
+            cost += _leads[l].GroundReach[GroundChoice[l]] * _w.GroundLead;
+            // Within one part the strips and pins are fixed geometry: no annealing slack, only the rule itself.
+            var need = _groundNeed - _slack;
+            foreach (var s in item.Islands)
+            {
+                var d = Geometry.PointToIsland(_gX[l], _gY[l], _islands[s].Round, _isX[s], _isY[s], _isHW[s], _isHH[s]);
+                if (d < need) viol += need - d;
+            }
+        }
+        var keepouts = _p.Keepouts;
+        for (var k = 0; k < keepouts.Count; k++) viol += KeepoutIntrusion(i, keepouts[k]);
+        if (item.IsLanding)
+        {
+            var edge = Math.Min(Math.Min(X[i] - _inside.MinX, _inside.MaxX - X[i]), Math.Min(Y[i] - _inside.MinY, _inside.MaxY - Y[i]));
+            cost += _w.LandingEdge * Math.Max(0, edge);
+        }
+        if (item.Flow < 0) cost += _w.Flow * (X[i] - _inside.MinX);
+        else if (item.Flow > 0) cost += _w.Flow * (_inside.MaxX - X[i]);
+        cost += _w.Gravity * (Math.Abs(X[i] - _inside.CentreX) + Math.Abs(Y[i] - _inside.CentreY));
+    }
+
+    private double KeepoutIntrusion(int i, Keepout keepout)
+    {
+        var item = _items[i];
+        var v = 0.0;
+        const double s = PlacerLimits.Safety;
+        switch (keepout)
+        {
+            case CircleKeepout c:
+                var rad = c.Diameter / 2 + s;
+                if (item.HasBody)
+                {
+                    var d = Geometry.PointToBox(c.Center.X, c.Center.Y, (_bMinX[i] + _bMaxX[i]) / 2, (_bMinY[i] + _bMaxY[i]) / 2, (_bMaxX[i] - _bMinX[i]) / 2, (_bMaxY[i] - _bMinY[i]) / 2);
+                    if (d < rad) v += rad - d;
+                }
+                foreach (var sI in item.Islands)
+                {
+                    var d = Geometry.PointToIsland(c.Center.X, c.Center.Y, _islands[sI].Round, _isX[sI], _isY[sI], _isHW[sI], _isHH[sI]);
+                    if (d < rad) v += rad - d;
+                }
+                foreach (var l in item.GroundLeads)
+                {
+                    var d = Math.Sqrt((_gX[l] - c.Center.X) * (_gX[l] - c.Center.X) + (_gY[l] - c.Center.Y) * (_gY[l] - c.Center.Y));
+                    if (d < rad) v += rad - d;
+                }
+                break;
+            case RectKeepout k:
+                var (kx0, ky0, kx1, ky1) = (k.Center.X - k.Width / 2, k.Center.Y - k.Height / 2, k.Center.X + k.Width / 2, k.Center.Y + k.Height / 2);
+                if (item.HasBody) v += Geometry.BoxIntrusion(_bMinX[i], _bMinY[i], _bMaxX[i], _bMaxY[i], kx0, ky0, kx1, ky1, s);
+                foreach (var sI in item.Islands)
+                    v += Geometry.BoxIntrusion(_isX[sI] - _isHW[sI], _isY[sI] - _isHH[sI], _isX[sI] + _isHW[sI], _isY[sI] + _isHH[sI], kx0, ky0, kx1, ky1, s);
+                foreach (var l in item.GroundLeads)
+                    v += Geometry.BoxIntrusion(_gX[l], _gY[l], _gX[l], _gY[l], kx0, ky0, kx1, ky1, s);
+                break;
+        }
+        return v;
+    }
+
+    /// <summary>Violations between two different items: bodies too close, islands closer than the pad gap, ground landings too close to an island.</summary>
+    private double Pair(int i, int j)
+    {
+        if (_eMinX[i] > _eMaxX[j] + _cull || _eMinX[j] > _eMaxX[i] + _cull || _eMinY[i] > _eMaxY[j] + _cull || _eMinY[j] > _eMaxY[i] + _cull) return 0;
+        var a = _items[i];
+        var b = _items[j];
+        var v = 0.0;
+        if (a.HasBody && b.HasBody)
+            v += Geometry.BoxIntrusion(_bMinX[i], _bMinY[i], _bMaxX[i], _bMaxY[i], _bMinX[j], _bMinY[j], _bMaxX[j], _bMaxY[j], _bodyNeed);
+        foreach (var s in a.Islands)
+        {
+            var sa = _islands[s];
+            foreach (var t in b.Islands)
+            {
+                var d = Geometry.IslandGap(sa.Round, _isX[s], _isY[s], _isHW[s], _isHH[s], _islands[t].Round, _isX[t], _isY[t], _isHW[t], _isHH[t]);
+                if (d < _padNeed) v += _padNeed - d;
+            }
+            foreach (var l in b.GroundLeads)
+            {
+                var d = Geometry.PointToIsland(_gX[l], _gY[l], sa.Round, _isX[s], _isY[s], _isHW[s], _isHH[s]);
+                if (d < _groundNeed) v += _groundNeed - d;
+            }
+        }
+        foreach (var l in a.GroundLeads)
+            foreach (var t in b.Islands)
+            {
+                var d = Geometry.PointToIsland(_gX[l], _gY[l], _islands[t].Round, _isX[t], _isY[t], _isHW[t], _isHH[t]);
+                if (d < _groundNeed) v += _groundNeed - d;
+            }
+        return v;
+    }
+
+    /// <summary>Pair violations between item a (and b, when two move together) and every other item.</summary>
+    private double PairsOf(int a, int b)
+    {
+        var v = 0.0;
+        for (var j = 0; j < _items.Length; j++)
+        {
+            if (j == a || j == b) continue;
+            v += Pair(a, j);
+            if (b >= 0) v += Pair(b, j);
+        }
+        if (b >= 0) v += Pair(a, b);
+        return v;
+    }
+
+    /// <summary>All violations an item takes part in: its own, its pairs, and the reach problems of its nets.</summary>
+    public double ViolationOf(int i)
+    {
+        EvalUnary(i, out _, out var v);
+        v += PairsOf(i, -1);
+        foreach (var n in _items[i].Nets) v += _netViol[n];
+        return v;
+    }
+}

@@ -1,0 +1,118 @@
+namespace PadPlan.Planning;
+
+internal sealed partial class AnnealState
+{
+    private readonly double[] _netCostNew, _netViolNew;
+    private readonly int[] _leadIslandNew;
+    private readonly int[] _netStamp;
+    private readonly int[] _affected;
+    private int _stamp, _affectedCount;
+
+    // the open transaction: at most two items and one ground choice change
+    private int _ta = -1, _tb = -1, _tLead = -1, _tOldChoice;
+    private double _oldXa, _oldYa, _oldXb, _oldYb;
+    private int _oldRa, _oldRb;
+    private double _beforeCost, _beforeViol, _uaCost, _uaViol, _ubCost, _ubViol;
+    public double DeltaCost { get; private set; }
+    public double DeltaViolation { get; private set; }
+
+    /// <summary>Opens a move of item a (and b, when two move together): remembers where they are and what their terms cost now.</summary>
+    public void Begin(int a, int b = -1)
+    {
+        _ta = a;
+        _tb = b;
+        _tLead = -1;
+        (_oldXa, _oldYa, _oldRa) = (X[a], Y[a], Rot[a]);
+        if (b >= 0) (_oldXb, _oldYb, _oldRb) = (X[b], Y[b], Rot[b]);
+        _stamp++;
+        _affectedCount = 0;
+        AddNets(a);
+        if (b >= 0) AddNets(b);
+        double cost = 0, viol = 0;
+        for (var k = 0; k < _affectedCount; k++)
+        {
+            cost += _netCost[_affected[k]];
+            viol += _netViol[_affected[k]];
+        }
+        cost += _unaryCost[a];
+        viol += _unaryViol[a];
+        if (b >= 0) { cost += _unaryCost[b]; viol += _unaryViol[b]; }
+        viol += PairsOf(a, b);
+        _beforeCost = cost;
+        _beforeViol = viol;
+    }
+
+    private void AddNets(int item)
+    {
+        foreach (var n in _items[item].Nets)
+        {
+            if (_netStamp[n] == _stamp) continue;
+            _netStamp[n] = _stamp;
+            _affected[_affectedCount++] = n;
+        }
+    }
+
+    /// <summary>Changes which ground landing one ground lead of the open move's part uses.</summary>
+    public void SetGroundChoice(int lead, int choice)
+    {
+        _tLead = lead;
+        _tOldChoice = GroundChoice[lead];
+        GroundChoice[lead] = choice;
+    }
+
+    /// <summary>Works out the cost change of the open move after positions were set; leaves the move applied.</summary>
+    public void Evaluate()
+    {
+        UpdateGeometry(_ta);
+        if (_tb >= 0) UpdateGeometry(_tb);
+        double cost = 0, viol = 0;
+        for (var k = 0; k < _affectedCount; k++)
+        {
+            var n = _affected[k];
+            EvalNet(n, _leadIslandNew, out _netCostNew[n], out _netViolNew[n]);
+            cost += _netCostNew[n];
+            viol += _netViolNew[n];
+        }
+        EvalUnary(_ta, out _uaCost, out _uaViol);
+        cost += _uaCost;
+        viol += _uaViol;
+        if (_tb >= 0)
+        {
+            EvalUnary(_tb, out _ubCost, out _ubViol);
+            cost += _ubCost;
+            viol += _ubViol;
+        }
+        viol += PairsOf(_ta, _tb);
+        DeltaCost = cost - _beforeCost;
+        DeltaViolation = viol - _beforeViol;
+    }
+
+    /// <summary>Keeps the evaluated move.</summary>
+    public void Commit()
+    {
+        for (var k = 0; k < _affectedCount; k++)
+        {
+            var n = _affected[k];
+            _netCost[n] = _netCostNew[n];
+            _netViol[n] = _netViolNew[n];
+            foreach (var l in _nets[n].FreeLeads) _leadIsland[l] = _leadIslandNew[l];
+        }
+        _unaryCost[_ta] = _uaCost;
+        _unaryViol[_ta] = _uaViol;
+        if (_tb >= 0) { _unaryCost[_tb] = _ubCost; _unaryViol[_tb] = _ubViol; }
+        Cost += DeltaCost;
+        Violation += DeltaViolation;
+        _ta = _tb = -1;
+    }
+
+    /// <summary>Puts everything back as it was before the open move.</summary>
+    public void Rollback()
+    {
+        (X[_ta], Y[_ta], Rot[_ta]) = (_oldXa, _oldYa, _oldRa);
+        if (_tb >= 0) (X[_tb], Y[_tb], Rot[_tb]) = (_oldXb, _oldYb, _oldRb);
+        if (_tLead >= 0) GroundChoice[_tLead] = _tOldChoice;
+        UpdateGeometry(_ta);
+        if (_tb >= 0) UpdateGeometry(_tb);
+        _ta = _tb = -1;
+    }
+}

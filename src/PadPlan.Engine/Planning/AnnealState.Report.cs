@@ -1,0 +1,39 @@
+using System.Globalization;
+
+namespace PadPlan.Planning;
+
+internal sealed partial class AnnealState
+{
+    /// <summary>The rules the current layout still breaks, in words, worst first.</summary>
+    public IEnumerable<string> Problems()
+    {
+        var found = new List<(double V, string Text)>();
+        for (var n = 0; n < _nets.Length; n++)
+            if (_netViol[n] > 1e-9)
+                found.Add((_netViol[n], string.Create(CultureInfo.InvariantCulture, $"net {_nets[n].Net.Name}: not every lead reaches a pad within its limit ({_nets[n].MaxLead:0.#} mm) or the pads are full")));
+        for (var i = 0; i < _items.Length; i++)
+        {
+            if (_unaryViol[i] > 1e-9)
+                found.Add((_unaryViol[i], $"{_items[i].Name}: outside the board margin, on a keep-out, or its ground lead is too close to its own strip"));
+            for (var j = i + 1; j < _items.Length; j++)
+            {
+                var v = Pair(i, j);
+                if (v > 1e-9) found.Add((v, $"{_items[i].Name} and {_items[j].Name} are closer than the rules allow"));
+            }
+        }
+        return found.OrderByDescending(f => f.V).Select(f => f.Text);
+    }
+
+    /// <summary>Total length of all leads as they land now (mm).</summary>
+    public double LeadTotal()
+    {
+        var total = 0.0;
+        for (var l = 0; l < _leads.Length; l++)
+        {
+            var lead = _leads[l];
+            if (lead.Ground) total += lead.GroundReach[GroundChoice[l]];
+            else if (lead.OwnIsland < 0 && IslandOf(l) >= 0) total += Land(l, IslandOf(l), out _, out _, out _);
+        }
+        return total;
+    }
+}

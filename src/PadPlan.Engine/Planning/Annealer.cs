@@ -1,0 +1,230 @@
+namespace PadPlan.Planning;
+
+/// <summary>One simulated-annealing run (Kirkpatrick, Gelatt and Vecchi, 1983) over part positions, turns, pad positions and ground landings, cooled by <see cref="AnnealSchedule"/>.</summary>
+internal sealed class Annealer
+{
+    private readonly AnnealState _s;
+    private readonly PlacerRandom _rng;
+    private readonly int[] _parts, _pads, _grounded;
+    private readonly MoveKind[] _kinds;
+    private readonly double[] _cumulative;
+
+    public MoveStats Stats { get; } = new();
+
+    public Annealer(AnnealState state, long seed)
+    {
+        _s = state;
+        _rng = new PlacerRandom(seed);
+        var items = state.Problem.Items;
+        _parts = [.. items.Where(i => !i.Fixed && i.IsPart).Select(i => i.Index)];
+        _pads = [.. items.Where(i => !i.Fixed && !i.IsPart).Select(i => i.Index)];
+        _grounded = [.. _parts.Where(i => items[i].GroundLeads.Length > 0)];
+        var table = new List<(MoveKind, double)>();
+        if (_parts.Length > 0) table.AddRange([(MoveKind.ShiftPart, 0.3), (MoveKind.TurnPart, 0.08), (MoveKind.PartToPads, 0.1)]);
+        if (_parts.Length > 1) table.Add((MoveKind.SwapParts, 0.07));
+        if (_pads.Length > 0) table.AddRange([(MoveKind.ShiftPad, 0.3), (MoveKind.PadToLeads, 0.1)]);
+        if (_grounded.Length > 0) table.Add((MoveKind.GroundLanding, 0.1));
+        _kinds = [.. table.Select(t => t.Item1)];
+        var sum = table.Sum(t => t.Item2);
+        var run = 0.0;
+        _cumulative = [.. table.Select(t => run += t.Item2 / sum)];
+    }
+
+    public bool HasMoves => _kinds.Length > 0;
+
+    /// <summary>Movable items scattered over the region; pads then sent to the middle of their nets' leads.</summary>
+    public void Scatter()
+    {
+        var r = _s.Problem.Region;
+        foreach (var i in _parts)
+        {
+            _s.X[i] = _rng.Between(r.MinX, r.MaxX);
+            _s.Y[i] = _rng.Between(r.MinY, r.MaxY);
+            _s.Rot[i] = _rng.Next(4);
+        }
+        _s.Recompute();
+        foreach (var i in _pads)
+        {
+            var (x, y) = LeadCentre(i);
+            _s.X[i] = Math.Clamp(x + _rng.Between(-2, 2), r.MinX, r.MaxX);
+            _s.Y[i] = Math.Clamp(y + _rng.Between(-2, 2), r.MinY, r.MaxY);
+        }
+        _s.Recompute();
+    }
+
+    /// <summary>Anneals to the end of the schedule, then quenches; reports after every temperature.</summary>
+    public void Run(double movesFactor, Action<int, double, double>? report)
+    {
+        if (!HasMoves) return;
+        var w = _s.Problem.Weights;
+        _s.Penalty = w.PenaltyStart;
+        _s.Slack = PlacerLimits.AnnealSlack;
+        _s.Recompute();
+        var movable = _parts.Length + _pads.Length;
+        var perTemperature = (int)Math.Max(100, movesFactor * Math.Pow(movable, 4.0 / 3.0));
+        var region = _s.Problem.Region;
+        var schedule = new AnnealSchedule(StartTemperature(perTemperature), Math.Max(region.Width, region.Height));
+        var nets = Math.Max(1, _s.Problem.Nets.Length + _grounded.Length);
+        while (!schedule.Done(_s.Total, nets))
+        {
+            var kept = 0;
+            for (var k = 0; k < perTemperature; k++)
+                if (TryMove(schedule.Temperature, schedule.Range)) kept++;
+            _s.Recompute();
+            schedule.Update((double)kept / perTemperature);
+            _s.Penalty = Math.Min(w.PenaltyEnd, _s.Penalty * w.PenaltyGrowth);
+            report?.Invoke(schedule.Step, _s.Total, _s.Violation);
+        }
+        // Clean-up: while rules are still broken, keep the last temperature and double the penalty, so the layout can
+        // still climb out of the last overlaps instead of freezing with them.
+        for (var extra = 0; extra < PlacerLimits.CleanupSteps && _s.Violation > 1e-9; extra++)
+        {
+            _s.Penalty = Math.Min(w.PenaltyEnd * 64, _s.Penalty * 2);
+            for (var k = 0; k < perTemperature; k++) TryMove(schedule.Temperature, Math.Max(schedule.Range, 2.0));
+            _s.Recompute();
+            report?.Invoke(schedule.Step + extra + 1, _s.Total, _s.Violation);
+        }
+        _s.Penalty = Math.Max(_s.Penalty, w.PenaltyEnd);
+        _s.Recompute();
+        for (var k = 0; k < 2 * perTemperature; k++) TryMove(0, PlacerLimits.MinRange * 2);
+        _s.Recompute();
+    }
+
+    /// <summary>VPR's start: a multiple of the spread of cost changes over random trial moves.</summary>
+    private double StartTemperature(int samples)
+    {
+        var region = _s.Problem.Region;
+        var range = Math.Max(region.Width, region.Height);
+        double sum = 0, sumSq = 0;
+        var n = Math.Min(samples, 2000);
+        for (var k = 0; k < n; k++)
+        {
+            var d = Propose(range, out _);
+            sum += d;
+            sumSq += d * d;
+            _s.Rollback();
+        }
+        var mean = sum / n;
+        var sigma = Math.Sqrt(Math.Max(0, sumSq / n - mean * mean));
+        return Math.Max(1e-3, PlacerLimits.StartTemperatureSigmas * sigma);
+    }
+
+    private bool TryMove(double temperature, double range)
+    {
+        var d = Propose(range, out var kind);
+        var keep = d <= 0 || (temperature > 0 && _rng.NextDouble() < Math.Exp(-d / temperature));
+        if (keep) _s.Commit();
+        else _s.Rollback();
+        Stats.Count(kind, keep);
+        return keep;
+    }
+
+    /// <summary>Makes one random move and returns its change of annealing cost; the move stays open for commit or rollback.</summary>
+    private double Propose(double range, out MoveKind kind)
+    {
+        var pick = _rng.NextDouble();
+        var k = 0;
+        while (k < _cumulative.Length - 1 && pick >= _cumulative[k]) k++;
+        kind = _kinds[k];
+        var r = _s.Problem.Region;
+        switch (kind)
+        {
+            case MoveKind.ShiftPart:
+            case MoveKind.ShiftPad:
+            {
+                var pool = kind == MoveKind.ShiftPart ? _parts : _pads;
+                var i = pool[_rng.Next(pool.Length)];
+                _s.Begin(i);
+                _s.X[i] = Math.Clamp(_s.X[i] + _rng.Between(-range, range), r.MinX, r.MaxX);
+                _s.Y[i] = Math.Clamp(_s.Y[i] + _rng.Between(-range, range), r.MinY, r.MaxY);
+                var item = _s.Problem.Items[i];
+                if (item.IsPart && _rng.NextDouble() < 0.15) _s.Rot[i] = _rng.Next(4);
+                else if (item.CanTurn && _rng.NextDouble() < 0.2) _s.Rot[i] ^= 1;
+                break;
+            }
+            case MoveKind.TurnPart:
+            {
+                var i = _parts[_rng.Next(_parts.Length)];
+                _s.Begin(i);
+                _s.Rot[i] = (_s.Rot[i] + 1 + _rng.Next(3)) & 3;
+                break;
+            }
+            case MoveKind.PadToLeads:
+            {
+                var i = _pads[_rng.Next(_pads.Length)];
+                var (x, y) = LeadCentre(i);
+                _s.Begin(i);
+                var jitter = Math.Min(range, 2.0);
+                _s.X[i] = Math.Clamp(x + _rng.Between(-jitter, jitter), r.MinX, r.MaxX);
+                _s.Y[i] = Math.Clamp(y + _rng.Between(-jitter, jitter), r.MinY, r.MaxY);
+                break;
+            }
+            case MoveKind.PartToPads:
+            {
+                var i = _parts[_rng.Next(_parts.Length)];
+                var (x, y) = PadCentre(i);
+                _s.Begin(i);
+                var jitter = Math.Min(range, 2.0);
+                _s.X[i] = Math.Clamp(x + _rng.Between(-jitter, jitter), r.MinX, r.MaxX);
+                _s.Y[i] = Math.Clamp(y + _rng.Between(-jitter, jitter), r.MinY, r.MaxY);
+                break;
+            }
+            case MoveKind.SwapParts:
+            {
+                var ia = _rng.Next(_parts.Length);
+                var ib = _rng.Next(_parts.Length - 1);
+                if (ib >= ia) ib++;
+                var (a, b) = (_parts[ia], _parts[ib]);
+                _s.Begin(a, b);
+                (_s.X[a], _s.X[b]) = (_s.X[b], _s.X[a]);
+                (_s.Y[a], _s.Y[b]) = (_s.Y[b], _s.Y[a]);
+                break;
+            }
+            default:
+            {
+                var i = _grounded[_rng.Next(_grounded.Length)];
+                var leads = _s.Problem.Items[i].GroundLeads;
+                var l = leads[_rng.Next(leads.Length)];
+                _s.Begin(i);
+                _s.SetGroundChoice(l, _rng.Next(_s.Problem.Leads[l].GroundX.Length));
+                break;
+            }
+        }
+        _s.Evaluate();
+        return _s.DeltaCost + _s.Penalty * _s.DeltaViolation;
+    }
+
+    /// <summary>Where a part would sit if each of its free leads' exits lay on the island it lands on, averaged; its position when it has none.</summary>
+    private (double X, double Y) PadCentre(int partItem)
+    {
+        var p = _s.Problem;
+        double sx = 0, sy = 0;
+        var n = 0;
+        foreach (var l in p.Items[partItem].Leads)
+        {
+            var island = _s.IslandOf(l);
+            if (p.Leads[l].OwnIsland >= 0 || island < 0) continue;
+            var (ix, iy, _, _) = _s.IslandBox(island);
+            var (ex, ey) = _s.Exit(l);
+            sx += ix - (ex - _s.X[partItem]);
+            sy += iy - (ey - _s.Y[partItem]);
+            n++;
+        }
+        return n == 0 ? (_s.X[partItem], _s.Y[partItem]) : (sx / n, sy / n);
+    }
+
+    /// <summary>The middle of the lead exits a pad serves now (or of all its net's leads when it serves none).</summary>
+    private (double X, double Y) LeadCentre(int padItem)
+    {
+        var p = _s.Problem;
+        var island = p.Items[padItem].Islands[0];
+        var net = p.Nets[p.Islands[island].Net];
+        double sx = 0, sy = 0;
+        var n = 0;
+        foreach (var l in net.Leads)
+            if (_s.IslandOf(l) == island) { var (x, y) = _s.Exit(l); sx += x; sy += y; n++; }
+        if (n == 0)
+            foreach (var l in net.Leads) { var (x, y) = _s.Exit(l); sx += x; sy += y; n++; }
+        return n == 0 ? (_s.X[padItem], _s.Y[padItem]) : (sx / n, sy / n);
+    }
+}

@@ -1,0 +1,23 @@
+namespace PadPlan.Planning;
+
+/// <summary>Weights of the placement cost terms, per millimetre. All defaults are judgement calls (common practice, no source).</summary>
+internal sealed record CostWeights
+{
+    public double Lead { get; init; } = 1.0;
+    /// <summary>RF leads count this many times over: each mm adds about 1 nH (DOMAIN 2).</summary>
+    public double RfFactor { get; init; } = 3.0;
+    public double Jumper { get; init; } = 1.5;
+    public double GroundLead { get; init; } = 1.0;
+    /// <summary>Pull of every item toward the middle of the region: keeps the used area small.</summary>
+    public double Gravity { get; init; } = 0.04;
+    /// <summary>Pull of input nets to the left edge and output nets to the right edge, per mm.</summary>
+    public double Flow { get; init; } = 0.4;
+    /// <summary>Pull of off-board wire landings toward the nearest edge, per mm.</summary>
+    public double LandingEdge { get; init; } = 0.4;
+    /// <summary>Weight of hard-rule violations at the start and end of annealing; it rises step by step.</summary>
+    public double PenaltyStart { get; init; } = 20.0;
+    public double PenaltyEnd { get; init; } = 400.0;
+    public double PenaltyGrowth { get; init; } = 1.05;
+
+    public static CostWeights Default { get; } = new();
+}

@@ -1,0 +1,123 @@
+namespace PadPlan.Planning;
+
+/// <summary>The last step of a run: moves each item that still breaks a rule to the nearest spot (and turn, and ground landing) where it breaks none, then rounds coordinates to the written step and checks again.</summary>
+internal static class Legaliser
+{
+    /// <summary>Grid steps (mm) and ring counts of the spot search: 4 mm around at 0.5 mm, then 15 mm around at 1.5 mm.</summary>
+    private static readonly (double Step, int Rings)[] Searches = [(0.5, 8), (1.5, 10)];
+    private const int Passes = 6;
+    private const double Clean = 1e-9;
+
+    /// <summary>Returns true when the layout breaks no rule after rounding.</summary>
+    public static bool Finish(AnnealState s)
+    {
+        s.Penalty = 1e4;
+        s.Slack = 0;
+        for (var attempt = 0; attempt < 3; attempt++)
+        {
+            Repair(s);
+            RoundPositions(s);
+            s.Recompute();
+            if (s.Violation <= Clean) return true;
+        }
+        return false;
+    }
+
+    private static void RoundPositions(AnnealState s)
+    {
+        var items = s.Problem.Items;
+        for (var i = 0; i < items.Length; i++)
+        {
+            if (items[i].Fixed) continue;
+            s.X[i] = Math.Round(s.X[i] / PlacerLimits.WriteStep) * PlacerLimits.WriteStep;
+            s.Y[i] = Math.Round(s.Y[i] / PlacerLimits.WriteStep) * PlacerLimits.WriteStep;
+        }
+    }
+
+    private static void Repair(AnnealState s)
+    {
+        var items = s.Problem.Items;
+        for (var pass = 0; pass < Passes; pass++)
+        {
+            s.Recompute();
+            if (s.Violation <= Clean) return;
+            var bad = Enumerable.Range(0, items.Length).Where(i => !items[i].Fixed)
+                .Select(i => (Item: i, V: s.ViolationOf(i))).Where(x => x.V > Clean)
+                .OrderByDescending(x => x.V).ThenBy(x => x.Item).Select(x => x.Item).ToList();
+            foreach (var i in bad)
+            {
+                if (s.ViolationOf(i) <= Clean) continue;
+                TryGroundLandings(s, i);
+                if (s.ViolationOf(i) <= Clean) continue;
+                TryNearbySpots(s, i);
+            }
+        }
+    }
+
+    private static void TryGroundLandings(AnnealState s, int i)
+    {
+        foreach (var l in s.Problem.Items[i].GroundLeads)
+        {
+            var best = -1;
+            double bestV = 0, bestC = 0;
+            var count = s.Problem.Leads[l].GroundX.Length;
+            for (var c = 0; c < count; c++)
+            {
+                s.Begin(i);
+                s.SetGroundChoice(l, c);
+                s.Evaluate();
+                if (Better(s.DeltaViolation, s.DeltaCost, bestV, bestC)) { best = c; bestV = s.DeltaViolation; bestC = s.DeltaCost; }
+                s.Rollback();
+            }
+            if (best < 0) continue;
+            s.Begin(i);
+            s.SetGroundChoice(l, best);
+            s.Evaluate();
+            s.Commit();
+        }
+    }
+
+    /// <summary>Searches square rings of spots around the item, nearest first and in every allowed turn: a fine grid close by, then a coarse one further out. Stops at the first ring that clears the item.</summary>
+    private static void TryNearbySpots(AnnealState s, int i)
+    {
+        var item = s.Problem.Items[i];
+        var turns = item.IsPart ? 4 : item.CanTurn ? 2 : 1;
+        var (x0, y0, r0) = (s.X[i], s.Y[i], s.Rot[i]);
+        var own = s.ViolationOf(i);
+        double bestV = 0, bestC = 0;
+        (double X, double Y, int R)? best = null;
+        foreach (var (step, rings) in Searches)
+        {
+            for (var ring = 0; ring <= rings; ring++)
+            {
+                for (var dx = -ring; dx <= ring; dx++)
+                    for (var dy = -ring; dy <= ring; dy++)
+                    {
+                        if (Math.Max(Math.Abs(dx), Math.Abs(dy)) != ring) continue;
+                        for (var t = 0; t < turns; t++)
+                        {
+                            if (ring == 0 && t == 0) continue;
+                            var rot = (r0 + t) % (item.IsPart ? 4 : 2);
+                            s.Begin(i);
+                            s.X[i] = x0 + dx * step;
+                            s.Y[i] = y0 + dy * step;
+                            s.Rot[i] = rot;
+                            s.Evaluate();
+                            if (Better(s.DeltaViolation, s.DeltaCost, bestV, bestC)) { best = (s.X[i], s.Y[i], rot); bestV = s.DeltaViolation; bestC = s.DeltaCost; }
+                            s.Rollback();
+                        }
+                    }
+                if (best is not null && bestV <= -own + Clean) goto found;
+            }
+        }
+        found:
+        if (best is null) return;
+        s.Begin(i);
+        (s.X[i], s.Y[i], s.Rot[i]) = best.Value;
+        s.Evaluate();
+        s.Commit();
+    }
+
+    private static bool Better(double dv, double dc, double bestV, double bestC) =>
+        dv < bestV - Clean || (Math.Abs(dv - bestV) <= Clean && dc < bestC - 1e-9);
+}

@@ -1,0 +1,108 @@
+using System.Diagnostics;
+using System.Globalization;
+using PadPlan.Model;
+
+namespace PadPlan.Planning;
+
+/// <summary>The placement engine's one entry point: plans pads, anneals several seeded runs (in parallel when allowed), keeps the best legal one, and returns the placed project or the reason it cannot be placed.</summary>
+public static class Placer
+{
+    public static PlacementResult Place(Project project, PlacerSettings settings, IProgress<PlacerProgress>? progress = null)
+    {
+        var clock = Stopwatch.StartNew();
+        try
+        {
+            var problem = ProblemBuilder.Build(project, settings, CostWeights.Default);
+            var outcome = problem.AutoBoard ? PlaceOnAutoBoard(problem, settings, progress) : PlaceOnBoard(problem, settings, progress);
+            var board = project.Board;
+            double shiftX = 0, shiftY = 0;
+            if (problem.AutoBoard)
+            {
+                var e = outcome.State.Extent();
+                var m = board.Margin + PlacerLimits.Safety;
+                if (problem.Items.Any(i => i.Fixed))
+                    board = board.WithSize(Math.Ceiling(e.MaxX + m), Math.Ceiling(e.MaxY + m));
+                else
+                {
+                    var (w, h) = (Math.Ceiling(e.Width + 2 * m), Math.Ceiling(e.Height + 2 * m));
+                    shiftX = Math.Round(m + (w - e.Width - 2 * m) / 2 - e.MinX, 2);
+                    shiftY = Math.Round(m + (h - e.Height - 2 * m) / 2 - e.MinY, 2);
+                    board = board.WithSize(w, h);
+                }
+            }
+            var placed = project with { Board = board, Layout = LayoutWriter.Write(outcome.State, shiftX, shiftY) };
+            return PlacementResult.Placed(placed, PlacementSummary.Of(placed, outcome.State, outcome.Moves, clock.Elapsed, settings, problem.AutoBoard));
+        }
+        catch (PlacementImpossibleException e)
+        {
+            return PlacementResult.Failed(e.Failure);
+        }
+    }
+
+    /// <summary>The best of several independent runs: legal first, then lowest cost, then lowest run number. Seeds are fixed per run, so threads never change the answer.</summary>
+    internal static RunOutcome RunAll(PlacementProblem problem, PlacerSettings settings, IProgress<PlacerProgress>? progress)
+    {
+        var results = new RunOutcome[settings.Runs];
+        void One(int k)
+        {
+            var state = new AnnealState(problem);
+            var annealer = new Annealer(state, settings.Seed * 7919L + k);
+            annealer.Scatter();
+            annealer.Run(settings.MovesFactor, (step, cost, violation) => progress?.Report(new PlacerProgress(k + 1, "annealing", step, cost, (int)Math.Ceiling(violation))));
+            var legal = Legaliser.Finish(state);
+            progress?.Report(new PlacerProgress(k + 1, legal ? "legal" : "not legal", 0, state.Cost, (int)Math.Ceiling(state.Violation)));
+            results[k] = new RunOutcome(state, legal, annealer.Stats.TotalTried);
+        }
+        if (settings.AllowThreads && settings.Runs > 1)
+            Parallel.For(0, settings.Runs, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, One);
+        else
+            for (var k = 0; k < settings.Runs; k++) One(k);
+        var best = results.Select((r, k) => (r, k)).OrderBy(x => x.r.Legal ? 0 : 1).ThenBy(x => x.r.Legal ? 0 : x.r.State.Violation).ThenBy(x => x.r.State.Cost).ThenBy(x => x.k).First().r;
+        return best with { Moves = results.Sum(r => r.Moves) };
+    }
+
+    private static RunOutcome PlaceOnAutoBoard(PlacementProblem problem, PlacerSettings settings, IProgress<PlacerProgress>? progress)
+    {
+        var region = problem.Region;
+        RunOutcome? outcome = null;
+        for (var attempt = 0; attempt <= PlacerLimits.AutoGrowTries; attempt++)
+        {
+            outcome = RunAll(problem.WithRegion(region), settings, progress);
+            if (outcome.Legal) return outcome;
+            region = region with { MaxX = region.MinX + region.Width * PlacerLimits.AutoGrowFactor, MaxY = region.MinY + region.Height * PlacerLimits.AutoGrowFactor };
+        }
+        throw new PlacementImpossibleException(new PlacementFailure(
+            "no legal layout found even on a generous automatic board: " + string.Join("; ", outcome!.State.Problems().Take(3)) + ".",
+            "Check the named nets' lead limits (maxLead, rules.maxLead*) and pad gaps; try --effort thorough or another --seed."));
+    }
+
+    private static RunOutcome PlaceOnBoard(PlacementProblem problem, PlacerSettings settings, IProgress<PlacerProgress>? progress)
+    {
+        var region = problem.Region;
+        var board = problem.Project.Board;
+        if (region.Width > 0 && region.Height > 0 && problem.RawArea <= region.Width * region.Height)
+        {
+            var outcome = RunAll(problem, settings, progress);
+            if (outcome.Legal) return outcome;
+        }
+        // Find how big the board would have to be, keeping its proportions, with a quick search.
+        var quick = settings with { Effort = Effort.Quick };
+        var scale = Math.Max(1.1, Math.Sqrt(problem.RawArea * PlacerLimits.AutoAreaFactor / Math.Max(1, region.Width * region.Height)));
+        RunOutcome? trial = null;
+        for (var attempt = 0; attempt <= PlacerLimits.AutoGrowTries; attempt++, scale *= 1.15)
+        {
+            var (w, h) = (Math.Ceiling(board.Width!.Value * scale), Math.Ceiling(board.Height!.Value * scale));
+            trial = RunAll(problem.WithRegion(Region.OfBoard(w, h, board.Margin)), quick, progress);
+            if (!trial.Legal) continue;
+            var e = trial.State.Extent();
+            var needW = Math.Ceiling(e.MaxX + board.Margin);
+            var needH = Math.Ceiling(e.MaxY + board.Margin);
+            throw new PlacementImpossibleException(new PlacementFailure(
+                string.Create(CultureInfo.InvariantCulture, $"board too small: needs about {needW} x {needH} mm; given {board.Width} x {board.Height}."),
+                string.Create(CultureInfo.InvariantCulture, $"Set board.width and board.height to at least {needW} and {needH} (or leave them out for an automatic size), or remove parts.")));
+        }
+        throw new PlacementImpossibleException(new PlacementFailure(
+            "no legal layout found: " + string.Join("; ", trial!.State.Problems().Take(3)) + ".",
+            "Check the named nets' lead limits (maxLead, rules.maxLead*), keep-outs and pad gaps; try --effort thorough, another --seed or a larger board."));
+    }
+}

@@ -1,0 +1,22 @@
+namespace PadPlan.Planning;
+
+/// <summary>Everything a caller may choose about one placement run; all other numbers live in <see cref="CostWeights"/> and <see cref="PlacerLimits"/>.</summary>
+/// <param name="Seed">Seed of the random moves: the same project and seed give the same layout, byte for byte.</param>
+/// <param name="Effort">How long to anneal.</param>
+/// <param name="KeepExisting">Keep every part and pad already in the layout where it is and place only the rest.</param>
+/// <param name="AllowThreads">Run the independent annealing runs in parallel; the result does not depend on it.</param>
+public sealed record PlacerSettings(int Seed = 1, Effort Effort = Effort.Normal, bool KeepExisting = false, bool AllowThreads = true)
+{
+    public static PlacerSettings Default { get; } = new();
+
+    /// <summary>Independent runs (seeds Seed, Seed+1, ...) whose best result is kept; fixed per effort so the result never depends on the machine.</summary>
+    public int Runs => Effort == Effort.Thorough ? 4 : 2;
+
+    /// <summary>Scale of moves per temperature relative to the VPR default of N^(4/3).</summary>
+    public double MovesFactor => Effort switch
+    {
+        Effort.Quick => 0.5,
+        Effort.Thorough => 6.0,
+        _ => 2.0,
+    };
+}

@@ -1,0 +1,43 @@
+using Xunit;
+using PadPlan.Model;
+using PadPlan.Planning;
+
+namespace PadPlan.Tests.Planning;
+
+public class PadPlannerTests
+{
+    // DOMAIN 2 lead-capacity table (common practice, no source): 3.2 mm takes 2, 4.8 mm takes 3, 6.4 mm takes 4;
+    // the smallest punch that covers the net wins (punch steps 1/8, 5/32, 3/16, 1/4 in).
+    [Theory]
+    [InlineData(1, 3.18)]
+    [InlineData(2, 3.18)]
+    [InlineData(3, 4.76)]
+    [InlineData(4, 6.35)]
+    public void Few_leads_get_the_smallest_round_pad_that_holds_them(int leads, double diameter)
+    {
+        var pad = Assert.Single(PadPlanner.PlanNet(new Net("N"), leads, Toolkit.Default, RuleSettings.Default));
+        Assert.Equal(PlannedShape.Round, pad.Shape);
+        Assert.Equal(diameter, pad.Width);
+        Assert.True(pad.Capacity >= leads);
+    }
+
+    // Rectangles take one lead per 2.54 mm each way (common practice, no source): five leads need a 3 x 12.7 mm bar,
+    // the smallest area of the toolkit's strip widths that holds them.
+    [Fact]
+    public void Many_leads_get_a_rectangle()
+    {
+        var pad = Assert.Single(PadPlanner.PlanNet(new Net("N"), 5, Toolkit.Default, RuleSettings.Default));
+        Assert.Equal((PlannedShape.Rect, 3.0, 12.7, 5), (pad.Shape, pad.Width, pad.Height, pad.Capacity));
+    }
+
+    [Fact]
+    public void More_leads_than_any_pad_holds_split_over_pads_that_together_hold_them()
+    {
+        var pads = PadPlanner.PlanNet(new Net("N"), 50, Toolkit.Default, RuleSettings.Default);
+        Assert.True(pads.Count >= 2);
+        Assert.True(pads.Sum(p => p.Capacity) >= 50);
+    }
+
+    [Fact]
+    public void No_leads_no_pad() => Assert.Empty(PadPlanner.PlanNet(new Net("N"), 0, Toolkit.Default, RuleSettings.Default));
+}

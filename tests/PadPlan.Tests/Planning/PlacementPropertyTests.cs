@@ -1,0 +1,22 @@
+using Xunit;
+using FsCheck;
+using FsCheck.Fluent;
+using FsCheck.Xunit;
+using PadPlan.Planning;
+
+namespace PadPlan.Tests.Planning;
+
+public class PlacementPropertyTests
+{
+    /// <summary>For random circuits on an automatic board, every lead lands on a pad of its own net or on the plane, and the test-side checker finds nothing.</summary>
+    [Property(MaxTest = 6)]
+    public Property Random_circuits_place_without_violations(PositiveInt seed, PositiveInt size)
+    {
+        var parts = 4 + size.Get % 12;
+        var project = TestCircuits.Random(seed.Get, parts);
+        var result = Placer.Place(project, new PlacerSettings(Seed: seed.Get, Effort: Effort.Quick));
+        if (!result.Succeeded) return false.Label($"failed: {result.Failure!.Message}");
+        var problems = TestLayoutChecker.Check(result.Project!);
+        return (problems.Count == 0).Label(string.Join("\n", problems));
+    }
+}
