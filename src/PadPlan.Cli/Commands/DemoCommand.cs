@@ -1,27 +1,118 @@
 using System.CommandLine;
+using PadPlan.Import;
+using PadPlan.IO;
+using PadPlan.Output.Materials;
+using PadPlan.Output.Sheets;
+using PadPlan.Output.Tables;
+using PadPlan.Planning;
+using PadPlan.Planning.Cutting;
 using PadPlan.ProjectFiles;
+using PadPlan.Rules;
+using PadPlan.Rules.Reporting;
 
 namespace PadPlan.Cli.Commands;
 
-/// <summary>`padplan demo`: run the whole pipeline on a bundled example.</summary>
+/// <summary>`padplan demo`: runs the whole pipeline (import, place, check, sheets, cut list, BOM, build order, test plan) on a bundled example.</summary>
 public static class DemoCommand
 {
+    /// <summary>The bundled examples the demo can run, by folder name; the first is the default.</summary>
+    public static IReadOnlyList<string> Examples { get; } = ["xtal-osc-40m", "cw-filter", "jfet-preamp", "valve-stage"];
+
+    /// <summary>The files every demo run writes besides the sheets (checked by CI).</summary>
+    public static IReadOnlyList<string> TextFiles { get; } = ["check.txt", "check.json", "cutlist.txt", "bom.txt", "bom.csv", "build-order.txt", "testplan.txt", "testplan.csv"];
+
     public static Command Create(CommandContext context)
     {
         var output = new Option<DirectoryInfo>("--output", "-o") { Description = "Folder for the demo's files.", DefaultValueFactory = _ => new DirectoryInfo("padplan-demo") };
-        var command = new Command("demo", "Run the whole pipeline on a bundled example and show where the files are.") { output };
+        var example = new Option<string>("--example") { Description = $"Which bundled example: {string.Join(", ", Examples)}.", DefaultValueFactory = _ => Examples[0] };
+        example.AcceptOnlyFromAmong([.. Examples]);
+        var date = new Option<string?>("--date") { Description = "Date printed on the sheets, YYYY-MM-DD. Default: from SOURCE_DATE_EPOCH if set, else today." };
+        var command = new Command("demo", "Run the whole pipeline on a bundled example and show where the files are.") { output, example, date };
         command.SetAction(parse => context.Guarded(() =>
         {
-            var dir = parse.GetValue(output)!;
-            var source = Path.Combine(AppContext.BaseDirectory, "examples", "tiny-buffer", "tiny-buffer.padplan.json");
-            var project = ProjectFile.Read(source);
-            Directory.CreateDirectory(dir.FullName);
-            var target = Path.Combine(dir.FullName, "tiny-buffer.padplan.json");
-            ProjectFile.Write(project, target);
-            context.Out.WriteLine($"Demo project: {project.Name}: {project.Parts.Count} parts, {project.Nets.Count} nets.");
-            context.Out.WriteLine($"Wrote {target}");
-            return ExitCodes.Success;
+            var name = parse.GetValue(example)!;
+            var dir = parse.GetValue(output)!.FullName;
+            var printedDate = SheetsCommand.ResolveDate(parse.GetValue(date), Environment.GetEnvironmentVariable("SOURCE_DATE_EPOCH"));
+            return Run(context, name, dir, printedDate);
         }));
         return command;
+    }
+
+    private static int Run(CommandContext context, string name, string dir, DateOnly printedDate)
+    {
+        var source = ExampleFolder(name);
+        var netlist = Directory.EnumerateFiles(source).Where(f => f.EndsWith(".ppn", StringComparison.Ordinal) || f.EndsWith(".cir", StringComparison.Ordinal)).Order(StringComparer.Ordinal).First();
+        Directory.CreateDirectory(dir);
+        var say = context.Err;
+        say.WriteLine($"PadPlan demo: {name} ({Path.GetFileName(netlist)})");
+
+        // 1. import
+        var library = FootprintLibrary.Load();
+        var partsFile = Path.Combine(source, "parts.json");
+        var map = File.Exists(partsFile) ? PartsMap.Read(partsFile, library) : null;
+        var imported = NetlistImporter.ImportFile(netlist, new ImportOptions(library, map, null, null));
+        foreach (var note in imported.Notes) say.WriteLine($"  note: {note.Describe()}");
+        var projectFile = Path.Combine(dir, $"{name}{ProjectFile.Extension}");
+        say.WriteLine($"1. import: {imported.Project.Parts.Count} parts, {imported.Project.Nets.Count} nets");
+
+        // 2. place
+        var placed = Placer.Place(imported.Project, PlacerSettings.Default);
+        if (!placed.Succeeded)
+        {
+            say.WriteLine($"error: placement failed: {placed.Failure!.Message} ({placed.Failure.Hint})");
+            return ExitCodes.RuleViolations;
+        }
+        var project = placed.Project!;
+        ProjectFile.Write(project, projectFile);
+        say.WriteLine($"2. place: board {project.Board.Width:0} x {project.Board.Height:0} mm, {project.Layout!.Pads.Count} pads");
+
+        // 3. check
+        var check = Checker.Check(project);
+        AtomicFile.WriteAllText(Path.Combine(dir, "check.txt"), CheckReportTables.ToText(project.Name, check, strict: false));
+        AtomicFile.WriteAllBytes(Path.Combine(dir, "check.json"), CheckReportJson.ToBytes(project.Name, check, strict: false));
+        say.WriteLine($"3. check: {CheckReportTables.Summary(project.Name, check, strict: false)}");
+
+        // 4. materials
+        var cut = CutListTables.From(CutListBuilder.Build(project.Layout, CutOptions.Default));
+        var bom = BomTable.From(project);
+        var order = BuildOrder.Table(project);
+        var tests = TestPlan.Tables(project);
+        AtomicFile.WriteAllText(Path.Combine(dir, "cutlist.txt"), Text(cut));
+        AtomicFile.WriteAllText(Path.Combine(dir, "bom.txt"), TableText.ToText(bom));
+        AtomicFile.WriteAllText(Path.Combine(dir, "bom.csv"), TableText.ToCsv(bom));
+        AtomicFile.WriteAllText(Path.Combine(dir, "build-order.txt"), TableText.ToText(order));
+        AtomicFile.WriteAllText(Path.Combine(dir, "testplan.txt"), Text(tests));
+        AtomicFile.WriteAllText(Path.Combine(dir, "testplan.csv"), TableText.ToCsv(tests[0]));
+        say.WriteLine($"4. materials: cut list, BOM ({project.Parts.Count} parts), build order ({order.Rows.Count} steps), test plan ({tests[0].Rows.Count} tests)");
+
+        // 5. sheets
+        var book = SheetBook.Build(project, new SheetOptions(Paper.A4, printedDate), check, [.. cut, bom, order, .. tests]);
+        var sheets = SheetOutput.Write(context, book, dir, SheetFormats.All, dpi: 150, list: false);
+        say.WriteLine($"5. sheets: {book.Sheets.Count} pages ({sheets.Count} files)");
+
+        context.Out.WriteLine($"Demo finished. Files are in {dir}:");
+        context.Out.WriteLine($"  {Path.GetFileName(projectFile)}  the placed project");
+        context.Out.WriteLine("  sheets.pdf         template (print at actual size, measure the 50 mm bar), assembly view, report pages");
+        context.Out.WriteLine("  *.svg, *.png       the same pages one by one");
+        context.Out.WriteLine("  check.txt/.json    the check report");
+        context.Out.WriteLine("  cutlist.txt, bom.txt/.csv, build-order.txt, testplan.txt/.csv");
+        context.Out.WriteLine("Caution: cutting board raises glass-fibre dust (cut wet or with extraction, eye protection, dust mask); solder flux fume causes asthma (use extraction).");
+        return check.Errors > 0 ? ExitCodes.RuleViolations : ExitCodes.Success;
+    }
+
+    private static string Text(IEnumerable<ReportTable> tables) => string.Join("\n", tables.Select(TableText.ToText));
+
+    /// <summary>The example's folder: beside the installed program, or in the source tree when run from it.</summary>
+    private static string ExampleFolder(string name)
+    {
+        foreach (var start in new[] { AppContext.BaseDirectory, Directory.GetCurrentDirectory() })
+        {
+            for (var dir = new DirectoryInfo(start); dir is not null; dir = dir.Parent)
+            {
+                var candidate = Path.Combine(dir.FullName, "examples", name);
+                if (Directory.Exists(candidate)) return candidate;
+            }
+        }
+        throw new InputException(Path.Combine("examples", name), "the bundled example is missing; reinstall PadPlan or run the demo from the source folder.");
     }
 }

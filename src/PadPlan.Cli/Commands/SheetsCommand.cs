@@ -37,14 +37,7 @@ public static class SheetsCommand
             if (SheetBook.Problem(plan) is { } problem) throw new InputException(file.FullName, problem);
             var check = Checker.Check(plan);
             var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate), check, MaterialsTables.All(plan));
-            var dir = parse.GetValue(output)!.FullName;
-            Directory.CreateDirectory(dir);
-            foreach (var sheetFile in SheetFiles.Render(book, chosenFormats, resolution))
-            {
-                var path = Path.Combine(dir, sheetFile.Name);
-                AtomicFile.WriteAllBytes(path, sheetFile.Bytes);
-                context.Out.WriteLine(path);
-            }
+            SheetOutput.Write(context, book, parse.GetValue(output)!.FullName, chosenFormats, resolution);
             context.Err.WriteLine($"{book.Sheets.Count} sheet(s) on {chosenPaper.Name}, dated {printedDate:yyyy-MM-dd}. Print the template at actual size and measure its check bar before cutting.");
             return ExitCodes.Success;
         }));
