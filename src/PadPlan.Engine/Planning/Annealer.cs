@@ -90,6 +90,19 @@ internal sealed class Annealer
         _s.Recompute();
     }
 
+    /// <summary>After legalising: greedy moves with no slack and a prohibitive penalty, so leads shrink into the room the annealing slack kept free while no rule may break.</summary>
+    public void Polish(double movesFactor)
+    {
+        if (!HasMoves) return;
+        _s.Slack = 0;
+        _s.Penalty = 1e6;
+        _s.Recompute();
+        var movable = _parts.Length + _pads.Length;
+        var moves = (int)Math.Max(200, 2 * movesFactor * Math.Pow(movable, 4.0 / 3.0));
+        for (var k = 0; k < moves; k++) TryMove(0, 1.0);
+        _s.Recompute();
+    }
+
     /// <summary>VPR's start: a multiple of the spread of cost changes over random trial moves.</summary>
     private double StartTemperature(int samples)
     {

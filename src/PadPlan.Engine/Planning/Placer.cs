@@ -50,6 +50,13 @@ public static class Placer
             annealer.Scatter();
             annealer.Run(settings.MovesFactor, (step, cost, violation) => progress?.Report(new PlacerProgress(k + 1, "annealing", step, cost, (int)Math.Ceiling(violation))));
             var legal = Legaliser.Finish(state);
+            if (legal)
+            {
+                var kept = new AnnealState(problem);
+                kept.CopyFrom(state);
+                annealer.Polish(settings.MovesFactor);
+                if (!Legaliser.Finish(state)) state.CopyFrom(kept);
+            }
             progress?.Report(new PlacerProgress(k + 1, legal ? "legal" : "not legal", 0, state.Cost, (int)Math.Ceiling(state.Violation)));
             results[k] = new RunOutcome(state, legal, annealer.Stats.TotalTried);
         }

@@ -56,6 +56,14 @@ public class PlacerTests
     }
 
     [Fact]
+    public void Keep_outs_stay_clear()
+    {
+        var keepouts = ValueList.Of<Keepout>(new CircleKeepout("hole", new Point(30, 22), 8), new RectKeepout("standoff", new Point(10, 8), 8, 8));
+        var placed = Placed(TestCircuits.DipStage(new Board(60, 45, keepouts: keepouts)));
+        Assert.Empty(TestLayoutChecker.Check(placed));
+    }
+
+    [Fact]
     public void Same_seed_gives_byte_identical_files_with_or_without_threads()
     {
         var project = TestCircuits.DipStage(Board.Auto);
