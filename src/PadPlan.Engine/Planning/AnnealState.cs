@@ -125,6 +125,7 @@ internal sealed partial class AnnealState
     {
         for (var i = 0; i < _items.Length; i++) UpdateGeometry(i);
         double cost = 0, viol = 0;
+        _soft = 0;
         for (var n = 0; n < _nets.Length; n++)
         {
             EvalNet(n, _leadIsland, out _netCost[n], out _netViol[n]);
@@ -138,7 +139,7 @@ internal sealed partial class AnnealState
             viol += _unaryViol[i];
             for (var j = i + 1; j < _items.Length; j++) viol += Pair(i, j);
         }
-        Cost = cost;
+        Cost = cost + _soft;
         Violation = viol;
     }
 

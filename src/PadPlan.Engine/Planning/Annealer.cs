@@ -61,7 +61,7 @@ internal sealed class Annealer
         _s.Slack = PlacerLimits.AnnealSlack;
         _s.Recompute();
         var movable = _parts.Length + _pads.Length;
-        var perTemperature = (int)Math.Max(100, movesFactor * Math.Pow(movable, 4.0 / 3.0));
+        var perTemperature = (int)Math.Max(PlacerLimits.MinMovesPerTemperature * movesFactor, movesFactor * Math.Pow(movable, 4.0 / 3.0));
         var region = _s.Problem.Region;
         var schedule = new AnnealSchedule(StartTemperature(perTemperature), Math.Max(region.Width, region.Height));
         var nets = Math.Max(1, _s.Problem.Nets.Length + _grounded.Length);
