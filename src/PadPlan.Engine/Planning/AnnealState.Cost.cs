@@ -238,14 +238,8 @@ internal sealed partial class AnnealState
     /// <summary>Pair violations between item a (and b, when two move together) and every other item.</summary>
     private double PairsOf(int a, int b)
     {
-        var v = 0.0;
-        for (var j = 0; j < _items.Length; j++)
-        {
-            if (j == a || j == b) continue;
-            v += Pair(a, j);
-            if (b >= 0) v += Pair(b, j);
-        }
-        if (b >= 0) v += Pair(a, b);
+        var v = PairsNear(a, b);
+        if (b >= 0) v += PairsNear(b, a) + Pair(a, b);
         return v;
     }
 

@@ -83,6 +83,7 @@ internal sealed partial class AnnealState
         _mstDist = new double[maxIslands];
         _mstIn = new bool[maxIslands];
         _taken = new bool[_nets.Select(x => x.FreeLeads.Length).DefaultIfEmpty(1).Max() + 1];
+        BuildGrid();
         for (var i = 0; i < n; i++)
         {
             var item = _items[i];
@@ -186,5 +187,6 @@ internal sealed partial class AnnealState
             minY = Math.Min(minY, _isY[s] - _isHH[s]); maxY = Math.Max(maxY, _isY[s] + _isHH[s]);
         }
         _eMinX[i] = minX; _eMinY[i] = minY; _eMaxX[i] = maxX; _eMaxY[i] = maxY;
+        Register(i);
     }
 }
