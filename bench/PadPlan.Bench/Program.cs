@@ -8,6 +8,8 @@ using PadPlan.ProjectFiles;
 
 // Placement benchmark: synthetic circuits of several sizes plus every example, placed at one effort, each beside the row baseline.
 // Usage: dotnet run -c Release --project bench/PadPlan.Bench -- [--sizes 20,50,100,200,500] [--effort normal] [--seed 1] [--write docs/benchmarks.md]
+//        ... -- --profile N (stage timings of one run), --preview PROJECT OUT.png (rough picture of a placed project),
+//        ... -- [--seed S] --synthetic N OUT.padplan.json (write an unplaced synthetic circuit for `padplan place`)
 var sizes = new[] { 20, 50, 100, 200, 500 };
 var effort = Effort.Normal;
 var seed = 1;
@@ -20,6 +22,8 @@ for (var i = 0; i < args.Length; i++)
         case "--effort": effort = Enum.Parse<Effort>(args[++i], ignoreCase: true); break;
         case "--seed": seed = int.Parse(args[++i], CultureInfo.InvariantCulture); break;
         case "--write": write = args[++i]; break;
+        case "--preview": Preview.Write(args[++i], args[++i]); return 0;
+        case "--synthetic": ProjectFile.Write(SyntheticCircuit.Make(int.Parse(args[++i], CultureInfo.InvariantCulture), seed), args[++i]); return 0;
         case "--profile": Profile.Run(int.Parse(args[++i], CultureInfo.InvariantCulture), new PlacerSettings(seed, effort)); return 0;
         default: Console.Error.WriteLine($"unknown argument {args[i]}"); return 2;
     }

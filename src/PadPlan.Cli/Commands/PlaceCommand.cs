@@ -49,7 +49,7 @@ public static class PlaceCommand
         {
             if (value.Stage == "annealing" && value.Step % 20 != 0) return;
             lock (_gate)
-                err.WriteLine(FormattableString.Invariant($"  run {value.Run}/{runs}: {value.Stage}{(value.Step > 0 ? $" step {value.Step}" : "")}, cost {value.Cost:0.0}, violations {value.Violations}"));
+                err.WriteLine(FormattableString.Invariant($"  run {value.Run}/{runs}: {value.Stage}{(value.Step > 0 ? $" step {value.Step}" : "")}, cost {value.Cost:0.0}, rules broken by {value.Violation:0.00} mm"));
         }
     }
 }

@@ -10,6 +10,8 @@ internal sealed partial class AnnealState
     private readonly bool[] _taken;
     private readonly double[] _mstDist;
     private readonly bool[] _mstIn;
+    /// <summary>Soft cost found by <see cref="Pair"/> calls since it was last cleared.</summary>
+    private double _soft;
 
     /// <summary>Lead length to an island for one lead, with its landing point and any broken reach limit.</summary>
     public double Land(int l, int s, out double ax, out double ay, out double violation)
@@ -197,6 +199,8 @@ internal sealed partial class AnnealState
         var a = _items[i];
         var b = _items[j];
         var v = 0.0;
+        if (a.LiesFlat) _soft += _w.FlatBodyOnPad * FlatOnIslands(i, b);
+        if (b.LiesFlat) _soft += _w.FlatBodyOnPad * FlatOnIslands(j, a);
         if (a.HasBody && b.HasBody)
             v += Geometry.BoxIntrusion(_bMinX[i], _bMinY[i], _bMaxX[i], _bMaxY[i], _bMinX[j], _bMinY[j], _bMaxX[j], _bMaxY[j], _bodyNeed);
         foreach (var s in a.Islands)
@@ -222,17 +226,20 @@ internal sealed partial class AnnealState
         return v;
     }
 
+    /// <summary>How deep a flat-lying body reaches over another item's islands: allowed, but a body resting on a pad is a poor build.</summary>
+    private double FlatOnIslands(int flat, ProblemItem other)
+    {
+        var depth = 0.0;
+        foreach (var t in other.Islands)
+            depth += Geometry.BoxIntrusion(_bMinX[flat], _bMinY[flat], _bMaxX[flat], _bMaxY[flat], _isX[t] - _isHW[t], _isY[t] - _isHH[t], _isX[t] + _isHW[t], _isY[t] + _isHH[t], 0);
+        return depth;
+    }
+
     /// <summary>Pair violations between item a (and b, when two move together) and every other item.</summary>
     private double PairsOf(int a, int b)
     {
-        var v = 0.0;
-        for (var j = 0; j < _items.Length; j++)
-        {
-            if (j == a || j == b) continue;
-            v += Pair(a, j);
-            if (b >= 0) v += Pair(b, j);
-        }
-        if (b >= 0) v += Pair(a, b);
+        var v = PairsNear(a, b);
+        if (b >= 0) v += PairsNear(b, a) + Pair(a, b);
         return v;
     }
 

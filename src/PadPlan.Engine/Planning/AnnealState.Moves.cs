@@ -37,7 +37,9 @@ internal sealed partial class AnnealState
         cost += _unaryCost[a];
         viol += _unaryViol[a];
         if (b >= 0) { cost += _unaryCost[b]; viol += _unaryViol[b]; }
+        _soft = 0;
         viol += PairsOf(a, b);
+        cost += _soft;
         _beforeCost = cost;
         _beforeViol = viol;
     }
@@ -82,7 +84,9 @@ internal sealed partial class AnnealState
             cost += _ubCost;
             viol += _ubViol;
         }
+        _soft = 0;
         viol += PairsOf(_ta, _tb);
+        cost += _soft;
         DeltaCost = cost - _beforeCost;
         DeltaViolation = viol - _beforeViol;
     }

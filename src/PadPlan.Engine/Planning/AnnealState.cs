@@ -83,6 +83,7 @@ internal sealed partial class AnnealState
         _mstDist = new double[maxIslands];
         _mstIn = new bool[maxIslands];
         _taken = new bool[_nets.Select(x => x.FreeLeads.Length).DefaultIfEmpty(1).Max() + 1];
+        BuildGrid();
         for (var i = 0; i < n; i++)
         {
             var item = _items[i];
@@ -125,6 +126,7 @@ internal sealed partial class AnnealState
     {
         for (var i = 0; i < _items.Length; i++) UpdateGeometry(i);
         double cost = 0, viol = 0;
+        _soft = 0;
         for (var n = 0; n < _nets.Length; n++)
         {
             EvalNet(n, _leadIsland, out _netCost[n], out _netViol[n]);
@@ -138,7 +140,7 @@ internal sealed partial class AnnealState
             viol += _unaryViol[i];
             for (var j = i + 1; j < _items.Length; j++) viol += Pair(i, j);
         }
-        Cost = cost;
+        Cost = cost + _soft;
         Violation = viol;
     }
 
@@ -185,5 +187,6 @@ internal sealed partial class AnnealState
             minY = Math.Min(minY, _isY[s] - _isHH[s]); maxY = Math.Max(maxY, _isY[s] + _isHH[s]);
         }
         _eMinX[i] = minX; _eMinY[i] = minY; _eMaxX[i] = maxX; _eMaxY[i] = maxY;
+        Register(i);
     }
 }

@@ -61,7 +61,7 @@ internal sealed class Annealer
         _s.Slack = PlacerLimits.AnnealSlack;
         _s.Recompute();
         var movable = _parts.Length + _pads.Length;
-        var perTemperature = (int)Math.Max(100, movesFactor * Math.Pow(movable, 4.0 / 3.0));
+        var perTemperature = (int)Math.Max(PlacerLimits.MinMovesPerTemperature * movesFactor, movesFactor * Math.Pow(movable, 4.0 / 3.0));
         var region = _s.Problem.Region;
         var schedule = new AnnealSchedule(StartTemperature(perTemperature), Math.Max(region.Width, region.Height));
         var nets = Math.Max(1, _s.Problem.Nets.Length + _grounded.Length);
@@ -87,6 +87,19 @@ internal sealed class Annealer
         _s.Penalty = Math.Max(_s.Penalty, w.PenaltyEnd);
         _s.Recompute();
         for (var k = 0; k < 2 * perTemperature; k++) TryMove(0, PlacerLimits.MinRange * 2);
+        _s.Recompute();
+    }
+
+    /// <summary>After legalising: greedy moves with no slack and a prohibitive penalty, so leads shrink into the room the annealing slack kept free while no rule may break.</summary>
+    public void Polish(double movesFactor)
+    {
+        if (!HasMoves) return;
+        _s.Slack = 0;
+        _s.Penalty = 1e6;
+        _s.Recompute();
+        var movable = _parts.Length + _pads.Length;
+        var moves = (int)Math.Max(200, 2 * movesFactor * Math.Pow(movable, 4.0 / 3.0));
+        for (var k = 0; k < moves; k++) TryMove(0, 1.0);
         _s.Recompute();
     }
 

@@ -9,11 +9,13 @@ internal sealed record CostWeights
     public double Jumper { get; init; } = 1.5;
     public double GroundLead { get; init; } = 1.0;
     /// <summary>Pull of every item toward the middle of the region: keeps the used area small.</summary>
-    public double Gravity { get; init; } = 0.04;
+    public double Gravity { get; init; } = 0.03;
     /// <summary>Pull of input nets to the left edge and output nets to the right edge, per mm.</summary>
-    public double Flow { get; init; } = 0.4;
+    public double Flow { get; init; } = 0.15;
     /// <summary>Pull of off-board wire landings toward the nearest edge, per mm.</summary>
-    public double LandingEdge { get; init; } = 0.4;
+    public double LandingEdge { get; init; } = 0.2;
+    /// <summary>Cost per mm a flat-lying body reaches over a pad.</summary>
+    public double FlatBodyOnPad { get; init; } = 1.5;
     /// <summary>Weight of hard-rule violations at the start and end of annealing; it rises step by step.</summary>
     public double PenaltyStart { get; init; } = 20.0;
     public double PenaltyEnd { get; init; } = 400.0;

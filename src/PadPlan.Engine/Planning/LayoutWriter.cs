@@ -114,5 +114,10 @@ internal static class LayoutWriter
         }
     }
 
-    private static double R(double v) => Math.Round(v / PlacerLimits.WriteStep) * PlacerLimits.WriteStep is var r && Math.Abs(r) < 1e-9 ? 0 : Math.Round(r, 2);
+    /// <summary>Rounds to the written step (0.01 mm), never writing -0.</summary>
+    private static double R(double v)
+    {
+        var r = Math.Round(v, 2);
+        return r == 0 ? 0 : r;
+    }
 }

@@ -10,6 +10,8 @@ public static class Placer
     public static PlacementResult Place(Project project, PlacerSettings settings, IProgress<PlacerProgress>? progress = null)
     {
         var clock = Stopwatch.StartNew();
+        if (project.Parts.Count == 0)
+            return PlacementResult.Failed(new PlacementFailure("the project has no parts to place.", "Import a netlist into the project first ('padplan import')."));
         try
         {
             var problem = ProblemBuilder.Build(project, settings, CostWeights.Default);
@@ -48,9 +50,16 @@ public static class Placer
             var state = new AnnealState(problem);
             var annealer = new Annealer(state, settings.Seed * 7919L + k);
             annealer.Scatter();
-            annealer.Run(settings.MovesFactor, (step, cost, violation) => progress?.Report(new PlacerProgress(k + 1, "annealing", step, cost, (int)Math.Ceiling(violation))));
+            annealer.Run(settings.MovesFactor, (step, cost, violation) => progress?.Report(new PlacerProgress(k + 1, "annealing", step, cost, violation)));
             var legal = Legaliser.Finish(state);
-            progress?.Report(new PlacerProgress(k + 1, legal ? "legal" : "not legal", 0, state.Cost, (int)Math.Ceiling(state.Violation)));
+            if (legal)
+            {
+                var kept = new AnnealState(problem);
+                kept.CopyFrom(state);
+                annealer.Polish(settings.MovesFactor);
+                if (!Legaliser.Finish(state)) state.CopyFrom(kept);
+            }
+            progress?.Report(new PlacerProgress(k + 1, legal ? "legal" : "not legal", 0, state.Cost, state.Violation));
             results[k] = new RunOutcome(state, legal, annealer.Stats.TotalTried);
         }
         if (settings.AllowThreads && settings.Runs > 1)

@@ -25,6 +25,8 @@ internal static class PlacerLimits
     public const double StopFraction = 0.005;
     /// <summary>Safety stop on the number of temperature steps.</summary>
     public const int MaxSteps = 400;
+    /// <summary>Floor on moves per temperature (before the effort factor): small circuits are cheap, so they get a thorough search anyway.</summary>
+    public const int MinMovesPerTemperature = 600;
     /// <summary>Extra temperature steps at the final temperature while rules are still broken.</summary>
     public const int CleanupSteps = 12;
     /// <summary>Smallest move range (mm).</summary>

@@ -16,7 +16,7 @@ public sealed record PlacerSettings(int Seed = 1, Effort Effort = Effort.Normal,
     public double MovesFactor => Effort switch
     {
         Effort.Quick => 0.5,
-        Effort.Thorough => 6.0,
-        _ => 2.0,
+        Effort.Thorough => 10.0,
+        _ => 4.0,
     };
 }

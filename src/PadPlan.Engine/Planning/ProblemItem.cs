@@ -22,6 +22,8 @@ internal sealed class ProblemItem
     public double BodyMinX, BodyMinY, BodyMaxX, BodyMaxY;
     public bool HasBody;
     public bool IsLanding;
+    /// <summary>An axial part lying on the board: its body should not rest on pads.</summary>
+    public bool LiesFlat;
     /// <summary>-1 pulled to the left edge (input), +1 to the right edge (output), 0 neither.</summary>
     public int Flow;
     /// <summary>Rectangular free pads may be turned a quarter.</summary>

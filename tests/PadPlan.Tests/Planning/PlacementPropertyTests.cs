@@ -9,7 +9,7 @@ namespace PadPlan.Tests.Planning;
 public class PlacementPropertyTests
 {
     /// <summary>For random circuits on an automatic board, every lead lands on a pad of its own net or on the plane, and the test-side checker finds nothing.</summary>
-    [Property(MaxTest = 6)]
+    [Property(MaxTest = 10)]
     public Property Random_circuits_place_without_violations(PositiveInt seed, PositiveInt size)
     {
         var parts = 4 + size.Get % 12;

@@ -56,6 +56,23 @@ public class PlacerTests
     }
 
     [Fact]
+    public void Input_lands_left_of_output_on_a_wide_board()
+    {
+        // DOMAIN 1: build along the signal path and keep input and output apart; the flow term pulls them to opposite edges.
+        var placed = Placed(TestCircuits.DipStage(new Board(90, 40)));
+        var x = placed.Layout!.Placements.ToDictionary(p => p.Ref, p => p.Position.X);
+        Assert.True(x["J1"] < x["J2"], $"input at x {x["J1"]}, output at x {x["J2"]}");
+    }
+
+    [Fact]
+    public void Keep_outs_stay_clear()
+    {
+        var keepouts = ValueList.Of<Keepout>(new CircleKeepout("hole", new Point(30, 22), 8), new RectKeepout("standoff", new Point(10, 8), 8, 8));
+        var placed = Placed(TestCircuits.DipStage(new Board(60, 45, keepouts: keepouts)));
+        Assert.Empty(TestLayoutChecker.Check(placed));
+    }
+
+    [Fact]
     public void Same_seed_gives_byte_identical_files_with_or_without_threads()
     {
         var project = TestCircuits.DipStage(Board.Auto);

@@ -16,6 +16,13 @@ public static class TestLayoutChecker
         var board = project.Board;
         var (minX, minY, maxX, maxY) = (board.Margin, board.Margin, board.Width!.Value - board.Margin, board.Height!.Value - board.Margin);
         bool Inside(Point p) => p.X >= minX - Eps && p.X <= maxX + Eps && p.Y >= minY - Eps && p.Y <= maxY + Eps;
+        // Keep-outs are checked on sample points of each island and body outline, and on ground landings.
+        string? OnKeepout(Point p) => board.Keepouts.FirstOrDefault(k => k switch
+        {
+            CircleKeepout c => p.DistanceTo(c.Center) < c.Diameter / 2 - Eps,
+            RectKeepout r => Math.Abs(p.X - r.Center.X) < r.Width / 2 - Eps && Math.Abs(p.Y - r.Center.Y) < r.Height / 2 - Eps,
+            _ => false,
+        })?.Id;
 
         var islands = new List<(Island Island, string Pad, int Index)>();
         foreach (var pad in layout.Pads)
@@ -27,6 +34,9 @@ public static class TestLayoutChecker
         foreach (var (island, _, _) in islands)
             foreach (var corner in Corners(island))
                 if (!Inside(corner)) problems.Add($"pad {island.Id} reaches outside the board margin");
+        foreach (var (island, _, _) in islands)
+            foreach (var p in Samples(island))
+                if (OnKeepout(p) is { } id) { problems.Add($"pad {island.Id} lies on keep-out {id}"); break; }
         for (var a = 0; a < islands.Count; a++)
             for (var b = a + 1; b < islands.Count; b++)
             {
@@ -45,6 +55,7 @@ public static class TestLayoutChecker
             var poly = footprint.Body.Select(placement.ToBoard).ToList();
             bodies.Add((part.Ref, poly));
             if (poly.Any(p => !Inside(p))) problems.Add($"body of {part.Ref} reaches outside the board margin");
+            if (EdgeSamples(poly).Select(OnKeepout).FirstOrDefault(id => id is not null) is { } hit) problems.Add($"body of {part.Ref} lies on keep-out {hit}");
             foreach (var pin in part.Pins)
                 if (!placement.Leads.Any(l => string.Equals(l.Pin, pin.Pin, StringComparison.OrdinalIgnoreCase)))
                     problems.Add($"lead {part.Ref}.{pin.Pin} has no landing");
@@ -60,6 +71,7 @@ public static class TestLayoutChecker
                 {
                     if (net?.Ground != true) problems.Add($"lead {part.Ref}.{landing.Pin} of net {netName} lands on the plane");
                     if (!Inside(landing.At)) problems.Add($"ground landing of {part.Ref}.{landing.Pin} is outside the board margin");
+                    if (OnKeepout(landing.At) is { } k) problems.Add($"ground landing of {part.Ref}.{landing.Pin} lies on keep-out {k}");
                     foreach (var (island, _, _) in islands)
                         if (PointGap(landing.At, island) < rules.GroundGap - Eps) problems.Add($"ground landing of {part.Ref}.{landing.Pin} is too close to pad {island.Id}");
                     continue;
@@ -89,6 +101,22 @@ public static class TestLayoutChecker
         foreach (var j in project.Layout!.Jumpers) parent[Find(j.From)] = Find(j.To);
         foreach (var group in islands.Where(i => i.Net is not null).GroupBy(i => i.Net))
             if (group.Select(i => Find(i.Id)).Distinct().Count() > 1) yield return $"net {group.Key} is split over pads not joined by jumpers";
+    }
+
+    private static IEnumerable<Point> Samples(Island i)
+    {
+        for (var a = 0; a < 16; a++)
+            for (var f = 0.0; f <= 1.0; f += 0.25)
+                yield return i.Shape == IslandShape.Round
+                    ? i.Center + new Point(Math.Cos(a * Math.PI / 8), Math.Sin(a * Math.PI / 8)) * (f * i.Width / 2)
+                    : new Point(i.Left + i.Width * (a % 4) / 3.0, i.Top + i.Height * (a / 4) / 3.0);
+    }
+
+    private static IEnumerable<Point> EdgeSamples(List<Point> poly)
+    {
+        for (var k = 0; k < poly.Count; k++)
+            for (var f = 0.0; f < 1.0; f += 0.1)
+                yield return poly[k] + (poly[(k + 1) % poly.Count] - poly[k]) * f;
     }
 
     private static IEnumerable<Point> Corners(Island i) =>
