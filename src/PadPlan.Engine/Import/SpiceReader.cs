@@ -38,6 +38,7 @@ public static partial class SpiceReader
         foreach (var line in lines)
         {
             var words = Words(line.Text, file, line.Line);
+            if (words.Count == 0) continue; // only separators, e.g. a lone ")"
             var head = words[0].ToLowerInvariant();
             if (inControl) { if (head == ".endc") inControl = false; continue; }
             if (head == ".control") { inControl = true; continue; }

@@ -199,8 +199,8 @@ internal sealed partial class AnnealState
         var a = _items[i];
         var b = _items[j];
         var v = 0.0;
-        if (a.LiesFlat) _soft += _w.FlatBodyOnPad * FlatOnIslands(i, b);
-        if (b.LiesFlat) _soft += _w.FlatBodyOnPad * FlatOnIslands(j, a);
+        if (a.KeepsOffPads) _soft += _w.BodyOverPad * BodyOverIslands(i, b);
+        if (b.KeepsOffPads) _soft += _w.BodyOverPad * BodyOverIslands(j, a);
         if (a.HasBody && b.HasBody)
             v += Geometry.BoxIntrusion(_bMinX[i], _bMinY[i], _bMaxX[i], _bMaxY[i], _bMinX[j], _bMinY[j], _bMaxX[j], _bMaxY[j], _bodyNeed);
         foreach (var s in a.Islands)
@@ -209,7 +209,8 @@ internal sealed partial class AnnealState
             foreach (var t in b.Islands)
             {
                 var d = Geometry.IslandGap(sa.Round, _isX[s], _isY[s], _isHW[s], _isHH[s], _islands[t].Round, _isX[t], _isY[t], _isHW[t], _isHH[t]);
-                if (d < _padNeed) v += _padNeed - d;
+                var need = PadNeed(sa.Net, _islands[t].Net);
+                if (d < need) v += need - d;
             }
             foreach (var l in b.GroundLeads)
             {
@@ -226,8 +227,8 @@ internal sealed partial class AnnealState
         return v;
     }
 
-    /// <summary>How deep a flat-lying body reaches over another item's islands: allowed, but a body resting on a pad is a poor build.</summary>
-    private double FlatOnIslands(int flat, ProblemItem other)
+    /// <summary>How deep a body reaches over another item's islands: allowed, but a body over a pad hides the joint and may rest on it.</summary>
+    private double BodyOverIslands(int flat, ProblemItem other)
     {
         var depth = 0.0;
         foreach (var t in other.Islands)

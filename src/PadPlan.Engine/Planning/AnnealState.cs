@@ -1,3 +1,4 @@
+using PadPlan.Model.Standards;
 namespace PadPlan.Planning;
 
 /// <summary>The mutable working layout of one annealing run: item positions and turns, cached board geometry, and the cost split into a soft part (lead and jumper length, area, flow) and a hard part (rule violations in mm).</summary>
@@ -11,6 +12,8 @@ internal sealed partial class AnnealState
     private readonly ProblemNet[] _nets;
     private readonly CostWeights _w;
     private double _padNeed, _groundNeed, _bodyNeed, _slack, _cull;
+    // Extra spacing (mm, beyond the pad gap) that IPC-2221 Table 6-1 (B2) asks between islands of two nets; null when no net has a voltage.
+    private readonly double[,]? _hvExtra;
     private Region _inside;
 
     public readonly double[] X, Y;
@@ -43,7 +46,7 @@ internal sealed partial class AnnealState
             _padNeed = _p.Rules.PadGap + PlacerLimits.Safety + value;
             _groundNeed = _p.Rules.GroundGap + PlacerLimits.Safety + value;
             _bodyNeed = PlacerLimits.BodyGap + value;
-            _cull = Math.Max(Math.Max(_padNeed, _groundNeed), _bodyNeed) + 0.01;
+            _cull = Math.Max(Math.Max(_padNeed + MaxHvExtra(), _groundNeed), _bodyNeed) + 0.01;
             var r = _p.Region;
             var inset = PlacerLimits.Safety + value;
             _inside = new Region(r.MinX + inset, r.MinY + inset, r.MaxX - inset, r.MaxY - inset);
@@ -58,6 +61,7 @@ internal sealed partial class AnnealState
         _leads = problem.Leads;
         _nets = problem.Nets;
         _w = problem.Weights;
+        _hvExtra = HvExtra(problem);
         Slack = 0;
         var n = _items.Length;
         X = new double[n]; Y = new double[n]; Rot = new int[n];
@@ -189,4 +193,29 @@ internal sealed partial class AnnealState
         _eMinX[i] = minX; _eMinY[i] = minY; _eMaxX[i] = maxX; _eMaxY[i] = maxY;
         Register(i);
     }
+
+    /// <summary>Per pair of nets, how much more than the pad gap IPC-2221 Table 6-1 (B2) asks for the voltage between them.</summary>
+    private static double[,]? HvExtra(PlacementProblem problem)
+    {
+        var nets = problem.Nets;
+        if (!nets.Any(n => n.Net.Voltage is not null)) return null;
+        var extra = new double[nets.Length, nets.Length];
+        for (var a = 0; a < nets.Length; a++)
+            for (var b = 0; b < nets.Length; b++)
+                if (a != b)
+                    extra[a, b] = Math.Max(0, ConductorSpacing.B2(ConductorSpacing.Between(nets[a].Net.Voltage, nets[b].Net.Voltage)) - problem.Rules.PadGap);
+        return extra;
+    }
+
+    private double MaxHvExtra()
+    {
+        if (_hvExtra is null) return 0;
+        var max = 0.0;
+        foreach (var e in _hvExtra) max = Math.Max(max, e);
+        return max;
+    }
+
+    /// <summary>The edge-to-edge gap two islands need: the pad gap, or more between nets at high voltage.</summary>
+    private double PadNeed(int netA, int netB) =>
+        _hvExtra is null || netA < 0 || netB < 0 ? _padNeed : _padNeed + _hvExtra[netA, netB];
 }

@@ -22,8 +22,8 @@ internal sealed class ProblemItem
     public double BodyMinX, BodyMinY, BodyMaxX, BodyMaxY;
     public bool HasBody;
     public bool IsLanding;
-    /// <summary>An axial part lying on the board: its body should not rest on pads.</summary>
-    public bool LiesFlat;
+    /// <summary>A part whose body should stay off other parts' pads (every part but a wire landing): a body over a pad hides the joint.</summary>
+    public bool KeepsOffPads;
     /// <summary>-1 pulled to the left edge (input), +1 to the right edge (output), 0 neither.</summary>
     public int Flow;
     /// <summary>Rectangular free pads may be turned a quarter.</summary>

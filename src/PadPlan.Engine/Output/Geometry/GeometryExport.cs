@@ -1,3 +1,4 @@
+using PadPlan.Model.Standards;
 using System.Text;
 using System.Text.Json;
 using PadPlan.IO;

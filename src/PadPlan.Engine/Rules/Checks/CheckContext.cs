@@ -1,3 +1,4 @@
+using PadPlan.Model.Standards;
 using PadPlan.Model;
 using PadPlan.Rules.Physics;
 using PadPlan.Rules.Shapes;
@@ -65,12 +66,7 @@ internal sealed class CheckContext
     public double Voltage(string? net) => Math.Abs(Plan.Net(net)?.Voltage ?? 0);
 
     /// <summary>Worst-case voltage between two nets when all that is known is each one's largest voltage to ground: opposite polarities add.</summary>
-    public double VoltageBetween(string? a, string? b)
-    {
-        var va = Plan.Net(a)?.Voltage ?? 0;
-        var vb = Plan.Net(b)?.Voltage ?? 0;
-        return Math.Max(Math.Max(Math.Abs(va), Math.Abs(vb)), Math.Abs(va - vb));
-    }
+    public double VoltageBetween(string? a, string? b) => ConductorSpacing.Between(Plan.Net(a)?.Voltage, Plan.Net(b)?.Voltage);
 
     private string? IntendedNet(PadCopper copper)
     {

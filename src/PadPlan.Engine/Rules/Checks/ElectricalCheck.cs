@@ -1,3 +1,4 @@
+using PadPlan.Model.Standards;
 using PadPlan.Rules.Physics;
 
 namespace PadPlan.Rules.Checks;

@@ -1,3 +1,4 @@
+using PadPlan.Model.Standards;
 using Xunit;
 using PadPlan.Rules.Physics;
 

@@ -1,6 +1,6 @@
-namespace PadPlan.Rules.Physics;
+namespace PadPlan.Model.Standards;
 
-/// <summary>Minimum conductor spacing by voltage, IPC-2221 Table 6-1 (DC or peak AC volts, mm).</summary>
+/// <summary>Minimum conductor spacing by voltage, IPC-2221 Table 6-1 (DC or peak AC volts, mm). Reference data: the placer honours it and the checker judges by it.</summary>
 public static class ConductorSpacing
 {
     /// <summary>The table revision the numbers come from. The B2 column is the published table; the A6 column was recalled from memory (DOMAIN §5) and awaits confirmation.</summary>
@@ -38,5 +38,13 @@ public static class ConductorSpacing
         foreach (var row in Rows)
             if (v <= row.UpTo) return column(row);
         return column(Rows[^1]) + (v - Rows[^1].UpTo) * perVolt;
+    }
+
+    /// <summary>The voltage that can stand between two nets, each given to ground (null = unknown, taken as 0): the worst of either alone and their difference, so opposite polarities add.</summary>
+    public static double Between(double? a, double? b)
+    {
+        var va = a ?? 0;
+        var vb = b ?? 0;
+        return Math.Max(Math.Max(Math.Abs(va), Math.Abs(vb)), Math.Abs(va - vb));
     }
 }
