@@ -23,7 +23,7 @@ public class PlaceCommandTests
         Assert.Equal(0, run.ExitCode);
         Assert.Contains("leads: total", run.Out);
         Assert.Contains("board: 50 x 36 mm", run.Out);
-        Assert.Empty(TestLayoutChecker.Check(ProjectFile.Read(path)));
+        Assert.Empty(CheckerVerdict.Check(ProjectFile.Read(path)));
     }
 
     [Fact]

@@ -8,15 +8,15 @@ namespace PadPlan.Tests.Planning;
 
 public class PlacementPropertyTests
 {
-    /// <summary>For random circuits on an automatic board, every lead lands on a pad of its own net or on the plane, and the test-side checker finds nothing.</summary>
-    [Property(MaxTest = 10)]
+    /// <summary>For random circuits on an automatic board, every lead lands on a pad of its own net or on the plane, and the independent checker finds no error.</summary>
+    [Property(MaxTest = 12)]
     public Property Random_circuits_place_without_violations(PositiveInt seed, PositiveInt size)
     {
         var parts = 4 + size.Get % 12;
         var project = TestCircuits.Random(seed.Get, parts);
         var result = Placer.Place(project, new PlacerSettings(Seed: seed.Get, Effort: Effort.Quick));
         if (!result.Succeeded) return false.Label($"failed: {result.Failure!.Message}");
-        var problems = TestLayoutChecker.Check(result.Project!);
+        var problems = CheckerVerdict.Check(result.Project!);
         return (problems.Count == 0).Label(string.Join("\n", problems));
     }
 }

@@ -22,7 +22,7 @@ public class PlacerTests
     public void Tiny_buffer_on_its_own_board_breaks_no_rule()
     {
         var placed = Placed(TinyBufferWithoutLayout());
-        Assert.Empty(TestLayoutChecker.Check(placed));
+        Assert.Empty(CheckerVerdict.Check(placed));
         Assert.Equal(50, placed.Board.Width);
     }
 
@@ -33,7 +33,7 @@ public class PlacerTests
         var placed = Placed(project);
         Assert.Equal(Math.Round(placed.Board.Width!.Value), placed.Board.Width);
         Assert.Equal(Math.Round(placed.Board.Height!.Value), placed.Board.Height);
-        Assert.Empty(TestLayoutChecker.Check(placed));
+        Assert.Empty(CheckerVerdict.Check(placed));
         // The hand-placed fixture needs 50 x 36 mm; an automatic board should be no bigger than that.
         Assert.True(placed.Board.Width * placed.Board.Height <= 50 * 36, $"{placed.Board.Width} x {placed.Board.Height}");
     }
@@ -42,7 +42,7 @@ public class PlacerTests
     public void Dip_sits_on_strip_segments_and_its_ground_pin_reaches_the_plane()
     {
         var placed = Placed(TestCircuits.DipStage(Board.Auto));
-        Assert.Empty(TestLayoutChecker.Check(placed));
+        Assert.Empty(CheckerVerdict.Check(placed));
         var u1 = placed.Layout!.Placements.Single(p => p.Ref == "U1");
         Assert.Null(u1.Leads.Single(l => l.Pin == "4").Pad);
         var strips = placed.Layout.Pads.OfType<StripPad>().ToList();
@@ -69,7 +69,7 @@ public class PlacerTests
     {
         var keepouts = ValueList.Of<Keepout>(new CircleKeepout("hole", new Point(30, 22), 8), new RectKeepout("standoff", new Point(10, 8), 8, 8));
         var placed = Placed(TestCircuits.DipStage(new Board(60, 45, keepouts: keepouts)));
-        Assert.Empty(TestLayoutChecker.Check(placed));
+        Assert.Empty(CheckerVerdict.Check(placed));
     }
 
     [Fact]
@@ -92,7 +92,7 @@ public class PlacerTests
         var parts = fixture.Parts.Select(p => p.Ref is "Q1" or "C1" ? p with { Locked = true } : p).ToValueList();
         var project = fixture with { Layout = layout, Parts = parts };
         var placed = Placed(project);
-        Assert.Empty(TestLayoutChecker.Check(placed));
+        Assert.Empty(CheckerVerdict.Check(placed));
         Assert.Contains(lockedPad, placed.Layout!.Pads);
         foreach (var reference in new[] { "Q1", "C1" })
         {
@@ -140,7 +140,7 @@ public class PlacerTests
         var parts = Enumerable.Range(1, 40).Select(i => TestCircuits.Part($"R{i}", "res-axial-250mw", ("1", "BUS"), ("2", "GND")));
         var project = TestCircuits.Project("bus", Board.Auto, [new Net("GND", Ground: true), new Net("BUS")], parts);
         var placed = Placed(project);
-        Assert.Empty(TestLayoutChecker.Check(placed));
+        Assert.Empty(CheckerVerdict.Check(placed));
         Assert.True(placed.Layout!.Jumpers.Count >= 1);
     }
 }
