@@ -5,6 +5,7 @@ using PadPlan.Bench;
 using PadPlan.Model;
 using PadPlan.Planning;
 using PadPlan.ProjectFiles;
+using PadPlan.Rules;
 
 // Placement benchmark: synthetic circuits of several sizes plus every example, placed at one effort, each beside the row baseline.
 // Usage: dotnet run -c Release --project bench/PadPlan.Bench -- [--sizes 20,50,100,200,500] [--effort normal] [--seed 1] [--write docs/benchmarks.md]
@@ -34,6 +35,7 @@ var cases = new List<(string Name, Project Project)>();
 foreach (var n in sizes) cases.Add(($"synthetic {n}", SyntheticCircuit.Make(n, 1000 + n)));
 foreach (var file in Directory.GetFiles(Path.Combine(root, "examples"), "*.padplan.json", SearchOption.AllDirectories).Order(StringComparer.Ordinal))
     cases.Add(($"example {Path.GetFileName(file).Replace(".padplan.json", "")}", ProjectFile.Read(file) with { Layout = null }));
+cases.AddRange(ExampleNetlists.ImportAll(Path.Combine(root, "examples")));
 
 var rows = new List<BenchRow>();
 foreach (var (name, project) in cases)
@@ -49,11 +51,15 @@ foreach (var (name, project) in cases)
     var seconds = clock.Elapsed.TotalSeconds;
     if (!result.Succeeded)
     {
-        rows.Add(new BenchRow(name, project.Parts.Count, false, result.Failure!.Message, seconds, 0, -1, 0, 0, 0, baseViolations, baseLeads, baseExtent.Width * baseExtent.Height / problem.RawArea, baseline.Cost, "-"));
+        rows.Add(new BenchRow(name, project.Parts.Count, false, result.Failure!.Message, seconds, 0, -1, 0, 0, 0, 0, baseViolations, baseLeads, baseExtent.Width * baseExtent.Height / problem.RawArea, baseline.Cost, "-"));
         continue;
     }
     var s = result.Summary!;
-    rows.Add(new BenchRow(name, project.Parts.Count, true, "", seconds, s.Moves / seconds, 0,
+    // Violations are counted by the independent checker, not by the placer's own legality test.
+    var checkClock = Stopwatch.StartNew();
+    var check = Checker.Check(result.Project!);
+    var checkMs = checkClock.Elapsed.TotalMilliseconds;
+    rows.Add(new BenchRow(name, project.Parts.Count, true, "", seconds, s.Moves / seconds, check.Errors, checkMs,
         s.TotalLead / Math.Max(1e-9, s.LeadFloor), s.UsedArea / s.RawArea, s.Cost,
         baseViolations, baseLeads, baseExtent.Width * baseExtent.Height / problem.RawArea, baseline.Cost,
         FormattableString.Invariant($"{s.BoardWidth:0} x {s.BoardHeight:0}")));
@@ -61,12 +67,12 @@ foreach (var (name, project) in cases)
 }
 
 var table = new StringBuilder();
-table.AppendLine("| case | parts | time (s) | moves/s | violations | lead / floor | area / raw | cost | board (mm) | baseline violations | baseline lead / floor | baseline area / raw | baseline cost | cost gain |");
-table.AppendLine("|---|---|---|---|---|---|---|---|---|---|---|---|---|---|");
+table.AppendLine("| case | parts | time (s) | moves/s | violations (checker) | check (ms) | lead / floor | area / raw | cost | board (mm) | baseline violations | baseline lead / floor | baseline area / raw | baseline cost | cost gain |");
+table.AppendLine("|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|");
 foreach (var r in rows)
     table.AppendLine(r.Placed
-        ? FormattableString.Invariant($"| {r.Case} | {r.Parts} | {r.Seconds:0.00} | {r.MovesPerSecond:0} | {r.Violations} | {r.LeadRatio:0.00} | {r.AreaRatio:0.00} | {r.Cost:0} | {r.Board} | {r.BaselineViolations} | {r.BaselineLeadRatio:0.00} | {r.BaselineAreaRatio:0.00} | {r.BaselineCost:0} | {r.Gain:0.0}x |")
-        : FormattableString.Invariant($"| {r.Case} | {r.Parts} | {r.Seconds:0.00} | - | failed: {r.Note} | - | - | - | - | {r.BaselineViolations} | {r.BaselineLeadRatio:0.00} | {r.BaselineAreaRatio:0.00} | {r.BaselineCost:0} | - |"));
+        ? FormattableString.Invariant($"| {r.Case} | {r.Parts} | {r.Seconds:0.00} | {r.MovesPerSecond:0} | {r.Violations} | {r.CheckMilliseconds:0.0} | {r.LeadRatio:0.00} | {r.AreaRatio:0.00} | {r.Cost:0} | {r.Board} | {r.BaselineViolations} | {r.BaselineLeadRatio:0.00} | {r.BaselineAreaRatio:0.00} | {r.BaselineCost:0} | {r.Gain:0.0}x |")
+        : FormattableString.Invariant($"| {r.Case} | {r.Parts} | {r.Seconds:0.00} | - | failed: {r.Note} | - | - | - | - | - | {r.BaselineViolations} | {r.BaselineLeadRatio:0.00} | {r.BaselineAreaRatio:0.00} | {r.BaselineCost:0} | - |"));
 var machine = Machine();
 Console.WriteLine(machine);
 Console.WriteLine();

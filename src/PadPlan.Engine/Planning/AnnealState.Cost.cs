@@ -199,8 +199,8 @@ internal sealed partial class AnnealState
         var a = _items[i];
         var b = _items[j];
         var v = 0.0;
-        if (a.KeepsOffPads) _soft += _w.BodyOverPad * BodyOverIslands(i, b);
-        if (b.KeepsOffPads) _soft += _w.BodyOverPad * BodyOverIslands(j, a);
+        if (a.KeepsOffPads) _soft += (a.LiesFlat ? _w.FlatBodyOverPad : _w.UprightBodyOverPad) * BodyOverIslands(i, b);
+        if (b.KeepsOffPads) _soft += (b.LiesFlat ? _w.FlatBodyOverPad : _w.UprightBodyOverPad) * BodyOverIslands(j, a);
         if (a.HasBody && b.HasBody)
             v += Geometry.BoxIntrusion(_bMinX[i], _bMinY[i], _bMaxX[i], _bMaxY[i], _bMinX[j], _bMinY[j], _bMaxX[j], _bMaxY[j], _bodyNeed);
         foreach (var s in a.Islands)

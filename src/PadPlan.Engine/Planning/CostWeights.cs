@@ -14,8 +14,10 @@ internal sealed record CostWeights
     public double Flow { get; init; } = 0.15;
     /// <summary>Pull of off-board wire landings toward the nearest edge, per mm.</summary>
     public double LandingEdge { get; init; } = 0.2;
-    /// <summary>Cost per mm a part's body reaches over another part's pad.</summary>
-    public double BodyOverPad { get; init; } = 5;
+    /// <summary>Cost per mm a flat-lying body reaches over another part's pad: it rests on the joint.</summary>
+    public double FlatBodyOverPad { get; init; } = 5;
+    /// <summary>Cost per mm a standing body reaches over another part's pad: it hides the joint but does not rest on it.</summary>
+    public double UprightBodyOverPad { get; init; } = 1;
     /// <summary>Weight of hard-rule violations at the start and end of annealing; it rises step by step.</summary>
     public double PenaltyStart { get; init; } = 20.0;
     public double PenaltyEnd { get; init; } = 400.0;

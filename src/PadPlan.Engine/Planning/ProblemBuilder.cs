@@ -23,7 +23,7 @@ internal static class ProblemBuilder
         foreach (var part in project.Parts)
         {
             var footprint = project.FootprintOf(part);
-            var item = new ProblemItem { Index = items.Count, Part = part, Footprint = footprint, IsLanding = footprint.Mount == MountStyle.Landing, KeepsOffPads = footprint.Mount != MountStyle.Landing, HasBody = true };
+            var item = new ProblemItem { Index = items.Count, Part = part, Footprint = footprint, IsLanding = footprint.Mount == MountStyle.Landing, KeepsOffPads = footprint.Mount != MountStyle.Landing, LiesFlat = footprint.Mount == MountStyle.Axial, HasBody = true };
             if ((part.Locked || settings.KeepExisting) && placed.TryGetValue(part.Ref, out var placement))
             {
                 item.Fixed = true;

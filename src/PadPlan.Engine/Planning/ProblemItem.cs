@@ -24,6 +24,8 @@ internal sealed class ProblemItem
     public bool IsLanding;
     /// <summary>A part whose body should stay off other parts' pads (every part but a wire landing): a body over a pad hides the joint.</summary>
     public bool KeepsOffPads;
+    /// <summary>An axial part lying on the board: its body would rest on any pad beneath it.</summary>
+    public bool LiesFlat;
     /// <summary>-1 pulled to the left edge (input), +1 to the right edge (output), 0 neither.</summary>
     public int Flow;
     /// <summary>Rectangular free pads may be turned a quarter.</summary>
