@@ -48,6 +48,36 @@ public sealed class SchemaTests
         AssertValid(Load("project.schema.json"), file);
     }
 
+    public static TheoryData<string> ExampleNetlists()
+    {
+        var data = new TheoryData<string>();
+        foreach (var dir in Directory.GetDirectories(TestPaths.Examples).Order(StringComparer.Ordinal))
+            if (Directory.GetFiles(dir).Any(f => f.EndsWith(".ppn", StringComparison.Ordinal) || f.EndsWith(".cir", StringComparison.Ordinal)))
+                data.Add(Path.GetFileName(dir));
+        return data;
+    }
+
+    [Theory]
+    [MemberData(nameof(ExampleNetlists))]
+    public void Every_example_netlist_imports_and_places_into_projects_that_validate(string example)
+    {
+        var dir = Path.Combine(TestPaths.Examples, example);
+        var netlist = Directory.GetFiles(dir).Where(f => f.EndsWith(".ppn", StringComparison.Ordinal) || f.EndsWith(".cir", StringComparison.Ordinal)).Order(StringComparer.Ordinal).First();
+        var library = PadPlan.Import.FootprintLibrary.Load();
+        var partsFile = Path.Combine(dir, "parts.json");
+        var map = File.Exists(partsFile) ? PadPlan.Import.PartsMap.Read(partsFile, library) : null;
+        var imported = PadPlan.Import.NetlistImporter.ImportFile(netlist, new PadPlan.Import.ImportOptions(library, map)).Project;
+        var placed = PadPlan.Planning.Placer.Place(imported, new PadPlan.Planning.PlacerSettings(Effort: PadPlan.Planning.Effort.Quick));
+        Assert.True(placed.Succeeded, placed.Failure?.Message);
+        var outDir = TestPaths.NewTempDir();
+        foreach (var (name, project) in new[] { ("imported", imported), ("placed", placed.Project!) })
+        {
+            var file = Path.Combine(outDir, name + ProjectFile.Extension);
+            ProjectFile.Write(project, file);
+            AssertValid(Load("project.schema.json"), file);
+        }
+    }
+
     [Fact]
     public void The_schema_rejects_a_bad_rotation()
     {
