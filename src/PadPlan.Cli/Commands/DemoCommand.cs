@@ -96,7 +96,9 @@ public static class DemoCommand
         context.Out.WriteLine("  *.svg, *.png       the same pages one by one");
         context.Out.WriteLine("  check.txt/.json    the check report");
         context.Out.WriteLine("  cutlist.txt, bom.txt/.csv, build-order.txt, testplan.txt/.csv");
-        context.Out.WriteLine("Caution: cutting board raises glass-fibre dust (cut wet or with extraction, eye protection, dust mask); solder flux fume causes asthma (use extraction).");
+        if (Output.Cautions.HighVoltageWarning(project) is { } hv) context.Out.WriteLine($"Caution: {hv}");
+        context.Out.WriteLine($"Caution: {Output.Cautions.GlassFibre}");
+        context.Out.WriteLine($"Caution: {Output.Cautions.Flux}");
         return check.Errors > 0 ? ExitCodes.RuleViolations : ExitCodes.Success;
     }
 

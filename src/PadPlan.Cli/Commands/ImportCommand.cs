@@ -55,9 +55,7 @@ public static class ImportCommand
                 var assumed = p.Parts.Count(x => x.FootprintAssumed);
                 context.Err.WriteLine($"imported {p.Parts.Count} parts, {p.Nets.Count} nets, {p.Footprints.Count} footprints" +
                     (assumed > 0 ? $" ({assumed} assumed: see the warnings)" : "") + $"; wrote {outFile.FullName}");
-                var hv = p.Nets.Where(n => n.Class == Model.NetClass.Hv).Select(n => n.Name).ToList();
-                if (hv.Count > 0)
-                    context.Err.WriteLine($"caution: high voltage on {string.Join(", ", hv)}. Filter capacitors hold a lethal charge after switch-off: discharge and measure before touching. Mains wiring follows local codes and licensed practice.");
+                if (Output.Cautions.HighVoltageWarning(p) is { } hv) context.Err.WriteLine($"caution: {hv}");
             }
             return ExitCodes.Success;
         }));

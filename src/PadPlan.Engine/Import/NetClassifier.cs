@@ -1,3 +1,4 @@
+using PadPlan.Model.Standards;
 using PadPlan.Model;
 
 namespace PadPlan.Import;
@@ -5,14 +6,11 @@ namespace PadPlan.Import;
 /// <summary>Gives a net its class and role when the netlist does not state them. Deliberately simple, and documented in docs/netlist-format.md.</summary>
 public static class NetClassifier
 {
-    /// <summary>Above this voltage a net is high-voltage: where IPC-2221 Table 6-1 spacing first steps up past the low-voltage rows (DOMAIN §5).</summary>
-    public const double HighVoltage = 50.0;
-
     public static Net ToNet(NetFacts f)
     {
         var ground = f.Ground ?? NetNames.IsGround(f.Name);
         var cls = f.Class ?? (ground ? NetClass.Power
-            : f.Voltage is { } v && Math.Abs(v) > HighVoltage ? NetClass.Hv
+            : f.Voltage is { } v && HighVoltage.Applies(v) ? NetClass.Hv
             : f.Supply ? NetClass.Power
             : NetClass.General);
         var role = f.Role ?? (NetNames.LooksLikeOutput(f.Name) ? SignalRole.Output : SignalRole.None);

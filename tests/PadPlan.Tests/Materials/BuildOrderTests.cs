@@ -61,8 +61,8 @@ public sealed class BuildOrderTests
     {
         var project = LinkedProject();
         var text = TableText.ToText(BuildOrder.Table(project));
-        Assert.Contains("cyanoacrylate", text);
-        Assert.Contains("flux fume", text);
+        Assert.Contains("cyanoacrylate", text, StringComparison.OrdinalIgnoreCase);
+        Assert.Contains("flux fume", text, StringComparison.OrdinalIgnoreCase);
         Assert.DoesNotContain("above 50 V", text);
         var hv = project with { Nets = project.Nets.Select(n => n.Name == "MID" ? new Net("MID", Voltage: 250) : n).ToValueList() };
         Assert.Contains("above 50 V", TableText.ToText(BuildOrder.Table(hv)));

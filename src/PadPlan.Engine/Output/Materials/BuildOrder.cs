@@ -1,3 +1,4 @@
+using PadPlan.Output;
 using PadPlan.Model;
 using PadPlan.Output.Tables;
 
@@ -60,18 +61,17 @@ public static class BuildOrder
                 ? $"Steps follow the signal path from the input ({string.Join(", ", inputs)}){(outputs.Count > 0 ? $" to the output ({string.Join(", ", outputs)})" : "")}; within a stage, low parts before tall ones."
                 : $"No net is marked as input, so the steps go across the board from left to right in {ColumnWidth:0} mm columns; low parts before tall ones.",
             "Ground leads go straight to the plane, as short as the part allows.",
-            Cautions.Glue,
-            Cautions.SolderFume,
+            "Caution: " + Cautions.Glue,
+            "Caution: " + Cautions.Flux,
         };
         var unplaced = project.Parts.Where(p => project.Layout?.Placements.All(x => x.Ref != p.Ref) ?? true).Select(p => p.Ref).ToList();
         if (unplaced.Count > 0) notes.Insert(0, $"Not placed, so not in these steps: {string.Join(", ", unplaced)}.");
-        if (project.Nets.Any(IsHighVoltage)) notes.Add(Cautions.HighVoltage);
+        if (Cautions.HighVoltageWarning(project) is { } hv) notes.Add("Caution: " + hv);
         return ReportTable.Create("Build order", ["Step", "Do", "What", "Where", "Note"],
             Steps(project).Select(s => new[] { s.Number.ToString(), s.Action, s.What, s.Where, s.Note }), notes);
     }
 
     /// <summary>A net whose voltage or class calls for the high-voltage caution (above 50 V; DOMAIN §7).</summary>
-    public static bool IsHighVoltage(Net net) => net.Class == NetClass.Hv || Math.Abs(net.Voltage ?? 0) > 50;
 
     /// <summary>Whether a net is a hub that the signal path does not run through: ground and supply rails.</summary>
     public static bool IsRail(Net? net) => net is not null && (net.Ground || net.Class == NetClass.Power);

@@ -1,3 +1,4 @@
+using PadPlan.Output;
 using PadPlan.Model;
 using PadPlan.Output.Tables;
 using PadPlan.Planning.Cutting;
@@ -46,7 +47,7 @@ public static class CutListTables
                 ? $"DOES NOT FIT: {p.Id} ({Mm.Size(p.Width, p.Height)} mm, {Mm.Of(p.Thickness)} mm board): the stock is too small. Add a larger piece with --stock."
                 : $"DOES NOT FIT: {p.Id} needs {Mm.Of(p.Thickness)} mm board and no stock of that thickness is given. Add one with --stock WxHx{Mm.Of(p.Thickness)}.");
         notes.Add("Every cut runs straight from edge to edge of the part being cut: start with a cut right across the stock that no piece straddles, then divide each part the same way.");
-        notes.Add(Cautions.GlassFibreDust);
+        notes.Add("Caution: " + Cautions.GlassFibre);
         return ReportTable.Create("Cutting plan (corner of each piece from the stock's corner; Turned = lies across)",
             ["Stock", "Piece", "At x, y (mm)", "Size on stock (mm)", "Turned"], rows, notes);
     }

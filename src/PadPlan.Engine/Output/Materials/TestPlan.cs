@@ -1,3 +1,4 @@
+using PadPlan.Output;
 using PadPlan.Model;
 using PadPlan.Output.Tables;
 
@@ -66,7 +67,7 @@ public static class TestPlan
             "Electrolytic capacitors may beep briefly while they charge from the meter; the sound should stop.",
             "ICs: internal protection diodes may make a pin read low one way round to a supply or ground pin.",
         };
-        if (project.Nets.Any(BuildOrder.IsHighVoltage)) notes.Add(Cautions.HighVoltage);
+        if (Cautions.HighVoltageWarning(project) is { } hv) notes.Add("Caution: " + hv);
         return ReportTable.Create("Continuity test plan", ["#", "Test", "Probe A", "Probe B", "Expect", "Why", "Done"], rows, notes);
     }
 

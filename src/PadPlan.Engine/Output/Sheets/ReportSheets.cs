@@ -1,3 +1,4 @@
+using PadPlan.Output;
 using System.Globalization;
 using PadPlan.Output.Tables;
 using PadPlan.Rules;

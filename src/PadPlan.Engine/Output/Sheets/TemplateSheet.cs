@@ -1,3 +1,4 @@
+using PadPlan.Output;
 using System.Globalization;
 using PadPlan.Model;
 using PadPlan.Output.Drawing;

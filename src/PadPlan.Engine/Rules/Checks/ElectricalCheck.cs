@@ -6,10 +6,6 @@ namespace PadPlan.Rules.Checks;
 /// <summary>High voltage over a pad's own stock edge (IPC-2221 Table 6-1, B2), the usual cautions, and current in narrow copper (IPC-2221 conductor formula).</summary>
 internal static class ElectricalCheck
 {
-    // Above this the report shows the high-voltage cautions. Common practice, no source: the usual
-    // extra-low-voltage limit of about 50 V, from memory.
-    public const double CautionVolts = 50;
-
     public static IEnumerable<Finding> Run(CheckContext ctx)
     {
         foreach (var c in ctx.Plan.Copper)
@@ -24,10 +20,10 @@ internal static class ElectricalCheck
                     c.Island.Center, c.Id, net!);
         }
 
-        var high = ctx.Plan.Project.Nets.Where(n => Math.Abs(n.Voltage ?? 0) >= CautionVolts).Select(n => n.Name).ToList();
+        var high = ctx.Plan.Project.Nets.Where(HighVoltage.Applies).Select(n => n.Name).ToList();
         if (high.Count > 0)
             yield return Findings.Info(RuleIds.HvCaution,
-                $"{(high.Count == 1 ? "net" : "nets")} {string.Join(", ", high)} {(high.Count == 1 ? "carries" : "carry")} {CautionVolts} V or more. Capacitors hold a lethal charge after switch-off: discharge through a resistor and measure before touching; keep one hand away from the chassis.",
+                $"{(high.Count == 1 ? "net" : "nets")} {string.Join(", ", high)} {(high.Count == 1 ? "carries" : "carry")} more than {HighVoltage.Threshold} V or {(high.Count == 1 ? "is" : "are")} marked hv. Capacitors hold a lethal charge after switch-off: discharge through a resistor and measure before touching; keep one hand away from the chassis.",
                 "Follow local codes and licensed practice for mains and high-voltage wiring; this check does not replace them.",
                 null, high);
 
