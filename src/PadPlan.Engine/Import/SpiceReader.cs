@@ -233,9 +233,12 @@ public static partial class SpiceReader
                 var landing = $"W{next}";
                 used.Add(landing);
                 var heater = new[] { reference, plus, minus }.Any(s => HeaterName().IsMatch(s));
-                var role = heater ? "heater" : current ? "current source" : spec.IsSignal ? "input" : "supply";
+                // A current source of 0 A drives nothing: SPICE users put one on a node only to mark a port (an output).
+                var port = current && !spec.IsSignal && spec.Dc is null or 0;
+                var role = heater ? "heater" : port ? "output" : current ? "current source" : spec.IsSignal ? "input" : "supply";
                 var unit = current ? "A" : "V";
-                var size = spec.IsSignal
+                var size = port ? ""
+                    : spec.IsSignal
                     ? spec.Largest is { } peak ? $", {new ComponentValue(peak, unit).ToDisplay()} peak" : ""
                     : spec.Dc is { } dcValue ? $", {new ComponentValue(dcValue, unit).ToDisplay()} DC" : "";
                 parts.Add(new NetlistPart(landing, PartKind.Landing, $"{role} wires ({reference}{size})", null, null, null, null,
