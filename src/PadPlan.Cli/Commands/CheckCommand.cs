@@ -2,7 +2,7 @@ using System.CommandLine;
 using PadPlan.IO;
 using PadPlan.ProjectFiles;
 using PadPlan.Rules;
-using PadPlan.Rules.Reporting;
+using PadPlan.Output.CheckReports;
 
 namespace PadPlan.Cli.Commands;
 

@@ -8,7 +8,7 @@ using PadPlan.Planning;
 using PadPlan.Planning.Cutting;
 using PadPlan.ProjectFiles;
 using PadPlan.Rules;
-using PadPlan.Rules.Reporting;
+using PadPlan.Output.CheckReports;
 
 namespace PadPlan.Cli.Commands;
 

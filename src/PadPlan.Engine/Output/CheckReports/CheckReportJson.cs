@@ -1,7 +1,8 @@
+using PadPlan.Rules;
 using System.Text;
 using System.Text.Json;
 
-namespace PadPlan.Rules.Reporting;
+namespace PadPlan.Output.CheckReports;
 
 /// <summary>Writes a check report as JSON for scripts and CI: rule id, severity, location in mm, items, message and hint.</summary>
 public static class CheckReportJson

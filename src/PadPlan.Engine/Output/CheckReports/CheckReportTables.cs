@@ -1,8 +1,9 @@
+using PadPlan.Rules;
 using PadPlan.Model;
 using PadPlan.Output.Tables;
 using PadPlan.Rules.Checks;
 
-namespace PadPlan.Rules.Reporting;
+namespace PadPlan.Output.CheckReports;
 
 /// <summary>A check report as tables, one per severity (errors first), then the parasitic estimates: for the terminal and the report page.</summary>
 public static class CheckReportTables

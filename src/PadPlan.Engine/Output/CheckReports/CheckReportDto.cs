@@ -1,6 +1,7 @@
+using PadPlan.Rules;
 using System.Text.Json.Serialization;
 
-namespace PadPlan.Rules.Reporting;
+namespace PadPlan.Output.CheckReports;
 
 // The JSON shape of a check report (format "padplan-check/1"), kept apart from the records so the file can stay stable.
 
