@@ -165,21 +165,13 @@ internal sealed class Annealer
             case MoveKind.PadToLeads:
             {
                 var i = _pads[_rng.Next(_pads.Length)];
-                var (x, y) = LeadCentre(i);
-                _s.Begin(i);
-                var jitter = Math.Min(range, 2.0);
-                _s.X[i] = Math.Clamp(x + _rng.Between(-jitter, jitter), r.MinX, r.MaxX);
-                _s.Y[i] = Math.Clamp(y + _rng.Between(-jitter, jitter), r.MinY, r.MaxY);
+                JumpNear(i, LeadCentre(i), range, r);
                 break;
             }
             case MoveKind.PartToPads:
             {
                 var i = _parts[_rng.Next(_parts.Length)];
-                var (x, y) = PadCentre(i);
-                _s.Begin(i);
-                var jitter = Math.Min(range, 2.0);
-                _s.X[i] = Math.Clamp(x + _rng.Between(-jitter, jitter), r.MinX, r.MaxX);
-                _s.Y[i] = Math.Clamp(y + _rng.Between(-jitter, jitter), r.MinY, r.MaxY);
+                JumpNear(i, PadCentre(i), range, r);
                 break;
             }
             case MoveKind.SwapParts:
@@ -208,6 +200,15 @@ internal sealed class Annealer
     }
 
     /// <summary>Where a part would sit if each of its free leads' exits lay on the island it lands on, averaged; its position when it has none.</summary>
+    /// <summary>Moves an item to a target point, jittered by up to 2 mm (less when the move range is smaller), kept inside the region.</summary>
+    private void JumpNear(int i, (double X, double Y) target, double range, Region r)
+    {
+        _s.Begin(i);
+        var jitter = Math.Min(range, 2.0);
+        _s.X[i] = Math.Clamp(target.X + _rng.Between(-jitter, jitter), r.MinX, r.MaxX);
+        _s.Y[i] = Math.Clamp(target.Y + _rng.Between(-jitter, jitter), r.MinY, r.MaxY);
+    }
+
     private (double X, double Y) PadCentre(int partItem)
     {
         var p = _s.Problem;
