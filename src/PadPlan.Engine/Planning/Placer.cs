@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using System.Globalization;
 using PadPlan.Model;
+using PadPlan.Model.Standards;
 
 namespace PadPlan.Planning;
 
@@ -12,6 +13,7 @@ public static class Placer
         var clock = Stopwatch.StartNew();
         if (project.Parts.Count == 0)
             return PlacementResult.Failed(new PlacementFailure("the project has no parts to place.", "Import a netlist into the project first ('padplan import')."));
+        if (StockTooThin(project) is { } thin) return PlacementResult.Failed(thin);
         try
         {
             var problem = ProblemBuilder.Build(project, settings, CostWeights.Default);
@@ -39,6 +41,24 @@ public static class Placer
         {
             return PlacementResult.Failed(e.Failure);
         }
+    }
+
+    /// <summary>
+    /// A pad is separated from the plane only by the edge of its own stock, so the stock must be as thick as IPC-2221 Table 6-1 (B2)
+    /// asks for the net's voltage. No placement can mend thin stock: say so before annealing.
+    /// </summary>
+    private static PlacementFailure? StockTooThin(Project project)
+    {
+        var worst = project.Nets.Where(n => !n.Ground && n.Voltage is not null)
+            .Select(n => (Net: n, Need: ConductorSpacing.B2(n.Voltage!.Value)))
+            .Where(x => x.Need > project.Toolkit.StockThickness + 1e-9)
+            .OrderByDescending(x => x.Need).ThenBy(x => x.Net.Name, StringComparer.Ordinal)
+            .FirstOrDefault();
+        if (worst.Net is null) return null;
+        var mm = worst.Need.ToString("0.##", CultureInfo.InvariantCulture);
+        return new PlacementFailure(
+            string.Create(CultureInfo.InvariantCulture, $"net {worst.Net.Name} at {worst.Net.Voltage:0.#} V needs pads cut from stock at least {mm} mm thick ({ConductorSpacing.Revision}, B2: the pad's edge is its only insulation from the plane); the toolkit's stock is {project.Toolkit.StockThickness:0.##} mm."),
+            $"Set toolkit.stockThickness to {mm} or more in the project, or stand the high-voltage nodes off the board; mains safety standards come first.");
     }
 
     /// <summary>The best of several independent runs: legal first, then lowest cost, then lowest run number. Seeds are fixed per run, so threads never change the answer.</summary>
