@@ -82,7 +82,7 @@ if (write is not null)
     var path = Path.Combine(root, write);
     var text = File.Exists(path) ? File.ReadAllText(path) : "";
     const string begin = "<!-- results:begin -->", end = "<!-- results:end -->";
-    var block = $"{begin}\n{machine}\n\nEffort {effort.ToString().ToLowerInvariant()}, seed {seed}, {settings.Runs} runs per case.\n\n{table}{end}";
+    var block = $"{begin}\n{machine}\n\nEffort {effort.ToString().ToLowerInvariant()}, seed {seed}, {settings.RunsFor(PlacerSettings.SmallCircuit)} runs per case up to {PlacerSettings.SmallCircuit} parts, {settings.RunsFor(PlacerSettings.SmallCircuit + 1)} above.\n\n{table}{end}";
     var a = text.IndexOf(begin, StringComparison.Ordinal);
     var b = text.IndexOf(end, StringComparison.Ordinal);
     text = a >= 0 && b > a ? text[..a] + block + text[(b + end.Length)..] : text + "\n" + block + "\n";

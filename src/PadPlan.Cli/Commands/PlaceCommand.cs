@@ -21,7 +21,7 @@ public static class PlaceCommand
             var file = parse.GetValue(project)!;
             var input = ProjectFile.Read(file.FullName);
             var settings = new PlacerSettings(parse.GetValue(seed), Enum.Parse<Effort>(parse.GetValue(effort)!, ignoreCase: true), parse.GetValue(keep));
-            var result = Placer.Place(input, settings, parse.GetValue(quiet) ? null : new StderrProgress(context.Err, settings.Runs));
+            var result = Placer.Place(input, settings, parse.GetValue(quiet) ? null : new StderrProgress(context.Err, settings.RunsFor(input.Parts.Count)));
             if (!result.Succeeded)
             {
                 context.Err.WriteLine($"error: {result.Failure!.Message}");

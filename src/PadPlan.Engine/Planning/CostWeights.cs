@@ -17,7 +17,7 @@ internal sealed record CostWeights
     /// <summary>Cost per mm a flat-lying body reaches over another part's pad: it rests on the joint.</summary>
     public double FlatBodyOverPad { get; init; } = 5;
     /// <summary>Cost per mm a standing body reaches over another part's pad: it hides the joint but does not rest on it.</summary>
-    public double UprightBodyOverPad { get; init; } = 1;
+    public double UprightBodyOverPad { get; init; } = 0.3;
     /// <summary>Weight of hard-rule violations at the start and end of annealing; it rises step by step.</summary>
     public double PenaltyStart { get; init; } = 20.0;
     public double PenaltyEnd { get; init; } = 400.0;

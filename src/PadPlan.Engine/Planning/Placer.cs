@@ -64,7 +64,8 @@ public static class Placer
     /// <summary>The best of several independent runs: legal first, then lowest cost, then lowest run number. Seeds are fixed per run, so threads never change the answer.</summary>
     internal static RunOutcome RunAll(PlacementProblem problem, PlacerSettings settings, IProgress<PlacerProgress>? progress)
     {
-        var results = new RunOutcome[settings.Runs];
+        var runs = settings.RunsFor(problem.Project.Parts.Count);
+        var results = new RunOutcome[runs];
         void One(int k)
         {
             var state = new AnnealState(problem);
@@ -82,10 +83,10 @@ public static class Placer
             progress?.Report(new PlacerProgress(k + 1, legal ? "legal" : "not legal", 0, state.Cost, state.Violation));
             results[k] = new RunOutcome(state, legal, annealer.Stats.TotalTried);
         }
-        if (settings.AllowThreads && settings.Runs > 1)
-            Parallel.For(0, settings.Runs, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, One);
+        if (settings.AllowThreads && runs > 1)
+            Parallel.For(0, runs, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, One);
         else
-            for (var k = 0; k < settings.Runs; k++) One(k);
+            for (var k = 0; k < runs; k++) One(k);
         var best = results.Select((r, k) => (r, k)).OrderBy(x => x.r.Legal ? 0 : 1).ThenBy(x => x.r.Legal ? 0 : x.r.State.Violation).ThenBy(x => x.r.State.Cost).ThenBy(x => x.k).First().r;
         return best with { Moves = results.Sum(r => r.Moves) };
     }

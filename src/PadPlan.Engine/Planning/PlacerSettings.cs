@@ -9,8 +9,11 @@ public sealed record PlacerSettings(int Seed = 1, Effort Effort = Effort.Normal,
 {
     public static PlacerSettings Default { get; } = new();
 
-    /// <summary>Independent runs (seeds Seed, Seed+1, ...) whose best result is kept; fixed per effort so the result never depends on the machine.</summary>
-    public int Runs => Effort == Effort.Thorough ? 4 : 2;
+    /// <summary>Circuits up to this many parts get twice the runs: each run is cheap, and the best of more seeds is markedly better.</summary>
+    public const int SmallCircuit = 30;
+
+    /// <summary>Independent runs (seeds Seed, Seed+1, ...) whose best result is kept; fixed by effort and circuit size, so the result never depends on the machine.</summary>
+    public int RunsFor(int parts) => (Effort == Effort.Thorough ? 4 : 2) * (parts <= SmallCircuit ? 2 : 1);
 
     /// <summary>Scale of moves per temperature relative to the VPR default of N^(4/3).</summary>
     public double MovesFactor => Effort switch
