@@ -1,3 +1,4 @@
+using PadPlan.Model;
 using PadPlan.Output.Materials;
 using static PadPlan.Tests.Materials.Circuits;
 
@@ -48,5 +49,5 @@ public sealed class BomTableTests
     [InlineData("U1.2", "U1.10", -1)]
     [InlineData("R1", "R1", 0)]
     public void References_sort_as_a_builder_reads_them(string a, string b, int sign) =>
-        Assert.Equal(sign, Math.Sign(PartKinds.CompareRefs(a, b)));
+        Assert.Equal(sign, Math.Sign(NaturalOrder.Compare(a, b)));
 }

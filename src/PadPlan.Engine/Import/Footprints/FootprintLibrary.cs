@@ -48,7 +48,7 @@ public sealed class FootprintLibrary
                     all.Add(footprint);
                 }
         }
-        return new FootprintLibrary(all.OrderBy(f => f.Family, StringComparer.Ordinal).ThenBy(f => f.Name, StringComparer.Ordinal).ToList());
+        return new FootprintLibrary(all.OrderBy(f => f.Family, StringComparer.Ordinal).ThenBy(f => f.Name, NaturalOrder.Comparer).ToList());
     }
 
     /// <summary>The bundled footprints/ folder: beside the program, else found by walking up from it (tests and development runs).</summary>

@@ -19,7 +19,7 @@ public static class BomTable
                 var first = g.First();
                 var series = first.Value is { } v && PartKinds.HasSeriesValue(g.Key.Kind) ? SeriesText(v.Number) : "";
                 var code = first.Value is { } c && PartKinds.HasSeriesValue(g.Key.Kind) ? c.ToIecCode() : "";
-                var refs = g.Select(x => x.Part.Ref).Order(PartKinds.RefOrder);
+                var refs = g.Select(x => x.Part.Ref).Order(NaturalOrder.Comparer);
                 return new[]
                 {
                     g.Count().ToString(), PartKinds.Name(g.Key.Kind), PartValue.Display(first.Part, first.Kind), code, series,

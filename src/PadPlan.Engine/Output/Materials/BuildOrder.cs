@@ -29,10 +29,10 @@ public static class BuildOrder
 
         void GlueAndLink(IEnumerable<Pad> pads)
         {
-            var fresh = pads.Where(p => glued.Add(p.Id)).DistinctBy(p => p.Id).OrderBy(p => p.Id, PartKinds.RefOrder).ToList();
+            var fresh = pads.Where(p => glued.Add(p.Id)).DistinctBy(p => p.Id).OrderBy(p => p.Id, NaturalOrder.Comparer).ToList();
             if (fresh.Count > 0)
                 Add("Glue pads", string.Join(", ", fresh.Select(p => p.Id)), "nets " + string.Join(", ", fresh.SelectMany(NetsOf).Distinct()), "copper up; see the placement sheet");
-            foreach (var j in layout.Jumpers.Where(j => !linked.Contains(j.Id) && IsDown(j.From) && IsDown(j.To)).OrderBy(j => j.Id, PartKinds.RefOrder))
+            foreach (var j in layout.Jumpers.Where(j => !linked.Contains(j.Id) && IsDown(j.From) && IsDown(j.To)).OrderBy(j => j.Id, NaturalOrder.Comparer))
             {
                 linked.Add(j.Id);
                 Add("Fit wire link", j.Id, $"{j.From} to {j.To}", "insulated if it crosses other copper");
@@ -43,7 +43,7 @@ public static class BuildOrder
         foreach (var group in placed.GroupBy(p => stage[p.Ref]).OrderBy(g => g.Key))
         {
             GlueAndLink(group.SelectMany(p => placements[p.Ref].Leads).Where(l => l.Pad is not null && padOfIsland.ContainsKey(l.Pad)).Select(l => padOfIsland[l.Pad!]));
-            foreach (var part in group.OrderBy(p => project.FindFootprint(p.Footprint)?.Height ?? 0).ThenBy(p => p.Ref, PartKinds.RefOrder))
+            foreach (var part in group.OrderBy(p => project.FindFootprint(p.Footprint)?.Height ?? 0).ThenBy(p => p.Ref, NaturalOrder.Comparer))
                 Add("Solder", Describe(project, part), string.Join(", ", placements[part.Ref].Leads.Select(l => $"{l.Pin} to {l.Pad ?? "plane"}")), GroundNote(project, part, placements[part.Ref]));
         }
         GlueAndLink(layout.Pads);

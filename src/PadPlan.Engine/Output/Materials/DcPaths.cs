@@ -61,7 +61,7 @@ public sealed class DcPaths
         var junctions = new List<(string Anode, string Cathode, string Part, bool Known)>();
         var maybes = new List<(string A, string B, string Part, string Note)>();
 
-        foreach (var part in project.Parts.OrderBy(p => p.Ref, PartKinds.RefOrder))
+        foreach (var part in project.Parts.OrderBy(p => p.Ref, NaturalOrder.Comparer))
         {
             var kind = PartKinds.Of(part, project.FindFootprint(part.Footprint));
             var pins = part.Pins.Select(p => (Pin: p.Pin, Net: Node(p.Net))).ToList();

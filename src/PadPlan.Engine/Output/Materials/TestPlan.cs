@@ -23,7 +23,7 @@ public static class TestPlan
     public static ReportTable Sheet(Project project, DcPaths paths)
     {
         var layout = project.Layout ?? throw new ArgumentException("the project has no layout; place it first.", nameof(project));
-        var islands = layout.Islands().OrderBy(i => i.Id, PartKinds.RefOrder).ToList();
+        var islands = layout.Islands().OrderBy(i => i.Id, NaturalOrder.Comparer).ToList();
         var rows = new List<string[]>();
         void Row(string test, string a, string b, string expect, string why) =>
             rows.Add([(rows.Count + 1).ToString(), test, a, b, expect, why, ""]);
@@ -34,7 +34,7 @@ public static class TestPlan
             foreach (var other in net.Skip(1))
                 Row("joined", first.Id, other.Id, "beeps", $"both on {net.Key}: {LinkText(layout, first.Id, other.Id)}");
         }
-        var grounded = layout.Placements.OrderBy(p => p.Ref, PartKinds.RefOrder)
+        var grounded = layout.Placements.OrderBy(p => p.Ref, NaturalOrder.Comparer)
             .SelectMany(p => p.Leads.Where(l => l.OnPlane).Select(l => $"{p.Ref}.{l.Pin}")).ToList();
         if (grounded.Count > 0)
             Row("joined", DcPaths.Plane, string.Join(" ", grounded), "each beeps", "probe each ground lead at its joint: silence means it is not soldered to the plane");
@@ -45,7 +45,7 @@ public static class TestPlan
         var seen = new HashSet<(string, string)>();
         foreach (var island in islands.Where(i => i.Net is not null))
         {
-            var others = islands.Where(o => o.Net is not null && o.Net != island.Net).Select(o => (Island: o, Gap: IslandGap.Between(island, o))).OrderBy(x => x.Gap).ThenBy(x => x.Island.Id, PartKinds.RefOrder).ToList();
+            var others = islands.Where(o => o.Net is not null && o.Net != island.Net).Select(o => (Island: o, Gap: IslandGap.Between(island, o))).OrderBy(x => x.Gap).ThenBy(x => x.Island.Id, NaturalOrder.Comparer).ToList();
             var near = others.Where(x => x.Gap <= NeighbourGap).ToList();
             if (near.Count == 0 && others.Count > 0) near.Add(others[0]);
             foreach (var (other, gap) in near)
