@@ -37,16 +37,7 @@ public static class ProjectFile
     /// <summary>Parses and checks project JSON; the file name is used in messages only.</summary>
     public static Project Parse(byte[] bytes, string fileName)
     {
-        ProjectDto? dto;
-        try
-        {
-            dto = JsonSerializer.Deserialize(bytes, ProjectJsonContext.Default.ProjectDto);
-        }
-        catch (JsonException e)
-        {
-            throw new InputException(fileName, Explain(e), (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1, e.Path, e);
-        }
-        if (dto is null) throw new InputException(fileName, "the file holds JSON null, not a project.", 1);
+        var dto = JsonInput.Deserialize(bytes, ProjectJsonContext.Default.ProjectDto, fileName, "a project");
         var reader = new DtoReader(fileName, bytes);
         if (dto.Format is null)
             throw reader.Fail("$.format", $"missing \"format\": a PadPlan project file starts with \"format\": \"{FormatTag}\".");
@@ -79,28 +70,4 @@ public static class ProjectFile
 
     /// <summary>Writes a project atomically: the old file stays whole until the new one is complete.</summary>
     public static void Write(Project project, string path) => AtomicFile.WriteAllBytes(path, ToBytes(project));
-
-    private static string Explain(JsonException e)
-    {
-        var message = e.Message;
-        var cut = message.IndexOf(" Path:", StringComparison.Ordinal);
-        if (cut > 0) message = message[..cut];
-        var converted = System.Text.RegularExpressions.Regex.Match(message, @"could not be converted to (?<type>[^ ]+?)\.?$");
-        if (converted.Success)
-            message = $"expected {FriendlyType(converted.Groups["type"].Value)} here. Numbers go without quotes, text in quotes, lists in [ ].";
-        if (message.Contains("'0x", StringComparison.Ordinal) || message.Contains("end of data", StringComparison.OrdinalIgnoreCase) || message.Contains("expected depth", StringComparison.OrdinalIgnoreCase))
-            message += " The JSON is broken or cut short; check brackets, commas and quotes.";
-        return message;
-    }
-
-    private static string FriendlyType(string clrType) => clrType switch
-    {
-        _ when clrType.Contains("Double", StringComparison.Ordinal) && clrType.Contains("[]", StringComparison.Ordinal) => "a point [x, y]",
-        _ when clrType.Contains("Double", StringComparison.Ordinal) || clrType.Contains("Int32", StringComparison.Ordinal) => "a number",
-        _ when clrType.Contains("Boolean", StringComparison.Ordinal) => "true or false",
-        _ when clrType.Contains("List", StringComparison.Ordinal) => "a list [ ... ]",
-        _ when clrType.Contains("Dictionary", StringComparison.Ordinal) => "an object { \"name\": \"value\" }",
-        "System.String" => "text in quotes",
-        _ => "an object { ... }",
-    };
 }

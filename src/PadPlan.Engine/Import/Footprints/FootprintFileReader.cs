@@ -1,4 +1,3 @@
-using System.Text.Json;
 using PadPlan.IO;
 using PadPlan.Model;
 using PadPlan.ProjectFiles;
@@ -27,17 +26,8 @@ public static class FootprintFileReader
 
     public static IReadOnlyList<(Footprint Footprint, string Path)> Parse(byte[] bytes, string file)
     {
-        FootprintFileDto? dto;
-        try
-        {
-            dto = JsonSerializer.Deserialize(bytes, ProjectJsonContext.Default.FootprintFileDto);
-        }
-        catch (JsonException e)
-        {
-            throw new InputException(file, $"not a readable footprint file: {FirstSentence(e.Message)}", (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1, e.Path, e);
-        }
+        var dto = JsonInput.Deserialize(bytes, ProjectJsonContext.Default.FootprintFileDto, file, "footprints");
         var reader = new DtoReader(file, bytes);
-        if (dto is null) throw new InputException(file, "the file holds JSON null, not footprints.", 1);
         if (dto.Format != FormatTag)
             throw reader.Fail("$.format", $"a footprint file starts with \"format\": \"{FormatTag}\" (found {(dto.Format is null ? "nothing" : $"\"{dto.Format}\"")}).");
         var family = reader.Need(dto.Family, "$.family", "family name (e.g. \"resistors\")");
@@ -53,9 +43,4 @@ public static class FootprintFileReader
     }
 
     /// <summary>A System.Text.Json message without its trailing path and position, which the caller reports itself.</summary>
-    internal static string FirstSentence(string message)
-    {
-        var cut = message.IndexOf(" Path:", StringComparison.Ordinal);
-        return cut > 0 ? message[..cut] : message;
-    }
 }

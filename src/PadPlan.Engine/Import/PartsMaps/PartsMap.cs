@@ -1,4 +1,3 @@
-using System.Text.Json;
 using PadPlan.IO;
 using PadPlan.Model;
 using PadPlan.ProjectFiles;
@@ -48,17 +47,8 @@ public sealed class PartsMap
 
     public static PartsMap Parse(byte[] bytes, string file, FootprintLibrary library)
     {
-        PartsMapDto? dto;
-        try
-        {
-            dto = JsonSerializer.Deserialize(bytes, ImportJsonContext.Default.PartsMapDto);
-        }
-        catch (JsonException e)
-        {
-            throw new InputException(file, $"not a readable parts map: {FootprintFileReader.FirstSentence(e.Message)}", (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1, e.Path, e);
-        }
+        var dto = JsonInput.Deserialize(bytes, ImportJsonContext.Default.PartsMapDto, file, "a parts map");
         var reader = new DtoReader(file, bytes);
-        if (dto is null) throw new InputException(file, "the file holds JSON null, not a parts map.", 1);
         if (dto.Format != FormatTag)
             throw reader.Fail("$.format", $"a parts map starts with \"format\": \"{FormatTag}\" (found {(dto.Format is null ? "nothing" : $"\"{dto.Format}\"")}).");
         PartsMapEntry Entry(string key, PartsMapEntryDto e, string path)

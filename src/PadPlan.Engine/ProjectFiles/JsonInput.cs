@@ -1,0 +1,48 @@
+using System.Text.Json;
+using System.Text.Json.Serialization.Metadata;
+using PadPlan.IO;
+
+namespace PadPlan.ProjectFiles;
+
+/// <summary>Deserialises one of PadPlan's JSON files, turning a parse error into an <see cref="InputException"/> with line, column, JSON path and a plain explanation.</summary>
+internal static class JsonInput
+{
+    /// <summary>The DTO, never null; <paramref name="what"/> names the kind of file in messages ("a project", "a parts map").</summary>
+    public static T Deserialize<T>(byte[] bytes, JsonTypeInfo<T> type, string file, string what) where T : class
+    {
+        T? dto;
+        try
+        {
+            dto = JsonSerializer.Deserialize(bytes, type);
+        }
+        catch (JsonException e)
+        {
+            throw new InputException(file, Explain(e), (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1, e.Path, e);
+        }
+        return dto ?? throw new InputException(file, $"the file holds JSON null, not {what}.", 1);
+    }
+
+    private static string Explain(JsonException e)
+    {
+        var message = e.Message;
+        var cut = message.IndexOf(" Path:", StringComparison.Ordinal);
+        if (cut > 0) message = message[..cut];
+        var converted = System.Text.RegularExpressions.Regex.Match(message, @"could not be converted to (?<type>[^ ]+?)\.?$");
+        if (converted.Success)
+            message = $"expected {FriendlyType(converted.Groups["type"].Value)} here. Numbers go without quotes, text in quotes, lists in [ ].";
+        if (message.Contains("'0x", StringComparison.Ordinal) || message.Contains("end of data", StringComparison.OrdinalIgnoreCase) || message.Contains("expected depth", StringComparison.OrdinalIgnoreCase))
+            message += " The JSON is broken or cut short; check brackets, commas and quotes.";
+        return message;
+    }
+
+    private static string FriendlyType(string clrType) => clrType switch
+    {
+        _ when clrType.Contains("Double", StringComparison.Ordinal) && clrType.Contains("[]", StringComparison.Ordinal) => "a point [x, y]",
+        _ when clrType.Contains("Double", StringComparison.Ordinal) || clrType.Contains("Int32", StringComparison.Ordinal) => "a number",
+        _ when clrType.Contains("Boolean", StringComparison.Ordinal) => "true or false",
+        _ when clrType.Contains("List", StringComparison.Ordinal) => "a list [ ... ]",
+        _ when clrType.Contains("Dictionary", StringComparison.Ordinal) => "an object { \"name\": \"value\" }",
+        "System.String" => "text in quotes",
+        _ => "an object { ... }",
+    };
+}
