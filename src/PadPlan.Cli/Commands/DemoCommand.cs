@@ -5,7 +5,6 @@ using PadPlan.Output.Materials;
 using PadPlan.Output.Sheets;
 using PadPlan.Output.Tables;
 using PadPlan.Planning;
-using PadPlan.Planning.Cutting;
 using PadPlan.ProjectFiles;
 using PadPlan.Rules;
 using PadPlan.Output.CheckReports;
@@ -73,10 +72,8 @@ public static class DemoCommand
         say.WriteLine($"3. check: {CheckReportTables.Summary(project.Name, check, strict: false)}");
 
         // 4. materials
-        var cut = CutListTables.From(CutListBuilder.Build(project.Layout, CutOptions.Default));
-        var bom = BomTable.From(project);
-        var order = BuildOrder.Table(project);
-        var tests = TestPlan.Tables(project);
+        var materials = MaterialsTables.Of(project);
+        var (cut, bom, order, tests) = (materials.CutList, materials.Bom, materials.BuildOrder, materials.TestPlan);
         AtomicFile.WriteAllText(Path.Combine(dir, "cutlist.txt"), Text(cut));
         AtomicFile.WriteAllText(Path.Combine(dir, "bom.txt"), TableText.ToText(bom));
         AtomicFile.WriteAllText(Path.Combine(dir, "bom.csv"), TableText.ToCsv(bom));
@@ -86,7 +83,7 @@ public static class DemoCommand
         say.WriteLine($"4. materials: cut list, BOM ({project.Parts.Count} parts), build order ({order.Rows.Count} steps), test plan ({tests[0].Rows.Count} tests)");
 
         // 5. sheets
-        var book = SheetBook.Build(project, new SheetOptions(Paper.A4, printedDate), check, [.. cut, bom, order, .. tests]);
+        var book = SheetBook.Build(project, new SheetOptions(Paper.A4, printedDate), check, materials.All);
         var sheets = SheetOutput.Write(context, book, dir, SheetFormats.All, dpi: 150, list: false);
         say.WriteLine($"5. sheets: {book.Sheets.Count} pages ({sheets.Count} files)");
 

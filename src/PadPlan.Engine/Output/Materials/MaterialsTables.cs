@@ -4,18 +4,18 @@ using PadPlan.Planning.Cutting;
 
 namespace PadPlan.Output.Materials;
 
-/// <summary>Every materials table of a placed project in the order a builder uses them: cut list, BOM, build order, test plan.</summary>
-public static class MaterialsTables
+/// <summary>Every materials table of a placed project: cut list, BOM, build order and test plan, each by name and all in the order a builder uses them.</summary>
+public sealed record MaterialsTables(IReadOnlyList<ReportTable> CutList, ReportTable Bom, ReportTable BuildOrder, IReadOnlyList<ReportTable> TestPlan)
 {
-    public static IReadOnlyList<ReportTable> All(Project project, CutOptions? cut = null)
+    public IReadOnlyList<ReportTable> All => [.. CutList, Bom, BuildOrder, .. TestPlan];
+
+    public static MaterialsTables Of(Project project, CutOptions? cut = null)
     {
         var layout = project.Layout ?? throw new ArgumentException($"project {project.Name} has no layout yet; run 'padplan place' first.", nameof(project));
-        return
-        [
-            .. CutListTables.From(CutListBuilder.Build(layout, cut ?? CutOptions.Default)),
+        return new MaterialsTables(
+            CutListTables.From(CutListBuilder.Build(layout, cut ?? CutOptions.Default)),
             BomTable.From(project),
-            BuildOrder.Table(project),
-            .. TestPlan.Tables(project),
-        ];
+            Materials.BuildOrder.Table(project),
+            Materials.TestPlan.Tables(project));
     }
 }
