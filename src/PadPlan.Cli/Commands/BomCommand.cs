@@ -1,5 +1,5 @@
 using System.CommandLine;
-using PadPlan.Output.Materials;
+using PadPlan.Materials;
 using PadPlan.Output.Tables;
 using PadPlan.ProjectFiles;
 
@@ -23,7 +23,7 @@ public static class BomCommand
             var withOrder = parse.GetValue(buildOrder);
             var loaded = withOrder ? TableOutput.ReadPlaced(file) : ProjectFile.Read(file.FullName);
             var tables = new List<(string Suffix, ReportTable Table)> { ("bom", BomTable.From(loaded)) };
-            if (withOrder) tables.Add(("build-order", BuildOrder.Table(loaded)));
+            if (withOrder) tables.Add(("build-order", BuildOrderTable.Table(loaded)));
             TableOutput.Print(context, tables.Select(t => t.Table));
             var csvFile = parse.GetValue(csv);
             if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, tables);

@@ -1,7 +1,8 @@
+using PadPlan.Output.Tables;
 using System.CommandLine;
-using PadPlan.Output.Materials;
+using PadPlan.Materials;
 using PadPlan.Model;
-using PadPlan.Planning.Cutting;
+using PadPlan.Materials.Cutting;
 
 namespace PadPlan.Cli.Commands;
 

@@ -1,7 +1,7 @@
 using System.CommandLine;
 using PadPlan.Import;
 using PadPlan.IO;
-using PadPlan.Output.Materials;
+using PadPlan.Materials;
 using PadPlan.Output.Sheets;
 using PadPlan.Output.Tables;
 using PadPlan.Planning;

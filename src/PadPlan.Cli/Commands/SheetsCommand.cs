@@ -1,4 +1,4 @@
-using PadPlan.Output.Materials;
+using PadPlan.Materials;
 using PadPlan.Rules;
 using System.CommandLine;
 using System.Globalization;

@@ -1,5 +1,6 @@
+using PadPlan.Output.Tables;
 using System.CommandLine;
-using PadPlan.Output.Materials;
+using PadPlan.Materials;
 
 namespace PadPlan.Cli.Commands;
 
@@ -21,7 +22,7 @@ public static class TestplanCommand
             var placed = TableOutput.ReadPlaced(parse.GetValue(project)!);
             var ohms = parse.GetValue(threshold);
             if (!(ohms > 0) || !double.IsFinite(ohms)) throw new UsageException($"--beep-below {ohms}: give your beeper's threshold in ohms, more than 0 (often 30 to 50).");
-            var tables = TestPlan.Tables(placed, ohms);
+            var tables = TestPlanTables.Tables(placed, ohms);
             TableOutput.Print(context, tables);
             var csvFile = parse.GetValue(csv);
             if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, [("tests", tables[0]), ("paths", tables[1])]);

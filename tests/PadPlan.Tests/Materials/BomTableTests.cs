@@ -1,5 +1,6 @@
+using PadPlan.Output.Tables;
 using PadPlan.Model;
-using PadPlan.Output.Materials;
+using PadPlan.Materials;
 using static PadPlan.Tests.Materials.Circuits;
 
 namespace PadPlan.Tests.Materials;

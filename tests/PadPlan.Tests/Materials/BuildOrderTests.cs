@@ -1,5 +1,5 @@
 using PadPlan.Model;
-using PadPlan.Output.Materials;
+using PadPlan.Materials;
 using PadPlan.Output.Tables;
 using static PadPlan.Tests.Materials.Circuits;
 
@@ -53,19 +53,19 @@ public sealed class BuildOrderTests
         var solder = BuildOrder.Steps(project).Where(s => s.Action == "Solder").Select(s => s.What.Split(' ')[0]).ToList();
         // R1 lands from x = 10, R2 from x = 30, C1 from x = 40.
         Assert.Equal(["R1", "R2", "C1"], solder);
-        Assert.Contains("left to right", TableText.ToText(BuildOrder.Table(project)));
+        Assert.Contains("left to right", TableText.ToText(BuildOrderTable.Table(project)));
     }
 
     [Fact]
     public void The_table_carries_glue_and_fume_cautions_and_high_voltage_when_needed()
     {
         var project = LinkedProject();
-        var text = TableText.ToText(BuildOrder.Table(project));
+        var text = TableText.ToText(BuildOrderTable.Table(project));
         Assert.Contains("cyanoacrylate", text, StringComparison.OrdinalIgnoreCase);
         Assert.Contains("flux fume", text, StringComparison.OrdinalIgnoreCase);
         Assert.DoesNotContain("above 50 V", text);
         var hv = project with { Nets = project.Nets.Select(n => n.Name == "MID" ? new Net("MID", Voltage: 250) : n).ToValueList() };
-        Assert.Contains("above 50 V", TableText.ToText(BuildOrder.Table(hv)));
+        Assert.Contains("above 50 V", TableText.ToText(BuildOrderTable.Table(hv)));
     }
 
     /// <summary>IN -R1- MID (pads P2 and P3 joined by link W1) -R2- OUT -C1- ground; pads left to right.</summary>

@@ -1,7 +1,7 @@
 using PadPlan.Model;
-using PadPlan.Output.Materials;
+using PadPlan.Materials;
 using PadPlan.Output.Tables;
-using PadPlan.Planning.Cutting;
+using PadPlan.Materials.Cutting;
 using PadPlan.ProjectFiles;
 
 namespace PadPlan.Tests.Materials;

@@ -1,5 +1,5 @@
 using PadPlan.Model;
-using PadPlan.Output.Materials;
+using PadPlan.Materials;
 using static PadPlan.Tests.Materials.Circuits;
 
 namespace PadPlan.Tests.Materials;

@@ -2,7 +2,7 @@ using FsCheck;
 using FsCheck.Fluent;
 using FsCheck.Xunit;
 using PadPlan.Model;
-using PadPlan.Planning.Cutting;
+using PadPlan.Materials.Cutting;
 
 namespace PadPlan.Tests.Materials;
 

@@ -1,4 +1,4 @@
-using PadPlan.Planning.Cutting;
+using PadPlan.Materials.Cutting;
 
 namespace PadPlan.Tests.Materials;
 

@@ -1,12 +1,13 @@
+using PadPlan.Output.Tables;
 using PadPlan.Model;
-using PadPlan.Output.Materials;
+using PadPlan.Materials;
 using static PadPlan.Tests.Materials.Circuits;
 
 namespace PadPlan.Tests.Materials;
 
 public sealed class TestPlanTests
 {
-    private static List<string[]> Rows(Project project) => TestPlan.Tables(project)[0].Rows.Select(r => r.ToArray()).ToList();
+    private static List<string[]> Rows(Project project) => TestPlanTables.Tables(project)[0].Rows.Select(r => r.ToArray()).ToList();
 
     [Fact]
     public void Every_pad_is_tested_against_the_plane_and_joined_pads_must_beep()
@@ -61,7 +62,7 @@ public sealed class TestPlanTests
         var rows = Rows(project);
         Assert.Equal("reads low via L1", rows.Single(r => r[2] == "P2" && r[3] == DcPaths.Plane)[4]);
         Assert.Equal("silent", rows.Single(r => r[2] == "P1" && r[3] == DcPaths.Plane)[4]);
-        var paths = TestPlan.Tables(project)[1];
+        var paths = TestPlanTables.Tables(project)[1];
         Assert.Equal(["plane", "TANK", "low, about 0 Ω", "L1"], paths.Rows.Single().Take(4));
     }
 }

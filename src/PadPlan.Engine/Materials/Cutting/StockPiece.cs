@@ -1,6 +1,6 @@
 using PadPlan.Model;
 
-namespace PadPlan.Planning.Cutting;
+namespace PadPlan.Materials.Cutting;
 
 /// <summary>A piece of copper-clad board the builder has to cut pads from.</summary>
 public sealed record StockPiece

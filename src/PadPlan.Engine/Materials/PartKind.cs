@@ -1,4 +1,4 @@
-namespace PadPlan.Output.Materials;
+namespace PadPlan.Materials;
 
 /// <summary>What sort of component a part is, as far as gathering, soldering and continuity testing care.</summary>
 public enum PartKind

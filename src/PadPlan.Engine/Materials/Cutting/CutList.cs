@@ -1,6 +1,6 @@
 using PadPlan.Model;
 
-namespace PadPlan.Planning.Cutting;
+namespace PadPlan.Materials.Cutting;
 
 /// <summary>Everything to cut for a layout: round pads by punch, rectangles and scored strips, the punching strips, and the plan that nests them on stock.</summary>
 public sealed record CutList(

@@ -1,6 +1,6 @@
 using PadPlan.Model;
 
-namespace PadPlan.Planning.Cutting;
+namespace PadPlan.Materials.Cutting;
 
 /// <summary>Turns a layout's pads into a cut list and a cutting plan on the builder's stock.</summary>
 public static class CutListBuilder

@@ -1,6 +1,6 @@
 using PadPlan.Model;
 
-namespace PadPlan.Planning.Cutting;
+namespace PadPlan.Materials.Cutting;
 
 /// <summary>The result of nesting pieces on stock: where each piece is cut, what would not fit, and how well the stock is used.</summary>
 public sealed record CuttingPlan(ValueList<StockPiece> Stock, ValueList<PlacedPiece> Placed, ValueList<CutPiece> Unplaced, double Kerf)

@@ -1,8 +1,9 @@
+using PadPlan.Materials;
 using PadPlan.Model;
 using PadPlan.Output.Tables;
-using PadPlan.Planning.Cutting;
+using PadPlan.Materials.Cutting;
 
-namespace PadPlan.Output.Materials;
+namespace PadPlan.Output.Tables;
 
 /// <summary>Every materials table of a placed project: cut list, BOM, build order and test plan, each by name and all in the order a builder uses them.</summary>
 public sealed record MaterialsTables(IReadOnlyList<ReportTable> CutList, ReportTable Bom, ReportTable BuildOrder, IReadOnlyList<ReportTable> TestPlan)
@@ -15,7 +16,7 @@ public sealed record MaterialsTables(IReadOnlyList<ReportTable> CutList, ReportT
         return new MaterialsTables(
             CutListTables.From(CutListBuilder.Build(layout, cut ?? CutOptions.Default)),
             BomTable.From(project),
-            Materials.BuildOrder.Table(project),
-            Materials.TestPlan.Tables(project));
+            BuildOrderTable.Table(project),
+            TestPlanTables.Tables(project));
     }
 }

@@ -1,8 +1,6 @@
-using PadPlan.Output;
 using PadPlan.Model;
-using PadPlan.Output.Tables;
 
-namespace PadPlan.Output.Materials;
+namespace PadPlan.Materials;
 
 /// <summary>
 /// The continuity test sheet for the finished, unpowered board: the probe points of each net that must beep together,
@@ -14,19 +12,14 @@ public static class TestPlan
     /// <summary>Other-net pads this close, edge to edge, are tested against each other (mm); a bridge or burr rarely spans more. Common practice, no source.</summary>
     public const double NeighbourGap = 5.0;
 
-    public static IReadOnlyList<ReportTable> Tables(Project project, double threshold = DcPaths.DefaultThreshold)
-    {
-        var paths = DcPaths.Find(project, threshold);
-        return [Sheet(project, paths), PathTable(project, paths)];
-    }
-
-    public static ReportTable Sheet(Project project, DcPaths paths)
+    /// <summary>Every test in order: joined nets, each island against the plane, near neighbours of other nets.</summary>
+    public static IReadOnlyList<ContinuityTest> Tests(Project project, DcPaths paths)
     {
         var layout = project.Layout ?? throw new ArgumentException("the project has no layout; place it first.", nameof(project));
         var islands = layout.Islands().OrderBy(i => i.Id, NaturalOrder.Comparer).ToList();
-        var rows = new List<string[]>();
+        var rows = new List<ContinuityTest>();
         void Row(string test, string a, string b, string expect, string why) =>
-            rows.Add([(rows.Count + 1).ToString(), test, a, b, expect, why, ""]);
+            rows.Add(new ContinuityTest(rows.Count + 1, test, a, b, expect, why));
 
         foreach (var net in islands.Where(i => i.Net is not null).GroupBy(i => i.Net!).OrderBy(g => g.Key, StringComparer.Ordinal))
         {
@@ -60,26 +53,8 @@ public static class TestPlan
             }
         }
 
-        var notes = new List<string>
-        {
-            "Test the board unpowered, with a continuity beeper. 'beeps' = must sound; 'silent' = must not; other entries are readings the parts make on purpose.",
-            $"A beeper sounds below roughly 30-50 Ω (meters differ; common practice, no source): paths below {Mm.Of(paths.Threshold)} Ω through parts are listed as reading low.",
-            "Electrolytic capacitors may beep briefly while they charge from the meter; the sound should stop.",
-            "ICs: internal protection diodes may make a pin read low one way round to a supply or ground pin.",
-        };
-        if (Cautions.HighVoltageWarning(project) is { } hv) notes.Add("Caution: " + hv);
-        return ReportTable.Create("Continuity test plan", ["#", "Test", "Probe A", "Probe B", "Expect", "Why", "Done"], rows, notes);
+        return rows;
     }
-
-    public static ReportTable PathTable(Project project, DcPaths paths) => ReportTable.Create(
-        "Paths through parts (these read low on a sound board)",
-        ["Net A", "Net B", "Reads", "Through", "Note"],
-        paths.Paths.Select(p => new[] { p.NetA, p.NetB, ReadingText(p), p.Through, p.Note }),
-        [
-            paths.Paths.Count == 0
-                ? "No part makes a path that reads low: every 'apart' test must be silent."
-                : $"Worked out from the netlist: windings, beads and fuses about 0 Ω; resistor networks as the meter sees them (series and parallel); threshold {Mm.Of(paths.Threshold)} Ω. '{DcPaths.Plane}' is ground.",
-        ]);
 
     private static string Expect(DcPaths paths, string? a, string b)
     {
@@ -94,13 +69,6 @@ public static class TestPlan
             _ => "silent",
         };
     }
-
-    private static string ReadingText(DcPath path) => path.Reading switch
-    {
-        DcReading.Low => path.Ohms is { } r && r >= 1e-6 ? $"low, about {r.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture)} Ω" : "low, about 0 Ω",
-        DcReading.OneWay => "low one way only",
-        _ => "may read low",
-    };
 
     private static string LinkText(Layout layout, string a, string b)
     {

@@ -1,4 +1,4 @@
-namespace PadPlan.Output.Materials;
+namespace PadPlan.Materials;
 
 /// <summary>What a continuity tester shows between two nets because of the parts between them, with the board built right.</summary>
 public enum DcReading

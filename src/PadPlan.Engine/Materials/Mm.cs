@@ -1,6 +1,6 @@
 using System.Globalization;
 
-namespace PadPlan.Output.Materials;
+namespace PadPlan.Materials;
 
 /// <summary>Millimetre and area figures as the tables print them: invariant culture, no trailing zeros.</summary>
 internal static class Mm

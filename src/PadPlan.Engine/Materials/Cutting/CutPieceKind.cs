@@ -1,4 +1,4 @@
-namespace PadPlan.Planning.Cutting;
+namespace PadPlan.Materials.Cutting;
 
 /// <summary>What a piece cut from stock becomes.</summary>
 public enum CutPieceKind

@@ -1,8 +1,9 @@
+using PadPlan.Materials;
 using PadPlan.Model;
 using PadPlan.Model.Values;
 using PadPlan.Output.Tables;
 
-namespace PadPlan.Output.Materials;
+namespace PadPlan.Output.Tables;
 
 /// <summary>The bill of materials: parts grouped by kind, normalised value and footprint, with quantities and references.</summary>
 public static class BomTable

@@ -1,7 +1,7 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
 
-namespace PadPlan.Planning.Cutting;
+namespace PadPlan.Materials.Cutting;
 
 /// <summary>Reads stock sizes as the builder types them: "100x160" (mm) or "100x160x0.8" with the board thickness.</summary>
 public static partial class StockText

@@ -1,6 +1,6 @@
 using PadPlan.Model;
 
-namespace PadPlan.Planning.Cutting;
+namespace PadPlan.Materials.Cutting;
 
 /// <summary>One piece to cut from stock: a rectangle pad, a scored strip, or a strip for punching discs. Length runs along X of the piece (Width), the strip's width across (Height).</summary>
 public sealed record CutPiece

@@ -1,6 +1,6 @@
 using PadPlan.Model;
 
-namespace PadPlan.Output.Materials;
+namespace PadPlan.Materials;
 
 /// <summary>Edge-to-edge distance between two copper islands in plan view (0 when they touch or overlap).</summary>
 public static class IslandGap

@@ -1,4 +1,4 @@
-namespace PadPlan.Planning.Cutting;
+namespace PadPlan.Materials.Cutting;
 
 /// <summary>Where a piece is cut from a stock piece: its corner nearest the stock's origin corner, and whether it lies turned a quarter.</summary>
 public sealed record PlacedPiece(CutPiece Piece, string StockId, double X, double Y, bool Turned)

@@ -1,6 +1,6 @@
 using PadPlan.Model;
 
-namespace PadPlan.Output.Materials;
+namespace PadPlan.Materials;
 
 /// <summary>
 /// Finds, from the netlist, the net pairs that read low on a continuity tester through parts: inductor and

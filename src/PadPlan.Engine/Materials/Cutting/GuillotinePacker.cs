@@ -1,6 +1,6 @@
 using PadPlan.Model;
 
-namespace PadPlan.Planning.Cutting;
+namespace PadPlan.Materials.Cutting;
 
 /// <summary>
 /// Nests rectangular pieces on stock pieces so that every cut runs straight across the part of the board it divides, as a

@@ -1,8 +1,6 @@
-using PadPlan.Output;
 using PadPlan.Model;
-using PadPlan.Output.Tables;
 
-namespace PadPlan.Output.Materials;
+namespace PadPlan.Materials;
 
 /// <summary>
 /// The order to build in, following the signal path from input to output (DOMAIN §1: glue a few pads, solder,
@@ -11,8 +9,8 @@ namespace PadPlan.Output.Materials;
 /// </summary>
 public static class BuildOrder
 {
-    // Width of the board columns used for the order when no net is marked as input (mm).
-    private const double ColumnWidth = 10;
+    /// <summary>Width of the board columns used for the order when no net is marked as input (mm).</summary>
+    public const double ColumnWidth = 10;
 
     public static IReadOnlyList<BuildStep> Steps(Project project)
     {
@@ -50,28 +48,6 @@ public static class BuildOrder
         Add("Test", "the finished board", "all pads", "run the continuity test plan (padplan testplan) before applying power");
         return steps;
     }
-
-    public static ReportTable Table(Project project)
-    {
-        var inputs = project.Nets.Where(n => n.Role == SignalRole.Input).Select(n => n.Name).ToList();
-        var outputs = project.Nets.Where(n => n.Role == SignalRole.Output).Select(n => n.Name).ToList();
-        var notes = new List<string>
-        {
-            inputs.Count > 0
-                ? $"Steps follow the signal path from the input ({string.Join(", ", inputs)}){(outputs.Count > 0 ? $" to the output ({string.Join(", ", outputs)})" : "")}; within a stage, low parts before tall ones."
-                : $"No net is marked as input, so the steps go across the board from left to right in {ColumnWidth:0} mm columns; low parts before tall ones.",
-            "Ground leads go straight to the plane, as short as the part allows.",
-            "Caution: " + Cautions.Glue,
-            "Caution: " + Cautions.Flux,
-        };
-        var unplaced = project.Parts.Where(p => project.Layout?.Placements.All(x => x.Ref != p.Ref) ?? true).Select(p => p.Ref).ToList();
-        if (unplaced.Count > 0) notes.Insert(0, $"Not placed, so not in these steps: {string.Join(", ", unplaced)}.");
-        if (Cautions.HighVoltageWarning(project) is { } hv) notes.Add("Caution: " + hv);
-        return ReportTable.Create("Build order", ["Step", "Do", "What", "Where", "Note"],
-            Steps(project).Select(s => new[] { s.Number.ToString(), s.Action, s.What, s.Where, s.Note }), notes);
-    }
-
-    /// <summary>A net whose voltage or class calls for the high-voltage caution (above 50 V; DOMAIN §7).</summary>
 
     /// <summary>Whether a net is a hub that the signal path does not run through: ground and supply rails.</summary>
     public static bool IsRail(Net? net) => net is not null && (net.Ground || net.Class == NetClass.Power);

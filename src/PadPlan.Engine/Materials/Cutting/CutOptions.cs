@@ -1,6 +1,6 @@
 using PadPlan.Model;
 
-namespace PadPlan.Planning.Cutting;
+namespace PadPlan.Materials.Cutting;
 
 /// <summary>What the cutting plan works with: the builder's stock, the saw kerf and the room a punch needs around a disc.</summary>
 public sealed record CutOptions

@@ -1,9 +1,10 @@
+using PadPlan.Materials;
 using PadPlan.Output;
 using PadPlan.Model;
 using PadPlan.Output.Tables;
-using PadPlan.Planning.Cutting;
+using PadPlan.Materials.Cutting;
 
-namespace PadPlan.Output.Materials;
+namespace PadPlan.Output.Tables;
 
 /// <summary>The cut list as report tables: round pads by punch, pieces to cut with their cuts, and the cutting plan on stock.</summary>
 public static class CutListTables
