@@ -3,10 +3,12 @@ using PadPlan.IO;
 namespace PadPlan.Cli;
 
 /// <summary>Where a command writes: results to Out, messages and progress to Err. Runs a command body and turns failures into exit codes.</summary>
-public sealed class CommandContext(TextWriter stdout, TextWriter stderr)
+public sealed class CommandContext(TextWriter stdout, TextWriter stderr, bool errIsTerminal = false)
 {
     public TextWriter Out { get; } = stdout;
     public TextWriter Err { get; } = stderr;
+    /// <summary>Err is a terminal a person watches, so progress may redraw a line in place; otherwise only results and messages go there.</summary>
+    public bool ErrIsTerminal { get; } = errIsTerminal;
 
     /// <summary>Runs a command body: bad input becomes exit 2 with a message naming the place; anything unexpected becomes exit 3.</summary>
     public int Guarded(Func<int> body)

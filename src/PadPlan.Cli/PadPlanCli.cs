@@ -26,9 +26,9 @@ public static class PadPlanCli
         return root;
     }
 
-    public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool errIsTerminal = false)
     {
-        var context = new CommandContext(stdout, stderr);
+        var context = new CommandContext(stdout, stderr, errIsTerminal);
         var root = BuildRoot(context);
         if (args.Length == 0)
         {

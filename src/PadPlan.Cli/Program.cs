@@ -1,1 +1,1 @@
-return PadPlan.Cli.PadPlanCli.Run(args, Console.Out, Console.Error);
+return PadPlan.Cli.PadPlanCli.Run(args, Console.Out, Console.Error, errIsTerminal: !Console.IsErrorRedirected);

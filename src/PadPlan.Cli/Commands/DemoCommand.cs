@@ -1,4 +1,5 @@
 using System.CommandLine;
+using PadPlan.Gate;
 using PadPlan.Import;
 using PadPlan.IO;
 using PadPlan.Materials;
@@ -55,7 +56,7 @@ public static class DemoCommand
         say.WriteLine($"1. import: {imported.Project.Parts.Count} parts, {imported.Project.Nets.Count} nets");
 
         // 2. place
-        var placed = Placer.Place(imported.Project, PlacerSettings.Default);
+        var placed = CheckedPlacer.Place(imported.Project, PlacerSettings.Default);
         if (!placed.Succeeded)
         {
             say.WriteLine($"error: placement failed: {placed.Failure!.Message} ({placed.Failure.Hint})");

@@ -11,7 +11,7 @@ public static class ImportCommand
     {
         var netlist = new Argument<FileInfo>("netlist") { Description = "The netlist: PadPlan text format (*.ppn) or SPICE (*.cir, *.sp, *.net, *.spice)." };
         var output = new Option<FileInfo>("--output", "-o") { Description = "The project file to create (*.padplan.json).", Required = true };
-        var board = new Option<string?>("--board") { Description = "Board size WIDTHxHEIGHT in mm (e.g. 80x50); left out, the placer sizes it." };
+        var board = SharedOptions.Board();
         var parts = new Option<FileInfo?>("--parts") { Description = "A parts map (JSON) choosing footprints by reference, value or model, and stating net facts." };
         var dirs = SharedOptions.FootprintDirs();
         var force = new Option<bool>("--force") { Description = "Replace the output file if it exists (its layout is lost)." };
@@ -22,12 +22,7 @@ public static class ImportCommand
             var outFile = parse.GetValue(output)!;
             if (outFile.Exists && !parse.GetValue(force))
                 throw new UsageException($"{outFile.FullName} already exists and may hold a layout. Give another -o file, or --force to replace it.");
-            (double, double)? size = null;
-            if (parse.GetValue(board) is { } boardText)
-            {
-                size = PpnReader.BoardSize(boardText, out var error);
-                if (error is not null) throw new UsageException($"--board: {error}");
-            }
+            SharedOptions.TryBoardSize(parse, board, out var size);
             var extraDirs = (parse.GetValue(dirs) ?? []).Select(d => d.FullName).ToList();
             var library = FootprintLibrary.Load(extraDirs);
             var map = parse.GetValue(parts) is { } partsFile ? PartsMap.Read(partsFile.FullName, library) : null;

@@ -1,10 +1,14 @@
 using System.CommandLine;
+using System.Globalization;
+using PadPlan.Cli.Progress;
+using PadPlan.Gate;
+using PadPlan.Model;
 using PadPlan.Planning;
 using PadPlan.ProjectFiles;
 
 namespace PadPlan.Cli.Commands;
 
-/// <summary>`padplan place`: Place parts and pads automatically and write the layout into the project.</summary>
+/// <summary>`padplan place`: Place parts and pads automatically, have the checker pass the result, and write the layout into the project.</summary>
 public static class PlaceCommand
 {
     public static Command Create(CommandContext context)
@@ -14,14 +18,32 @@ public static class PlaceCommand
         var effort = new Option<string>("--effort") { Description = "How hard to work: quick, normal or thorough.", DefaultValueFactory = _ => "normal" };
         effort.AcceptOnlyFromAmong("quick", "normal", "thorough");
         var keep = new Option<bool>("--keep-existing") { Description = "Keep every part and pad already in the layout where it is; place only the rest." };
+        var force = new Option<bool>("--force") { Description = "Replace the project's layout; the old and new figures are printed side by side." };
+        var board = SharedOptions.Board();
+        var verbose = new Option<bool>("--verbose", "-v") { Description = "Print a line for every annealing step on stderr." };
         var quiet = SharedOptions.Quiet();
-        var command = new Command("place", "Place parts and pads automatically and write the layout into the project.") { project, seed, effort, keep, quiet };
+        var command = new Command("place", "Place parts and pads automatically, check the result, and write the layout into the project.")
+            { project, seed, effort, keep, force, board, verbose, quiet };
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
             var input = ProjectFile.Read(file.FullName);
-            var settings = new PlacerSettings(parse.GetValue(seed), Enum.Parse<Effort>(parse.GetValue(effort)!, ignoreCase: true), parse.GetValue(keep));
-            var result = Placer.Place(input, settings, parse.GetValue(quiet) ? null : new StderrProgress(context.Err, settings.RunsFor(input.Parts.Count)));
+            var keepExisting = parse.GetValue(keep);
+            var replacing = input.Layout is { } old && (old.Placements.Count > 0 || old.Pads.Count > 0) && !keepExisting;
+            if (replacing && !parse.GetValue(force))
+                throw new UsageException(
+                    $"{file.Name} already has a layout ({input.Layout!.Placements.Count} parts placed). Give --force to replace it (old and new figures are printed side by side), " +
+                    "or --keep-existing to keep it and place only the parts not yet on the board. The file was not changed.");
+            var before = replacing ? LayoutFigures.Of(input) : null;
+            if (SharedOptions.TryBoardSize(parse, board, out var size))
+                input = input with { Board = size is { } s ? input.Board.WithSize(s.Width, s.Height) : AutoBoard(input.Board) };
+            var settings = new PlacerSettings(parse.GetValue(seed), Enum.Parse<Effort>(parse.GetValue(effort)!, ignoreCase: true), keepExisting);
+            var runs = settings.RunsFor(input.Parts.Count);
+            var terminal = !parse.GetValue(quiet) && !parse.GetValue(verbose) && context.ErrIsTerminal ? new TerminalProgress(context.Err, runs) : null;
+            IProgress<PlacerProgress>? progress = parse.GetValue(quiet) ? null : parse.GetValue(verbose) ? new VerboseProgress(context.Err, runs) : terminal;
+            CheckedPlacement result;
+            using (terminal)
+                result = CheckedPlacer.Place(input, settings, progress);
             if (!result.Succeeded)
             {
                 context.Err.WriteLine($"error: {result.Failure!.Message}");
@@ -32,24 +54,38 @@ public static class PlaceCommand
             ProjectFile.Write(result.Project!, file.FullName);
             if (!parse.GetValue(quiet))
             {
-                context.Out.WriteLine($"placed {input.Parts.Count} parts in {file.Name}");
+                context.Out.WriteLine($"placed {input.Parts.Count} parts in {file.Name}; the check passed ({result.Report!.Warnings} warning{(result.Report.Warnings == 1 ? "" : "s")})");
+                if (result.Tries > 1)
+                    context.Out.WriteLine($"the checker failed {result.Tries - 1} earlier layout{(result.Tries > 2 ? "s" : "")}; this one is from seed {result.Summary!.Seed}");
                 foreach (var line in result.Summary!.Lines()) context.Out.WriteLine(line);
+                if (before is not null)
+                {
+                    context.Out.WriteLine("replaced the old layout:");
+                    foreach (var line in SideBySide(before, LayoutFigures.Of(result.Project!))) context.Out.WriteLine(line);
+                }
             }
             return ExitCodes.Success;
         }));
         return command;
     }
 
-    /// <summary>Prints a line on stderr every few temperature steps, so a long run shows it is alive.</summary>
-    private sealed class StderrProgress(TextWriter err, int runs) : IProgress<PlacerProgress>
-    {
-        private readonly Lock _gate = new();
+    private static Board AutoBoard(Board b) => new(null, null, b.CornerRadius, b.Margin, b.Thickness, b.Keepouts);
 
-        public void Report(PlacerProgress value)
+    /// <summary>The old and new layout's figures in two columns, so a worse result is seen at once.</summary>
+    public static IEnumerable<string> SideBySide(LayoutFigures before, LayoutFigures after)
+    {
+        static string Mm(double v) => v.ToString("0.0", CultureInfo.InvariantCulture) + " mm";
+        static string Area(double? v) => v is { } a ? a.ToString("0", CultureInfo.InvariantCulture) + " mm^2" : "automatic";
+        var rows = new (string Figure, string Old, string New)[]
         {
-            if (value.Stage == "annealing" && value.Step % 20 != 0) return;
-            lock (_gate)
-                err.WriteLine(FormattableString.Invariant($"  run {value.Run}/{runs}: {value.Stage}{(value.Step > 0 ? $" step {value.Step}" : "")}, cost {value.Cost:0.0}, rules broken by {value.Violation:0.00} mm"));
-        }
+            ("figure", "old", "new"),
+            ("total lead", Mm(before.TotalLead), Mm(after.TotalLead)),
+            ("longest lead", $"{Mm(before.LongestLead)} ({before.LongestLeadName})", $"{Mm(after.LongestLead)} ({after.LongestLeadName})"),
+            ("wire links", before.Links.ToString(CultureInfo.InvariantCulture), after.Links.ToString(CultureInfo.InvariantCulture)),
+            ("board area", Area(before.BoardArea), Area(after.BoardArea)),
+        };
+        var w1 = rows.Max(r => r.Figure.Length);
+        var w2 = rows.Max(r => r.Old.Length);
+        return rows.Select(r => $"  {r.Figure.PadRight(w1)}  {r.Old.PadRight(w2)}  {r.New}".TrimEnd());
     }
 }

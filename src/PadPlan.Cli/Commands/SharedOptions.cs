@@ -1,4 +1,5 @@
 using System.CommandLine;
+using PadPlan.Import;
 
 namespace PadPlan.Cli.Commands;
 
@@ -25,4 +26,19 @@ public static class SharedOptions
     {
         Description = "Print only errors.",
     };
+
+    public static Option<string?> Board() => new("--board")
+    {
+        Description = "Board size WIDTHxHEIGHT in mm (e.g. 80x50), or auto to let the placer size it.",
+    };
+
+    /// <summary>The --board value: not given, auto (null size) or a size; a bad value is a usage error.</summary>
+    public static bool TryBoardSize(ParseResult parse, Option<string?> option, out (double Width, double Height)? size)
+    {
+        size = null;
+        if (parse.GetValue(option) is not { } text) return false;
+        size = PpnReader.BoardSize(text, out var error);
+        if (error is not null) throw new UsageException($"--board: {error}");
+        return true;
+    }
 }

@@ -14,6 +14,6 @@ public static class NetClassifier
             : f.Supply ? NetClass.Power
             : NetClass.General);
         var role = f.Role ?? (NetNames.LooksLikeOutput(f.Name) ? SignalRole.Output : SignalRole.None);
-        return new Net(f.Name, ground, cls, f.Voltage, f.Voltage is not null && f.VoltageEstimated, f.Current, f.MaxLead, role);
+        return new Net(f.Name, ground, cls, f.Voltage, f.Voltage is not null && f.VoltageEstimated, f.Current, f.MaxLead, role, f.OpenEnded);
     }
 }

@@ -12,7 +12,8 @@ public sealed record NetFacts(
     double? Current = null,
     double? MaxLead = null,
     SignalRole? Role = null,
-    bool Supply = false)
+    bool Supply = false,
+    bool OpenEnded = false)
 {
     /// <summary>These facts with the other's stated fields laid over them.</summary>
     public NetFacts Merge(NetFacts other) => new(
@@ -24,5 +25,6 @@ public sealed record NetFacts(
         other.Current ?? Current,
         other.MaxLead ?? MaxLead,
         other.Role ?? Role,
-        Supply || other.Supply);
+        Supply || other.Supply,
+        OpenEnded || other.OpenEnded);
 }

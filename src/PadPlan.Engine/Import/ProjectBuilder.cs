@@ -29,6 +29,7 @@ public static class ProjectBuilder
         var parts = new List<Part>();
         foreach (var package in SectionGrouper.Group(merged, map, file, notes))
         {
+            RefuseGeneratedForm(package.Ref, file, package.First.Line);
             var part = package.IsSectioned ? Sectioned(package, options.Library, map, file, notes) : Single(package.First, options.Library, map, file, notes);
             parts.Add(part);
             if (!footprints.Any(f => string.Equals(f.Name, part.Footprint, StringComparison.OrdinalIgnoreCase)))
@@ -65,6 +66,14 @@ public static class ProjectBuilder
         foreach (var p in parts)
             if (!seen.TryAdd(p.Ref, p.Line))
                 throw new InputException(file, $"duplicate reference {p.Ref}: it is already used on line {seen[p.Ref]}. Every part needs its own reference.", p.Line);
+    }
+
+    /// <summary>A part named like a pad or a wire strap would share its id with one in the build steps and the check report.</summary>
+    private static void RefuseGeneratedForm(string reference, string file, int line)
+    {
+        if (GeneratedIds.ClashOf(reference) is not { } prefix) return;
+        var what = prefix == GeneratedIds.StrapPrefix ? $"wire straps ({GeneratedIds.Strap(1)}, {GeneratedIds.Strap(2)}...)" : $"pads ({GeneratedIds.Pad(1)}, {GeneratedIds.Pad(2)}...)";
+        throw new InputException(file, $"part reference {reference} has the form PadPlan gives {what}, so the build steps would name two things {reference}. Rename the part (e.g. {reference}A or J{reference[prefix.Length..]}).", line);
     }
 
     private static Part Single(NetlistPart part, FootprintLibrary library, PartsMap map, string file, List<ImportNote> notes)
@@ -181,7 +190,7 @@ public static class ProjectBuilder
         foreach (var f in netlist.Nets.Where(f => !uses.ContainsKey(f.Name)))
             notes.Add(new ImportNote(netlist.File, null, $"net {f.Name} is described, but no part is on it; it is left out."));
         var nets = order.Select(name => NetClassifier.ToNet(facts.GetValueOrDefault(name) ?? new NetFacts(name))).ToList();
-        foreach (var net in nets.Where(n => uses[n.Name].Count == 1 && !n.Ground))
+        foreach (var net in nets.Where(n => uses[n.Name].Count == 1 && !n.Ground && !n.OpenEnded))
             notes.Add(new ImportNote(netlist.File, null, $"net {net.Name} has only one connection ({uses[net.Name][0]}); a pad for it would join nothing. Check the netlist for a misspelt net name."));
         return nets.OrderBy(n => n.Ground ? 0 : 1).ToList();
     }

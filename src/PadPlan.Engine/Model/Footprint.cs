@@ -65,6 +65,12 @@ public sealed record Footprint
     public string Source { get; init; }
     public ValueList<PinVariant> Variants { get; init; }
 
+    /// <summary>What builders are told wherever a footprint's figures are nominal.</summary>
+    public const string NominalWarning = "typical size, check your part";
+
+    /// <summary>The figures are nominal, not a published outline: the source does not name a JEDEC outline, or says it is recalled from memory.</summary>
+    public bool IsNominal => !Source.StartsWith("JEDEC", StringComparison.OrdinalIgnoreCase) || Source.Contains("from memory", StringComparison.OrdinalIgnoreCase);
+
     /// <summary>The symbol pin name each lead carries, in lead order, for a variant (or the lead names when none is given).</summary>
     public IReadOnlyList<string> PinNames(string? variant)
     {

@@ -18,8 +18,8 @@ public enum SignalRole
     Output,
 }
 
-/// <summary>A node of the circuit with the facts the rules need.</summary>
-public sealed record Net(string Name, bool Ground = false, NetClass Class = NetClass.General, double? Voltage = null, bool VoltageEstimated = false, double? Current = null, double? MaxLead = null, SignalRole Role = SignalRole.None)
+/// <summary>A node of the circuit with the facts the rules need. OpenEnded marks a net meant to have one connection only (a test point, an antenna lead).</summary>
+public sealed record Net(string Name, bool Ground = false, NetClass Class = NetClass.General, double? Voltage = null, bool VoltageEstimated = false, double? Current = null, double? MaxLead = null, SignalRole Role = SignalRole.None, bool OpenEnded = false)
 {
     public string Name { get; } = Guard.Name(Name, "net name");
     /// <summary>Largest DC or peak AC voltage to ground (V).</summary>

@@ -128,8 +128,9 @@ public static class Placer
             var needW = Math.Ceiling(e.MaxX + board.Margin);
             var needH = Math.Ceiling(e.MaxY + board.Margin);
             throw new PlacementImpossibleException(new PlacementFailure(
-                string.Create(CultureInfo.InvariantCulture, $"board too small: needs about {needW} x {needH} mm; given {board.Width} x {board.Height}."),
-                string.Create(CultureInfo.InvariantCulture, $"Set board.width and board.height to at least {needW} and {needH} (or leave them out for an automatic size), or remove parts.")));
+                string.Create(CultureInfo.InvariantCulture, $"board too small: the parts do not fit on {board.Width} x {board.Height} mm; a quick search fitted them on {needW} x {needH} mm."),
+                string.Create(CultureInfo.InvariantCulture, $"Place with --board {needW}x{needH} (or --board auto to let the placer size it), or remove parts."),
+                BoardTooSmall: true));
         }
         throw new PlacementImpossibleException(new PlacementFailure(
             "no legal layout found: " + string.Join("; ", trial!.State.Problems().Take(3)) + ".",

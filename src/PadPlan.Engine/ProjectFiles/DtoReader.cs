@@ -122,7 +122,8 @@ internal sealed class DtoReader(string file, byte[] text)
         n.VoltageEstimated ?? false,
         n.Current,
         n.MaxLead,
-        Enum(n.Role, $"{path}.role", "signal role", SignalRole.None)));
+        Enum(n.Role, $"{path}.role", "signal role", SignalRole.None),
+        n.OpenEnded ?? false));
 
     public Part Part(PartDto p, string path)
     {

@@ -71,6 +71,7 @@ internal static class DtoWriter
         Current = n.Current,
         MaxLead = n.MaxLead,
         Role = n.Role == SignalRole.None ? null : n.Role.ToString().ToLowerInvariant(),
+        OpenEnded = n.OpenEnded ? true : null,
     };
 
     private static PartDto Part(Part p)

@@ -87,6 +87,7 @@ public sealed class NetDto
     public double? Current { get; set; }
     public double? MaxLead { get; set; }
     public string? Role { get; set; }
+    public bool? OpenEnded { get; set; }
 }
 
 public sealed class PartDto

@@ -8,6 +8,7 @@ public static class RuleIds
     public const string BoardSize = "board-size";
     public const string PartUnplaced = "part-unplaced";
     public const string LeadUnplaced = "lead-unplaced";
+    public const string SingleConnection = "single-connection";
 
     // Connectivity rebuilt from geometry
     public const string Open = "open";
@@ -44,7 +45,7 @@ public static class RuleIds
     /// <summary>Every rule id, in the order docs/rules.md lists them.</summary>
     public static IReadOnlyList<string> All { get; } =
     [
-        LayoutMissing, BoardSize, PartUnplaced, LeadUnplaced,
+        LayoutMissing, BoardSize, PartUnplaced, LeadUnplaced, SingleConnection,
         Open, Short, LeadWrongPad, LeadOffPad, GroundOnPad, PadShort, JumperShort, JumperEnd, LandingMismatch, PadUnused,
         PadGap, GroundGap, LeadEdge, LeadReach, LeadLength, PadCapacity,
         BodyOverlap, BodyOverPad, BoardMargin, Keepout,

@@ -118,8 +118,9 @@ public class PlacerTests
         var project = TinyBufferWithoutLayout() with { Board = new Board(16, 12) };
         var result = Placer.Place(project, Quick);
         Assert.False(result.Succeeded);
-        Assert.StartsWith("board too small: needs about ", result.Failure!.Message);
-        Assert.Contains("given 16 x 12", result.Failure.Message);
+        Assert.StartsWith("board too small: the parts do not fit on 16 x 12 mm", result.Failure!.Message);
+        Assert.True(result.Failure.BoardTooSmall);
+        Assert.Contains("--board", result.Failure.Hint);
     }
 
     [Fact]

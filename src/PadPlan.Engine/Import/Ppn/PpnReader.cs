@@ -79,6 +79,9 @@ public static partial class PpnReader
         return null;
     }
 
+    /// <summary>The net attribute that marks a net meant to have one connection only (a test point, an antenna lead).</summary>
+    public const string OpenEndWord = "open-end";
+
     private static NetFacts NetLine(List<LineTokenizer.Token> tokens, Func<string, int?, InputException> bad)
     {
         if (tokens.Count < 2) throw bad("a net line names the net: net NAME [ground] [class] [9V] [0.5A] [lead=5mm] [input|output].", null);
@@ -90,6 +93,7 @@ public static partial class PpnReader
             var word = t.Text;
             var lower = word.ToLowerInvariant();
             if (lower == "ground") facts = facts with { Ground = true };
+            else if (lower == OpenEndWord) facts = facts with { OpenEnded = true };
             else if (lower is "input" or "output") facts = facts with { Role = lower == "input" ? SignalRole.Input : SignalRole.Output };
             else if (Enum.TryParse<NetClass>(word, ignoreCase: true, out var cls) && !int.TryParse(word, out _)) facts = facts with { Class = cls };
             else if (lower.StartsWith("lead=", StringComparison.Ordinal))

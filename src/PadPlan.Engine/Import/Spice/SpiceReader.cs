@@ -22,7 +22,7 @@ public static partial class SpiceReader
         var scan = Scan(lines, file, notes);
         var state = new State(file, scan, notes);
         foreach (var line in scan.TopLevel) state.Element(line);
-        return state.Finish(title);
+        return state.Finish(title, OpenEndDirective.Find(physical, file).Select(d => d.Node));
     }
 
     /// <summary>The first pass: subcircuit pin names, model names and the top-level element lines.</summary>
@@ -218,7 +218,7 @@ public static partial class SpiceReader
 
         private void Add(NetlistPart part) => _parts.Add(part);
 
-        public Netlist Finish(string title)
+        public Netlist Finish(string title, IEnumerable<string> openEnded)
         {
             var parts = _parts.Select(p => p with { Pins = p.Pins.Select(x => x with { Net = _nodes.Resolve(x.Net) }).ToValueList() }).ToList();
             // "XU2A" names part U2A: drop the X that SPICE needs when a letter follows and no other part has that name.
@@ -250,6 +250,7 @@ public static partial class SpiceReader
                 else if (spec.IsSignal) Fact(new NetFacts(hot, Voltage: spec.Largest, Role: heater ? null : SignalRole.Input));
                 else if (spec.Dc is { } dc) Fact(new NetFacts(hot, Voltage: hot == plus ? dc : -dc, Supply: true));
             }
+            foreach (var node in openEnded) Fact(new NetFacts(_nodes.Resolve(Net(node)), OpenEnded: true));
             return new Netlist(file, title, parts.ToValueList(), _facts.Values.ToValueList(), _couplings.ToValueList(), notes.ToValueList());
         }
 

@@ -28,14 +28,19 @@ public static class BomTable
                 };
             })
             .ToList();
+        var nominal = project.Parts.Select(p => project.FindFootprint(p.Footprint)).OfType<Footprint>().Where(f => f.IsNominal && f.Mount != MountStyle.Landing)
+            .Select(f => f.Name).Distinct(StringComparer.OrdinalIgnoreCase).Order(NaturalOrder.Comparer).ToList();
+        var notes = new List<string>
+        {
+            $"{project.Parts.Count} parts in {lines.Count} lines.",
+            "Values normalised; Code is the IEC 60062 letter-and-digit code; Series is the smallest IEC 60063 series (E12, E24) holding the value, or 'off E24'.",
+        };
+        if (nominal.Count > 0) notes.Add($"Footprints {string.Join(", ", nominal)}: {Footprint.NominalWarning} (body and lead spacing differ between makers).");
         return ReportTable.Create(
             "Bill of materials",
             ["Qty", "Part", "Value", "Code", "Series", "Footprint", "References"],
             lines,
-            [
-                $"{project.Parts.Count} parts in {lines.Count} lines.",
-                "Values normalised; Code is the IEC 60062 letter-and-digit code; Series is the smallest IEC 60063 series (E12, E24) holding the value, or 'off E24'.",
-            ]);
+            notes);
     }
 
     // Values equal to 9 significant digits are the same value, however they were written (4k7, 4.7k, 4700).

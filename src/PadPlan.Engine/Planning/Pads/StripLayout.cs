@@ -1,4 +1,5 @@
 using PadPlan.Model;
+using PadPlan.Model.Standards;
 
 namespace PadPlan.Planning;
 
@@ -7,6 +8,10 @@ internal static class StripLayout
 {
     /// <summary>Distance from a pin to the inner edge of its strip, beyond half the lead diameter (common practice, no source).</summary>
     private const double InnerEdge = 0.5;
+    /// <summary>Copper a segment keeps beyond the lead's diameter, so the joint has a fillet all round (common practice, no source).</summary>
+    private const double SegmentCopperBeyondLead = 0.5;
+    /// <summary>Scores wider than the toolkit's are rounded up to this step, so the builder can set a saw or file by it.</summary>
+    private const double ScoreStep = 0.05;
 
     public static IReadOnlyList<StripRun> For(Part part, Footprint footprint, Project project)
     {
@@ -44,7 +49,8 @@ internal static class StripLayout
             {
                 if (run.Count == 0) return;
                 var first = Along(footprint.Leads[run[0].Lead].Exit, vertical) - pitch / 2;
-                runs.Add(new StripRun(vertical, vertical ? new Point(cross, first) : new Point(first, cross), width, pitch, run.ToValueList()));
+                var score = ScoreFor(part, project, run, pitch, diameter);
+                runs.Add(new StripRun(vertical, vertical ? new Point(cross, first) : new Point(first, cross), width, pitch, score, run.ToValueList()));
                 run = [];
             }
             foreach (var i in leads)
@@ -60,6 +66,31 @@ internal static class StripLayout
             Flush();
         }
         return runs;
+    }
+
+    /// <summary>
+    /// The score between segments is all the bare board there is between neighbouring pins' copper, so where two neighbours carry nets
+    /// whose voltage needs more than the toolkit's score (IPC-2221 Table 6-1, B2), the whole strip gets scores that wide.
+    /// When the pitch cannot give that and still leave copper for the lead, no strip can carry the pins.
+    /// </summary>
+    private static double ScoreFor(Part part, Project project, IReadOnlyList<StripPin> pins, double pitch, double diameter)
+    {
+        var score = project.Toolkit.ScoreWidth;
+        for (var k = 1; k < pins.Count; k++)
+        {
+            var (a, b) = (pins[k - 1], pins[k]);
+            if (a.Net is null || b.Net is null || a.Net == b.Net) continue;
+            var volts = ConductorSpacing.Between(project.FindNet(a.Net)?.Voltage, project.FindNet(b.Net)?.Voltage);
+            var need = ConductorSpacing.B2(volts);
+            if (need <= project.Rules.PadGap || need <= score) continue;
+            var wide = Math.Ceiling((need + PlacerLimits.Safety) / ScoreStep - 1e-9) * ScoreStep;
+            if (pitch - wide < diameter + SegmentCopperBeyondLead)
+                throw new PlacementImpossibleException(new PlacementFailure(
+                    FormattableString.Invariant($"pins {part.Ref}.{a.Pin} (net {a.Net}) and {part.Ref}.{b.Pin} (net {b.Net}) are {pitch:0.##} mm apart on a scored strip; up to {volts:0.#} V between them needs {need:0.##} mm of bare board ({ConductorSpacing.Revision}, B2), more than a score at this pitch can give."),
+                    $"Mount {part.Ref} off the board (a landing footprint with wires to its socket), or leave a pin unconnected between the two nets; mains safety standards come first."));
+            score = Math.Max(score, Math.Round(wide, 2));
+        }
+        return score;
     }
 
     private static double Along(Point p, bool vertical) => vertical ? p.Y : p.X;

@@ -126,7 +126,7 @@ internal static class ProblemBuilder
     private static string NextId(HashSet<string> used, ref int number)
     {
         string id;
-        do id = $"P{++number}"; while (!used.Add(id));
+        do id = GeneratedIds.Pad(++number); while (!used.Add(id));
         return id;
     }
 
@@ -213,17 +213,17 @@ internal static class ProblemBuilder
         var runs = StripLayout.For(item.Part!, item.Footprint!, project);
         item.Strips = runs;
         var own = new List<int>();
-        var capacityInner = project.Toolkit.RectCapacity(runs.Count > 0 ? runs[0].Width : 1, project.Toolkit.StripPitch - project.Toolkit.ScoreWidth);
         var byPin = item.Leads.ToDictionary(l => leads[l].Pin, StringComparer.Ordinal);
         foreach (var run in runs)
         {
+            var capacityInner = project.Toolkit.RectCapacity(run.Width, run.Pitch - run.Score);
             var group = islands.Count;
             for (var k = 0; k < run.Pins.Count; k++)
             {
                 var pin = run.Pins[k];
                 // Every segment is one pitch long, with the score's half-width lost on inner ends.
-                var from = k * run.Pitch + (k > 0 ? project.Toolkit.ScoreWidth / 2 : 0);
-                var to = (k + 1) * run.Pitch - (k < run.Pins.Count - 1 ? project.Toolkit.ScoreWidth / 2 : 0);
+                var from = k * run.Pitch + (k > 0 ? run.Score / 2 : 0);
+                var to = (k + 1) * run.Pitch - (k < run.Pins.Count - 1 ? run.Score / 2 : 0);
                 var mid = (from + to) / 2;
                 var island = new ProblemIsland
                 {

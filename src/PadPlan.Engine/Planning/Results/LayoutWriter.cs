@@ -78,7 +78,7 @@ internal static class LayoutWriter
             var forward = vertical ? dy > 0 : dx > 0;
             var start = forward ? new Point(at.X + ax, at.Y + ay) : new Point(at.X + ax + dx * length, at.Y + ay + dy * length);
             if (!forward) segments.Reverse();
-            yield return new StripPad($"{item.Part!.Ref}-S{k + 1}", new Point(R(start.X), R(start.Y)), vertical, run.Width, segments.ToValueList(), toolkit.ScoreWidth, toolkit.StockThickness);
+            yield return new StripPad($"{item.Part!.Ref}-S{k + 1}", new Point(R(start.X), R(start.Y)), vertical, run.Width, segments.ToValueList(), run.Score, toolkit.StockThickness);
         }
     }
 
@@ -109,7 +109,7 @@ internal static class LayoutWriter
                     }
                 }
                 inTree[best.To] = true;
-                yield return new Jumper($"W{++count}", p.Islands[isl[best.From]].Id, p.Islands[isl[best.To]].Id);
+                yield return new Jumper(GeneratedIds.Strap(++count), p.Islands[isl[best.From]].Id, p.Islands[isl[best.To]].Id);
             }
         }
     }

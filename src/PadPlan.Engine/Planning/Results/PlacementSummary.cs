@@ -55,21 +55,7 @@ public sealed record PlacementSummary(
             };
             bySize[key] = bySize.GetValueOrDefault(key) + 1;
         }
-        var total = 0.0;
-        var longest = 0.0;
-        var longestName = "-";
-        foreach (var placement in layout.Placements)
-        {
-            var part = project.FindPart(placement.Ref)!;
-            var footprint = project.FootprintOf(part);
-            foreach (var landing in placement.Leads)
-            {
-                var lead = footprint.LeadForPin(landing.Pin, part.Variant)!;
-                var reach = placement.ToBoard(lead.Exit).DistanceTo(landing.At);
-                total += reach;
-                if (reach > longest + 1e-9) { longest = reach; longestName = $"{placement.Ref}.{landing.Pin}"; }
-            }
-        }
+        var figures = LayoutFigures.Of(project);
         var islands = layout.Pads.SelectMany(p => p.Islands()).ToDictionary(i => i.Id, StringComparer.Ordinal);
         var jumperLength = layout.Jumpers.Sum(j => islands[j.From].Center.DistanceTo(islands[j.To].Center));
         var extent = s.Extent();
@@ -78,7 +64,7 @@ public sealed record PlacementSummary(
             layout.Pads.Count(p => p is not StripPad),
             layout.Pads.Count(p => p is StripPad),
             layout.Pads.OfType<StripPad>().Sum(p => p.Segments.Count),
-            total, longest, longestName, s.Problem.LeadLengthFloor,
+            figures.TotalLead, figures.LongestLead, figures.LongestLeadName, s.Problem.LeadLengthFloor,
             layout.Jumpers.Count, jumperLength,
             project.Board.Width!.Value, project.Board.Height!.Value, boardChosen,
             extent.Width * extent.Height, s.Problem.RawArea, s.Cost, moves, time, settings.Seed, settings.Effort);
