@@ -33,6 +33,10 @@ public static class NetlistImporter
         return Detect(lines, file) == Format.Ppn ? PpnReader.Read(lines, file) : SpiceReader.Read(lines, file);
     }
 
+    // name=value words that SPICE element lines carry (m=, ic=, tc1=, l=, w=...): not the own format's PIN=NET.
+    private static readonly HashSet<string> SpiceInstanceParameters = new(StringComparer.OrdinalIgnoreCase)
+        { "m", "ic", "tc", "tc1", "tc2", "l", "w", "area", "temp", "dtemp", "scale", "nt", "ad", "as", "pd", "ps", "nrd", "nrs", "td", "r", "rser", "z0", "off" };
+
     /// <summary>SPICE marks itself with dot commands, '*' comments and '+' continuations; the own format with '#' comments, net/board/title lines and PIN=NET words. The extension decides a tie.</summary>
     public static Format Detect(string[] lines, string file)
     {
@@ -44,7 +48,7 @@ public static class NetlistImporter
             var lower = line.ToLowerInvariant();
             if (line[0] is '.' or '*' or '+') spice++;
             else if (line[0] == '#' || lower.StartsWith("net ", StringComparison.Ordinal) || lower.StartsWith("board ", StringComparison.Ordinal) || lower.StartsWith("title ", StringComparison.Ordinal)) ppn++;
-            else if (line.Split([' ', '\t'], StringSplitOptions.RemoveEmptyEntries).Skip(1).Any(w => w.Length > 2 && w.IndexOf('=') is > 0 and var at && at < w.Length - 1 && !w.Contains('('))
+            else if (line.Split([' ', '\t'], StringSplitOptions.RemoveEmptyEntries).Skip(1).Any(w => w.Length > 2 && w.IndexOf('=') is > 0 and var at && at < w.Length - 1 && !w.Contains('(') && !SpiceInstanceParameters.Contains(w[..at]))
                      && !line.Contains('(')) ppn++;
         }
         var first = lines.Length > 0 ? lines[0].TrimStart().ToLowerInvariant() : "";

@@ -27,6 +27,12 @@ public static class NetlistText
         return text.ReplaceLineEndings("\n").Split('\n');
     }
 
+    /// <summary>A word from the user's file as messages echo it: cut to 80 characters, so a runaway token cannot flood the terminal.</summary>
+    public static string Echo(string word) => word.Length <= EchoLimit ? word : word[..(EchoLimit - 3)] + "...";
+
+    /// <summary>The longest word a message repeats whole.</summary>
+    public const int EchoLimit = 80;
+
     private static InputException NotText(byte[] bytes, string file, int byteIndex)
     {
         var line = 1;

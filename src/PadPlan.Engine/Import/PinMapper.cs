@@ -7,7 +7,8 @@ namespace PadPlan.Import;
 public static class PinMapper
 {
     /// <summary>The mapped pins and the variant used; Guessed is true when several variants fitted and the first was taken.</summary>
-    public sealed record Result(ValueList<PinNet> Pins, string? Variant, bool Guessed);
+    /// <param name="Leads">The footprint pin of each netlist pin, in the netlist part's pin order.</param>
+    public sealed record Result(ValueList<PinNet> Pins, string? Variant, bool Guessed, ValueList<string> Leads);
 
     public static Result Map(NetlistPart part, Footprint footprint, string? variant, IReadOnlyDictionary<string, string>? rename, Func<string, InputException> bad)
     {
@@ -57,6 +58,6 @@ public static class PinMapper
             result.Add(new PinNet(lead, p.Net));
         }
         var inLeadOrder = result.OrderBy(r => leadPins.ToList().IndexOf(r.Pin)).ToValueList();
-        return new Result(inLeadOrder, variant, guessed);
+        return new Result(inLeadOrder, variant, guessed, result.Select(r => r.Pin).ToValueList());
     }
 }

@@ -13,6 +13,9 @@ public static class ProjectBuilder
         var map = options.PartsMap ?? PartsMap.Empty;
         var notes = new List<ImportNote>(netlist.Notes);
         CheckReferences(netlist.Parts, file);
+        if (!netlist.Parts.Any(p => p.Kind != PartKind.Landing))
+            throw new InputException(file, "the netlist has no parts to place" + (netlist.Parts.Count > 0 ? " (only sources)" : "") + ". Give at least one part line (R, C, L, D, Q, J, M or X in SPICE; see docs/netlist-format.md).");
+        var ledger = new ImportLedger();
 
         var facts = new Dictionary<string, NetFacts>(StringComparer.Ordinal);
         foreach (var f in netlist.Nets) facts[f.Name] = facts.TryGetValue(f.Name, out var had) ? had.Merge(f) : f;
@@ -24,13 +27,13 @@ public static class ProjectBuilder
         }
         var estimated = VoltageEstimator.Estimate(netlist.Parts, facts);
 
-        var merged = WindingMerger.Merge(netlist.Parts, netlist.Couplings, file);
+        var merged = WindingMerger.Merge(netlist.Parts, netlist.Couplings, file, ledger.Windings);
         var footprints = new List<Footprint>();
         var parts = new List<Part>();
         foreach (var package in SectionGrouper.Group(merged, map, file, notes))
         {
             RefuseGeneratedForm(package.Ref, file, package.First.Line);
-            var part = package.IsSectioned ? Sectioned(package, options.Library, map, file, notes) : Single(package.First, options.Library, map, file, notes);
+            var part = package.IsSectioned ? Sectioned(package, options.Library, map, file, notes, ledger) : Single(package.First, options.Library, map, file, notes, ledger);
             parts.Add(part);
             if (!footprints.Any(f => string.Equals(f.Name, part.Footprint, StringComparison.OrdinalIgnoreCase)))
                 footprints.Add(options.Library.Find(part.Footprint)!);
@@ -48,7 +51,8 @@ public static class ProjectBuilder
             footprints.ToValueList(),
             Layout: null,
             Description: netlist.Title,
-            FootprintDirs: (options.FootprintDirs ?? []).Concat(netlist.FootprintDirs ?? ValueList<string>.Empty).Distinct().ToValueList());
+            FootprintDirs: (options.FootprintDirs ?? []).Concat(netlist.FootprintDirs ?? ValueList<string>.Empty).Distinct().ToValueList(),
+            Imported: ledger.Record(netlist, parts));
         var problem = ProjectValidator.FirstProblem(project);
         if (problem is not null) throw new InputException(file, $"the imported project does not hold together: {problem.Value.Message}");
         return new ImportResult(project, notes.ToValueList());
@@ -76,7 +80,7 @@ public static class ProjectBuilder
         throw new InputException(file, $"part reference {reference} has the form PadPlan gives {what}, so the build steps would name two things {reference}. Rename the part (e.g. {reference}A or J{reference[prefix.Length..]}).", line);
     }
 
-    private static Part Single(NetlistPart part, FootprintLibrary library, PartsMap map, string file, List<ImportNote> notes)
+    private static Part Single(NetlistPart part, FootprintLibrary library, PartsMap map, string file, List<ImportNote> notes, ImportLedger ledger)
     {
         InputException Bad(string message) => new(file, $"{part.Ref}: {message}", part.Line);
         var entry = map.For(part.Ref, part.Value, part.Model);
@@ -89,6 +93,13 @@ public static class ProjectBuilder
             rename = part.Pins.Select((p, i) => (p.Name, Lead: OpAmpPinout.Lead(1, 0, roles[i]).Lead.ToString(System.Globalization.CultureInfo.InvariantCulture)))
                 .ToDictionary(x => x.Name, x => x.Lead, StringComparer.OrdinalIgnoreCase);
             notes.Add(new ImportNote(file, part.Line, $"{part.Ref}: a single op-amp by its pin names; put on dip-8 with the usual single pinout (2 -in, 3 +in, 4 V-, 6 out, 7 V+). Check the data sheet; a parts map can say otherwise."));
+            ledger.Pinout = "single op-amp pinout by pin names";
+        }
+        if (name is null && part.Kind == PartKind.Subcircuit && StandardPinouts.Find(part) is { } standard)
+        {
+            (name, rename) = (standard.Footprint, standard.Leads);
+            notes.Add(new ImportNote(file, part.Line, $"{part.Ref}: {standard.Note} Check the data sheet; a parts map can say otherwise."));
+            ledger.Pinout = standard.Name;
         }
         if (name is null)
         {
@@ -101,6 +112,9 @@ public static class ProjectBuilder
         }
         var footprint = entry?.Footprint is not null ? library.Require(name, map.File, entry.Line) : library.Require(name, file, part.Line);
         var mapped = PinMapper.Map(part, footprint, entry?.Variant ?? part.Variant, rename, Bad);
+        ledger.Mapped(part, part.Ref, mapped, footprint.Name, entry is not null, assumed);
+        if (mapped.Guessed && part.Kind is PartKind.Bjt or PartKind.Jfet or PartKind.Mosfet)
+            ledger.Assumed(part.Ref, $"pin order {mapped.Variant} on {footprint.Name}");
         if (mapped.Guessed && part.Kind is PartKind.Bjt or PartKind.Jfet or PartKind.Mosfet)
             notes.Add(new ImportNote(file, part.Line, $"{part.Ref}: pin order not given, so {footprint.Name} pin order {mapped.Variant} is assumed (lead 1 = {footprint.PinNames(mapped.Variant)[0]}). Pinouts differ between types: check the data sheet and set \"variant\" for {part.Ref} in a parts map, or write {footprint.Name}/ORDER in a .ppn file."));
         return new Part(part.Ref, entry?.Value ?? part.Value, footprint.Name, mapped.Pins, mapped.Variant, FootprintAssumed: assumed);
@@ -114,7 +128,7 @@ public static class ProjectBuilder
         _ => $"{part.Ref}: value {part.Value} is not known, so {footprint} is assumed; name the footprint in a parts map.",
     };
 
-    private static Part Sectioned(PartSections package, FootprintLibrary library, PartsMap map, string file, List<ImportNote> notes)
+    private static Part Sectioned(PartSections package, FootprintLibrary library, PartsMap map, string file, List<ImportNote> notes, ImportLedger ledger)
     {
         var first = package.First;
         InputException Bad(string message, int? line = null) => new(file, $"{package.Ref}: {message}", line ?? first.Line);
@@ -164,6 +178,8 @@ public static class ProjectBuilder
         foreach (var (letter, part) in package.Sections)
         {
             var mapped = PinMapper.Map(part, footprint, variant, pinsOf(letter, part), m => Bad($"section {letter}: {m}", part.Line));
+            ledger.Pinout = $"section {letter}";
+            ledger.Mapped(part, package.Ref, mapped, footprint.Name, entry is not null, assumed);
             variant = mapped.Variant;
             foreach (var pin in mapped.Pins)
             {

@@ -11,7 +11,8 @@ public sealed record Project(
     ValueList<Footprint> Footprints,
     Layout? Layout = null,
     string Description = "",
-    ValueList<string>? FootprintDirs = null)
+    ValueList<string>? FootprintDirs = null,
+    ImportRecord? Imported = null)
 {
     public string Name { get; } = Guard.Name(Name, "project name");
     public ValueList<string> FootprintDirs { get; } = FootprintDirs ?? ValueList<string>.Empty;

@@ -4,7 +4,7 @@ using PadPlan.Model;
 namespace PadPlan.ProjectFiles;
 
 /// <summary>Turns file DTOs into model records, naming the JSON path (and line) of anything missing or wrong.</summary>
-internal sealed class DtoReader(string file, byte[] text)
+internal sealed partial class DtoReader(string file, byte[] text)
 {
     public InputException Fail(string path, string message) =>
         new(file, message, JsonLineLocator.LineOf(text, path), jsonPath: path);

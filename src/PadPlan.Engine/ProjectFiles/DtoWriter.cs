@@ -3,7 +3,7 @@ using PadPlan.Model;
 namespace PadPlan.ProjectFiles;
 
 /// <summary>Turns model records into file DTOs. Values the reader would default are still written, so a file shows every setting in force.</summary>
-internal static class DtoWriter
+internal static partial class DtoWriter
 {
     public static ProjectDto Project(Project p) => new()
     {
@@ -18,6 +18,7 @@ internal static class DtoWriter
         Parts = [.. p.Parts.Select(Part)],
         Footprints = [.. p.Footprints.Select(f => Footprint(f, includeFamily: true))],
         Layout = p.Layout is null ? null : Layout(p.Layout),
+        Imported = p.Imported is null ? null : Imported(p.Imported),
     };
 
     private static BoardDto Board(Board b) => new()

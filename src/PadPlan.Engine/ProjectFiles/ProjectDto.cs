@@ -20,6 +20,7 @@ public sealed class ProjectDto
     public List<PartDto>? Parts { get; set; }
     public List<FootprintDto>? Footprints { get; set; }
     public LayoutDto? Layout { get; set; }
+    public ImportRecordDto? Imported { get; set; }
 }
 
 public sealed class BoardDto

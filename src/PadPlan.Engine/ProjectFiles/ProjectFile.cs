@@ -55,7 +55,8 @@ public static class ProjectFile
             (dto.Footprints ?? []).Select((f, i) => reader.Footprint(f, $"$.footprints[{i}]")).ToValueList(),
             dto.Layout is null ? null : reader.Layout(dto.Layout, "$.layout"),
             dto.Description ?? "",
-            dto.FootprintDirs?.ToValueList());
+            dto.FootprintDirs?.ToValueList(),
+            dto.Imported is null ? null : reader.Imported(dto.Imported, "$.imported"));
         var problem = ProjectValidator.FirstProblem(project);
         if (problem is not null) throw reader.Fail(problem.Value.Path, problem.Value.Message);
         return project;

@@ -22,6 +22,8 @@ public static class DefaultFootprints
             PartKind.Transformer => part.Pins.Count is >= 2 and <= 6 ? ($"toroid-13mm-{part.Pins.Count}", true) : null,
             PartKind.Landing => part.Pins.Count <= 8 ? ($"landing-{part.Pins.Count}", false) : null,
             PartKind.Subcircuit when Crystal(model) && part.Pins.Count == 2 => ("hc49-u", false),
+            // a two- or three-port part (a regulator, a reference, a sensor) on a generic single row, not a DIP
+            PartKind.Subcircuit when part.Positional && part.Pins.Count is 2 or 3 => ($"sip-{part.Pins.Count}", true),
             PartKind.Subcircuit => GenericDip(PinsNeeded(part)) is { } dip ? (dip, true) : null,
             _ => null,
         };

@@ -7,7 +7,8 @@ namespace PadPlan.Import;
 /// <summary>Turns inductors coupled by K lines into one physical part, a toroid or transformer, with a lead for each winding end: winding n has leads 2n-1 (its first node) and 2n.</summary>
 public static class WindingMerger
 {
-    public static List<NetlistPart> Merge(IReadOnlyList<NetlistPart> parts, IReadOnlyList<WindingCoupling> couplings, string file)
+    /// <param name="mergedPins">Filled with (inductor, its pin) to (merged part, its pin), so elements can still find their leads.</param>
+    public static List<NetlistPart> Merge(IReadOnlyList<NetlistPart> parts, IReadOnlyList<WindingCoupling> couplings, string file, Dictionary<(string Ref, string Pin), (string Ref, string Pin)>? mergedPins = null)
     {
         if (couplings.Count == 0) return [.. parts];
         var byRef = parts.ToDictionary(p => p.Ref, StringComparer.OrdinalIgnoreCase);
@@ -51,6 +52,9 @@ public static class WindingMerger
                 new NetlistPin((2 * i + 1).ToString(CultureInfo.InvariantCulture), byRef[l].Pins[0].Net),
                 new NetlistPin((2 * i + 2).ToString(CultureInfo.InvariantCulture), byRef[l].Pins[1].Net),
             }).ToValueList();
+            for (var i = 0; i < sorted.Count; i++)
+                for (var end = 0; end < 2; end++)
+                    if (mergedPins is not null) mergedPins[(byRef[sorted[i]].Ref, byRef[sorted[i]].Pins[end].Name)] = (reference, (2 * i + end + 1).ToString(CultureInfo.InvariantCulture));
             var k = lines.Max(c => c.Coefficient);
             var value = "windings " + string.Join(", ", sorted.Select((l, i) => $"{2 * i + 1}-{2 * i + 2} {byRef[l].Ref} {byRef[l].Value}")) + $" (k {k.ToString("0.###", CultureInfo.InvariantCulture)})";
             merged[index] = new NetlistPart(reference, PartKind.Transformer, value, null, lines[0].Ref, null, null, pins, Positional: true, lines[0].Line);

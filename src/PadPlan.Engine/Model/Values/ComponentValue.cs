@@ -131,7 +131,8 @@ public readonly record struct ComponentValue(double Number, string Unit)
         if (Number <= 0) return ToDisplay();
         var (mantissa, prefix) = Engineering(Number);
         var letter = prefix switch { "" => Unit == "Ω" ? "R" : "", "µ" => "u", var p => p };
-        if (Unit == "Ω" && Number < 1) return "R" + Format(Number)[2..];
+        // below 1 ohm the R stands for the decimal point (R47); a value too small for three decimals keeps its SI form
+        if (Unit == "Ω" && Number < 1) return Format(Number) is { Length: > 2 } small ? "R" + small[2..] : ToDisplay();
         var text = Format(mantissa);
         if (letter.Length == 0) return text;
         var dot = text.IndexOf('.');
