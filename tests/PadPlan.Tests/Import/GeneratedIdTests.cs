@@ -11,13 +11,15 @@ public class GeneratedIdTests
         NetlistImporter.Import(System.Text.Encoding.UTF8.GetBytes(text.Replace("\r\n", "\n")), name, new ImportOptions(FootprintLibrary.Load([])));
 
     // SPICE element letters (Berkeley SPICE3 / ngspice manual): S is a voltage-controlled switch, which PadPlan cannot place, so
-    // no SPICE element ever becomes a part whose reference starts with the strap prefix.
+    // an S line is left off the board with a warning and no SPICE element ever becomes a part whose reference starts with the
+    // strap prefix.
     [Fact]
-    public void The_SPICE_element_of_the_strap_prefix_letter_is_refused_not_made_a_part()
+    public void The_SPICE_element_of_the_strap_prefix_letter_is_left_off_not_made_a_part()
     {
         Assert.Equal('S', GeneratedIds.StrapPrefix[0]);
-        var e = Assert.Throws<InputException>(() => Import($"title\n{GeneratedIds.Strap(1)} a b c d SW\nR1 a b 1k\n.end\n", "t.cir"));
-        Assert.Contains("has no part PadPlan can place", e.Message);
+        var result = Import($"title\n{GeneratedIds.Strap(1)} a b c d SW\nR1 a b 1k\nR2 c d 1k\n.model SW sw\n.end\n", "t.cir");
+        Assert.DoesNotContain(result.Project.Parts, p => p.Ref.StartsWith(GeneratedIds.StrapPrefix, StringComparison.OrdinalIgnoreCase));
+        Assert.Contains(result.Notes, n => n.Message.Contains(GeneratedIds.Strap(1)) && n.Message.Contains("switch"));
         // The letters that do become parts (R C L D Q J M X, and V I as wire landings W1...) are not the strap prefix's first letter.
         Assert.DoesNotContain(GeneratedIds.StrapPrefix[0], "RCLDQJMXVIW");
     }
