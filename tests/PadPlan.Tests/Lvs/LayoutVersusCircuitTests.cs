@@ -1,0 +1,79 @@
+using PadPlan.Import;
+using PadPlan.Model;
+using PadPlan.Planning;
+using PadPlan.Tests.Import;
+
+namespace PadPlan.Tests.Lvs;
+
+// The outside oracle is ngspice (Debian package ngspice, batch mode): the operating point of the user's deck against
+// that of the deck `padplan export --spice` extracts from the placed layout, 1e-6 relative or 1 µV absolute.
+public class LayoutVersusCircuitTests
+{
+    private static readonly PlacerSettings Quick = new(Effort: Effort.Quick);
+
+    public static TheoryData<string> CorpusDecks => new(SpiceCorpus.Buildable);
+
+    public static TheoryData<string> ExampleDecks => new(Directory.GetDirectories(TestPaths.Examples)
+        .SelectMany(d => Directory.GetFiles(d, "*.cir")).Select(f => Path.GetRelativePath(TestPaths.Examples, f)).Order(StringComparer.Ordinal));
+
+    private static Project Placed(string netlist, PartsMap? map = null)
+    {
+        var imported = NetlistImporter.ImportFile(netlist, new ImportOptions(ImportFixture.Library, map)).Project;
+        var result = Placer.Place(imported, Quick);
+        Assert.True(result.Succeeded, result.Failure?.Message);
+        return result.Project!;
+    }
+
+    [NgspiceTheory]
+    [MemberData(nameof(CorpusDecks))]
+    public void Every_corpus_deck_simulates_the_same_from_its_layout(string deck)
+    {
+        var problems = LayoutVersusCircuit.Compare(File.ReadAllText(SpiceCorpus.PathOf(deck)), Placed(SpiceCorpus.PathOf(deck)));
+        Assert.True(problems.Count == 0, string.Join("\n", problems));
+    }
+
+    [NgspiceTheory]
+    [MemberData(nameof(ExampleDecks))]
+    public void Every_example_deck_simulates_the_same_from_its_layout(string example)
+    {
+        var path = Path.Combine(TestPaths.Examples, example);
+        var partsFile = Path.Combine(Path.GetDirectoryName(path)!, "parts.json");
+        var map = File.Exists(partsFile) ? PartsMap.Read(partsFile, ImportFixture.Library) : null;
+        var problems = LayoutVersusCircuit.Compare(File.ReadAllText(path), Placed(path, map));
+        Assert.True(problems.Count == 0, string.Join("\n", problems));
+    }
+
+    [NgspiceFact]
+    public void A_lead_moved_to_a_wrong_pad_makes_the_comparison_fail()
+    {
+        // V1 vcc 0 12, R1 vcc mid 3.3k, R2 mid 0 6.8k: R2's lead on mid moved to the pad of vcc
+        var path = SpiceCorpus.PathOf("src-dc-bare");
+        var placed = Placed(path);
+        var faulty = MoveLead(placed, "R2", "R1");
+        Assert.Empty(LayoutVersusCircuit.Compare(File.ReadAllText(path), placed));
+        var problems = LayoutVersusCircuit.Compare(File.ReadAllText(path), faulty);
+        Assert.Contains(problems, p => p.StartsWith("R2 lead", StringComparison.Ordinal) || p.StartsWith("R1 lead", StringComparison.Ordinal));
+        Assert.Contains(problems, p => p.StartsWith("V1 current", StringComparison.Ordinal));
+    }
+
+    [NgspiceFact]
+    public void A_lead_moved_in_a_transistor_stage_makes_the_comparison_fail()
+    {
+        var path = SpiceCorpus.PathOf("dev-bjt-substrate");
+        var placed = Placed(path);
+        Assert.NotEmpty(LayoutVersusCircuit.Compare(File.ReadAllText(path), MoveLead(placed, "R4", "R3")));
+    }
+
+    // Moves the first pad-landed lead of one part onto the pad that the first pad-landed lead of another part uses.
+    private static Project MoveLead(Project placed, string reference, string onto)
+    {
+        var layout = placed.Layout!;
+        var target = layout.Placements.Single(p => p.Ref == onto).Leads.First(l => l.Pad is not null);
+        var island = layout.Islands().Single(i => i.Id == target.Pad);
+        var placements = layout.Placements.Select(p => p.Ref != reference ? p : p with
+        {
+            Leads = p.Leads.Select((l, i) => i == p.Leads.ToList().FindIndex(x => x.Pad is not null) ? new LeadLanding(l.Pin, island.Id, island.Center) : l).ToValueList(),
+        }).ToValueList();
+        return placed with { Layout = layout with { Placements = placements } };
+    }
+}
