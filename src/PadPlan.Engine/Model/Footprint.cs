@@ -30,10 +30,31 @@ public sealed record PinVariant(string Name, ValueList<string> Pins)
     public string Name { get; } = Guard.Name(Name, "variant name");
 }
 
+/// <summary>A printed mark the assembly view draws at one lead, so the builder can turn the part the right way.</summary>
+public enum MarkKind
+{
+    /// <summary>Cathode band across the body at this lead's end (diodes; the flat side of an LED rim).</summary>
+    Band,
+    /// <summary>A "+" beside this lead (electrolytic capacitors).</summary>
+    Plus,
+    /// <summary>A dot inside the body beside this lead: pin 1 of an IC or a trimmer.</summary>
+    Dot,
+    /// <summary>A notch in the body edge at this lead's end: the pin-1 end of a DIP (JEDEC MS-001 index area).</summary>
+    Notch,
+    /// <summary>A dot where a winding starts at this wire end (toroids and transformers: the phasing dot).</summary>
+    Winding,
+}
+
+/// <summary>One mark of a footprint and the lead it belongs to.</summary>
+public sealed record FootprintMark(MarkKind Kind, string Lead)
+{
+    public string Lead { get; } = Guard.Name(Lead, "mark lead");
+}
+
 /// <summary>A physical package: plan-view body, height, leads and pin orders.</summary>
 public sealed record Footprint
 {
-    public Footprint(string name, string family, string description, ValueList<Point> body, double height, ValueList<FootprintLead> leads, MountStyle mount, string source, ValueList<PinVariant>? variants = null)
+    public Footprint(string name, string family, string description, ValueList<Point> body, double height, ValueList<FootprintLead> leads, MountStyle mount, string source, ValueList<PinVariant>? variants = null, ValueList<FootprintMark>? marks = null)
     {
         Name = Guard.Name(name, "footprint name");
         Family = family ?? "";
@@ -51,6 +72,10 @@ public sealed record Footprint
         foreach (var v in Variants)
             if (v.Pins.Count != leads.Count)
                 throw new ArgumentException($"Footprint {name}: variant '{v.Name}' names {v.Pins.Count} pins for {leads.Count} leads.", nameof(variants));
+        Marks = marks ?? ValueList<FootprintMark>.Empty;
+        foreach (var m in Marks)
+            if (!leads.Any(l => string.Equals(l.Name, m.Lead, StringComparison.Ordinal)))
+                throw new ArgumentException($"Footprint {name}: the {m.Kind.ToString().ToLowerInvariant()} mark names lead '{m.Lead}', which the footprint does not have; use one of {string.Join(", ", leads.Select(l => l.Name))}.", nameof(marks));
     }
 
     public string Name { get; init; }
@@ -64,6 +89,8 @@ public sealed record Footprint
     /// <summary>Where the dimensions come from: a JEDEC outline, or "typical, common practice".</summary>
     public string Source { get; init; }
     public ValueList<PinVariant> Variants { get; init; }
+    /// <summary>Polarity and orientation marks printed on the assembly view, each at a lead (by lead name).</summary>
+    public ValueList<FootprintMark> Marks { get; init; }
 
     /// <summary>What builders are told wherever a footprint's figures are nominal.</summary>
     public const string NominalWarning = "typical size, check your part";

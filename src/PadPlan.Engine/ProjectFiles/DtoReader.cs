@@ -149,8 +149,14 @@ internal sealed partial class DtoReader(string file, byte[] text)
         }).ToValueList();
         var variants = (f.Variants ?? []).Select((v, i) => Build($"{path}.variants[{i}]",
             () => new PinVariant(Need(v.Name, $"{path}.variants[{i}].name", "variant name"), Need(v.Pins, $"{path}.variants[{i}].pins", "variant pin list").ToValueList()))).ToValueList();
+        var marks = (f.Marks ?? []).Select((m, i) =>
+        {
+            var mp = $"{path}.marks[{i}]";
+            var kind = Enum(Need(m.Kind, $"{mp}.kind", "mark kind"), $"{mp}.kind", "mark kind", MarkKind.Dot);
+            return Build(mp, () => new FootprintMark(kind, Need(m.Lead, $"{mp}.lead", "lead name the mark sits at")));
+        }).ToValueList();
         var mount = Enum(Need(f.Mount, $"{path}.mount", "mount style"), $"{path}.mount", "mount style", MountStyle.Axial);
-        return Build(path, () => new Footprint(name, f.Family ?? family ?? "", f.Description ?? "", body, Need(f.Height, $"{path}.height", "body height"), leads, mount, f.Source ?? "", variants));
+        return Build(path, () => new Footprint(name, f.Family ?? family ?? "", f.Description ?? "", body, Need(f.Height, $"{path}.height", "body height"), leads, mount, f.Source ?? "", variants, marks));
     }
 
     public Layout Layout(LayoutDto l, string path)

@@ -102,6 +102,7 @@ internal static partial class DtoWriter
         Body = [.. f.Body.Select(XY)],
         Leads = [.. f.Leads.Select(l => new FootprintLeadDto { Name = l.Name, Exit = XY(l.Exit), Diameter = l.Diameter, MinReach = l.MinReach, MaxReach = l.MaxReach })],
         Variants = f.Variants.Count == 0 ? null : [.. f.Variants.Select(v => new PinVariantDto { Name = v.Name, Pins = [.. v.Pins] })],
+        Marks = f.Marks.Count == 0 ? null : [.. f.Marks.Select(m => new FootprintMarkDto { Kind = m.Kind.ToString().ToLowerInvariant(), Lead = m.Lead })],
     };
 
     private static LayoutDto Layout(Layout l) => new()

@@ -115,6 +115,7 @@ public sealed class FootprintDto
     public List<double[]>? Body { get; set; }
     public List<FootprintLeadDto>? Leads { get; set; }
     public List<PinVariantDto>? Variants { get; set; }
+    public List<FootprintMarkDto>? Marks { get; set; }
     /// <summary>Family, filled from the library file; optional in a project.</summary>
     public string? Family { get; set; }
 }
@@ -126,6 +127,13 @@ public sealed class FootprintLeadDto
     public double? Diameter { get; set; }
     public double? MinReach { get; set; }
     public double? MaxReach { get; set; }
+}
+
+/// <summary>A polarity or orientation mark at one lead: kind "band", "plus", "dot", "notch" or "winding".</summary>
+public sealed class FootprintMarkDto
+{
+    public string? Kind { get; set; }
+    public string? Lead { get; set; }
 }
 
 public sealed class PinVariantDto

@@ -38,6 +38,8 @@ public static class FootprintText
             sb.Append("  pin orders (pin on lead 1, 2, 3...)\n");
             foreach (var v in f.Variants) sb.Append(CultureInfo.InvariantCulture, $"           {v.Name,-6} {string.Join(" ", v.Pins)}\n");
         }
+        if (f.Marks.Count > 0)
+            sb.Append(CultureInfo.InvariantCulture, $"  marks    {string.Join(", ", f.Marks.Select(m => $"{m.Kind.ToString().ToLowerInvariant()} at lead {m.Lead}"))}\n");
         return sb.ToString();
     }
 

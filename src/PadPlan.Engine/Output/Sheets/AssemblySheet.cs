@@ -5,43 +5,89 @@ using PadPlan.Output.Drawing;
 namespace PadPlan.Output.Sheets;
 
 /// <summary>
-/// The view to build from, enlarged to fill the page for small boards: pads tinted by net, parts with reference and
-/// value, each lead drawn from the body to where it lands, net names at the pads, ground landings, and a legend.
+/// The view to build from, enlarged to fill the page for small boards: part outlines over pads tinted by net, every
+/// lead from the body to where it lands (a dot on a pad, the plane symbol for ground), pin names and polarity marks,
+/// labels placed clear of each other, and a legend. When the labels do not fit at the page's scale, the view is
+/// enlarged further and spread over several pages (tiles) rather than letting labels overlap.
 /// </summary>
 internal static class AssemblySheet
 {
     /// <summary>Enlargements offered, so the printed scale is a round figure.</summary>
-    private static readonly double[] Scales = [0.25, 0.4, 0.5, 0.6, 0.75, 1, 1.25, 1.5, 2, 2.5, 3, 4, 5, 6, 8];
+    private static readonly double[] Scales = [0.25, 0.4, 0.5, 0.6, 0.75, 1, 1.25, 1.5, 2, 2.5, 3, 4, 5, 6, 8, 10, 12];
+    /// <summary>Largest enlargement used to make room for labels on a crowded board.</summary>
+    private const double MaxCrowdedScale = 12;
     private const double LegendRow = 4.2;
     private const double LegendColumn = 46;
+    /// <summary>Room round the board for labels that stand outside its edge (page mm).</summary>
     private const double Room = 8;
+    private static readonly Ink BodyFill = Ink.Grey(0.95);
 
-    public static SheetDraft Build(Project project, SheetOptions options)
+    /// <summary>The chosen view: its scale, the scene (in view mm, board at Room from the top-left) and the tiles it is printed on.</summary>
+    internal sealed record Plan(PageFrame Frame, Box Area, Box Legend, double Scale, BoardScene Scene, TilePlan Tiles);
+
+    public static IReadOnlyList<SheetDraft> Build(Project project, SheetOptions options)
     {
+        var plan = Choose(project, options);
         var palette = new NetPalette(project);
-        var (width, height) = (project.Board.Width!.Value, project.Board.Height!.Value);
-        var best = new[] { false, true }
-            .Select(landscape => Fit(new PageFrame(options.Paper, landscape), palette, width, height, options.MaxAssemblyScale))
-            .OrderByDescending(f => f.Scale).ThenBy(f => f.Frame.Landscape != width > height).First();
-        var (frame, area, scale, legend) = best;
-        var origin = new Point(area.Left + (area.Width - width * scale) / 2, area.Top + (area.Height - height * scale) / 2);
-        var view = new BoardView(origin, scale);
-        var page = new PageBuilder();
-        DrawBoard(page, project, view, palette);
-        DrawLegend(page, legend, project, palette);
-        var caption = $"Assembly view, scale {ScaleText(scale)} (not for measuring)";
-        return new SheetDraft(SheetKind.Assembly, frame, caption, page.Shapes(), view);
+        var drafts = new List<SheetDraft>();
+        foreach (var tile in plan.Tiles.Tiles)
+        {
+            var shift = plan.Tiles.IsTiled
+                ? new Point(plan.Area.Left - tile.Region.Left, plan.Area.Top - tile.Region.Top)
+                : new Point(plan.Area.Left + (plan.Area.Width - tile.Region.Width) / 2, plan.Area.Top + (plan.Area.Height - tile.Region.Height) / 2);
+            var page = new PageBuilder();
+            var inner = new PageBuilder();
+            DrawScene(inner, project, plan.Scene, palette, shift);
+            page.Clipped(plan.Tiles.IsTiled ? plan.Area : plan.Area.Inflate(Room), inner);
+            DrawLegend(page, plan.Legend, project, plan.Scene, palette);
+            var caption = $"Assembly view, scale {ScaleText(plan.Scale)} (not for measuring)"
+                + (plan.Tiles.IsTiled ? $" — part {tile.Row * plan.Tiles.Columns + tile.Column + 1} of {plan.Tiles.Tiles.Count} (row {tile.Row + 1}, column {tile.Column + 1})" : "");
+            var view = new BoardView(plan.Scene.View.Origin + shift, plan.Scale);
+            drafts.Add(new SheetDraft(SheetKind.Assembly, plan.Frame, caption, page.Shapes(), view));
+        }
+        return drafts;
     }
 
-    private static (PageFrame Frame, Box Area, double Scale, Box Legend) Fit(PageFrame frame, NetPalette palette, double width, double height, double maxScale)
+    /// <summary>
+    /// The largest round scale at which the board fits one page, if every label finds a clear place there; otherwise the
+    /// next larger scales in turn, tiled over as many pages as they need, until the labels fit (or, failing that, the
+    /// smallest scale that leaves fewest labels without a clear place).
+    /// </summary>
+    internal static Plan Choose(Project project, SheetOptions options)
+    {
+        var (width, height) = (project.Board.Width!.Value, project.Board.Height!.Value);
+        var entries = LegendEntryCount(project);
+        var fits = new[] { false, true }
+            .Select(landscape => Fit(new PageFrame(options.Paper, landscape), entries, width, height, options.MaxAssemblyScale))
+            .OrderByDescending(f => f.Scale).ThenBy(f => f.Frame.Landscape != width > height).ToList();
+        var first = fits[0];
+        var scene = Scene(project, first.Scale);
+        var single = new TilePlan(first.Frame.Landscape, 1, 1, ValueList.Of(new Tile(0, 0, new Box(0, 0, width * first.Scale + 2 * Room, height * first.Scale + 2 * Room))));
+        var plan = new Plan(first.Frame, first.Area, first.Legend, first.Scale, scene, single);
+        var best = plan;
+        foreach (var scale in Scales.Where(s => s > first.Scale + 1e-9 && s <= MaxCrowdedScale + 1e-9))
+        {
+            if (best.Scene.Unresolved == 0) break;
+            var larger = Scene(project, scale);
+            if (larger.Unresolved >= best.Scene.Unresolved) continue;
+            var tiles = TilePlan.For(width * scale + 2 * Room, height * scale + 2 * Room,
+                landscape => { var f = fits.First(x => x.Frame.Landscape == landscape); return (f.Area.Width, f.Area.Height); }, Room * 2);
+            var fit = fits.First(f => f.Frame.Landscape == tiles.Landscape);
+            best = new Plan(fit.Frame, fit.Area, fit.Legend, scale, larger, tiles);
+        }
+        return best;
+    }
+
+    private static BoardScene Scene(Project project, double scale) => BoardScene.Build(project, new BoardView(new Point(Room, Room), scale), Room - 1);
+
+    private static (PageFrame Frame, Box Area, double Scale, Box Legend) Fit(PageFrame frame, int entries, double width, double height, double maxScale)
     {
         var body = frame.Body;
-        var entries = palette.Nets.Count + 3;
         var columns = Math.Max(1, (int)Math.Floor(body.Width / LegendColumn));
         var legendHeight = 6 + Math.Ceiling(entries / (double)columns) * LegendRow;
         var legend = body with { Top = body.Bottom - legendHeight };
-        var area = new Box(body.Left + Room, body.Top + Room, body.Right - Room, legend.Top - Room);
-        var fit = Math.Min(area.Width / width, area.Height / height);
+        var area = new Box(body.Left, body.Top, body.Right, legend.Top - 2);
+        var fit = Math.Min((area.Width - 2 * Room) / width, (area.Height - 2 * Room) / height);
         var scale = Scales.LastOrDefault(s => s <= fit + 1e-9 && s <= maxScale + 1e-9);
         if (scale == 0) scale = Math.Min(fit, maxScale);
         return (frame, area, scale, legend);
@@ -51,52 +97,61 @@ internal static class AssemblySheet
         ? string.Create(CultureInfo.InvariantCulture, $"{scale:0.##} : 1")
         : string.Create(CultureInfo.InvariantCulture, $"1 : {1 / scale:0.##}");
 
-    private static void DrawBoard(PageBuilder page, Project project, BoardView view, NetPalette palette)
+    private static void DrawScene(PageBuilder page, Project project, BoardScene scene, NetPalette palette, Point shift)
     {
+        Point P(Point p) => p + shift;
+        var view = new BoardView(scene.View.Origin + shift, scene.View.Scale);
         var layout = project.Layout ?? Layout.Empty;
-        var boardBox = view.ToPage(new Box(0, 0, project.Board.Width!.Value, project.Board.Height!.Value));
-        page.Rect(boardBox, SheetStyle.Heavy, null, view.Length(project.Board.CornerRadius));
+        page.Rect(scene.Board.Offset(shift), SheetStyle.Heavy, null, view.Length(project.Board.CornerRadius));
         foreach (var keepout in project.Board.Keepouts) Marks.Keepout(page, keepout, view);
 
-        var placer = new LabelPlacer(boardBox.Inflate(-0.4));
-        foreach (var keepout in project.Board.Keepouts) placer.Block(view.ToPage(Marks.BoundsOf(keepout)));
-        foreach (var island in layout.Islands())
+        // bodies first as a pale fill, so pads, leads and labels stay visible through them; outlines come on top
+        foreach (var part in scene.Parts) page.Poly(part.Outline.Select(P), true, null, BodyFill);
+        foreach (var pad in scene.Pads)
         {
-            var box = view.ToPage(TemplateSheet.IslandBox(island));
-            var ink = palette.InkOf(island.Net);
-            if (island.Shape == IslandShape.Round) page.Circle(box.Center, box.Width / 2, Stroke.Solid(ink, 0.45), ink.Tint(0.82));
+            var ink = palette.InkOf(pad.Net);
+            var box = pad.Box.Offset(shift);
+            if (pad.Round) page.Circle(box.Center, box.Width / 2, Stroke.Solid(ink, 0.45), ink.Tint(0.82));
             else page.Rect(box, Stroke.Solid(ink, 0.45), ink.Tint(0.82));
-            placer.Block(box.Inflate(0.3));
         }
         foreach (var jumper in layout.Jumpers) DrawJumper(page, layout, jumper, view, palette);
-
-        var parts = TemplateSheet.PlacedParts(project).ToList();
-        foreach (var (part, footprint, placement) in parts)
-            foreach (var landing in placement.Leads)
-            {
-                var lead = footprint.LeadForPin(landing.Pin, part.Variant);
-                var net = part.NetOf(landing.Pin);
-                var to = view.ToPage(landing.At);
-                if (lead is not null)
-                    page.Line(view.ToPage(placement.ToBoard(lead.Exit)), to, palette.StrokeOf(landing.OnPlane ? null : net, 0.5));
-                if (landing.OnPlane) continue;
-                page.Circle(to, 0.55, null, palette.InkOf(net));
-            }
-        foreach (var (_, footprint, placement) in parts)
+        foreach (var lead in scene.Leads)
+            page.Line(P(lead.Exit), P(lead.Landing), palette.StrokeOf(lead.OnPlane ? null : lead.Net, 0.5));
+        foreach (var lead in scene.Leads)
         {
-            var body = Marks.BodyOf(footprint, placement).Select(view.ToPage).ToList();
-            page.Poly(body, true, SheetStyle.Normal, Ink.White);
-            placer.Block(Marks.BoundsOf(body));
+            if (lead.OnPlane) Marks.Ground(page, P(lead.Landing), BoardScene.PlaneSymbol, SheetStyle.Thin, Ink.White);
+            else page.Circle(P(lead.Landing), BoardScene.DotRadius, null, palette.InkOf(lead.Net));
         }
-        foreach (var landing in layout.Placements.SelectMany(p => p.Leads).Where(l => l.OnPlane))
-        {
-            var at = view.ToPage(landing.At);
-            Marks.Ground(page, at, 2.0, SheetStyle.Thin, Ink.White);
-            placer.Block(Box.Around(at, 2.4, 2.4));
-        }
+        foreach (var part in scene.Parts) page.Poly(part.Outline.Select(P), true, SheetStyle.Normal);
+        foreach (var mark in scene.Marks)
+            page.Poly(mark.Shape.Select(P), mark.Filled, mark.Filled ? null : SheetStyle.Normal, mark.Filled ? Ink.Black : Ink.White);
+        foreach (var label in scene.Labels) DrawLabel(page, label, palette, shift);
+    }
 
-        LabelPads(page, layout, view, palette, placer);
-        LabelParts(page, parts, view, placer);
+    private static void DrawLabel(PageBuilder page, SceneLabel label, NetPalette palette, Point shift)
+    {
+        var box = label.Box.Offset(shift);
+        if (label.LeaderFrom is { } a && label.LeaderTo is { } b)
+        {
+            page.Line(a + shift, b + shift, SheetStyle.Fine);
+            page.Circle(b + shift, 0.3, null, Ink.Black);
+        }
+        switch (label.Role)
+        {
+            case LabelRole.PinName:
+                Label.Draw(page, box, label.Text, BoardScene.PinSize, FontWeight.Bold);
+                break;
+            case LabelRole.PadId:
+                Label.Draw(page, box, label.Text, SheetStyle.TextTiny, ink: SheetStyle.Mid);
+                break;
+            case LabelRole.NetName:
+                Label.Draw(page, box, label.Text, SheetStyle.TextSmall, FontWeight.Bold, palette.InkOf(label.Text));
+                break;
+            case LabelRole.PartName:
+                page.Text(label.Text, new Point(box.Center.X, box.Top + SheetStyle.TextNormal * 0.8), SheetStyle.TextNormal, TextAnchor.Middle, FontWeight.Bold);
+                if (label.Second is { } value) page.Text(value, new Point(box.Center.X, box.Bottom - SheetStyle.TextSmall * 0.22), SheetStyle.TextSmall, TextAnchor.Middle);
+                break;
+        }
     }
 
     private static void DrawJumper(PageBuilder page, Layout layout, Jumper jumper, BoardView view, NetPalette palette)
@@ -109,61 +164,35 @@ internal static class AssemblySheet
         page.Poly(points, false, palette.StrokeOf(from.Net, 0.7));
     }
 
-    /// <summary>Pad id inside the pad where it fits; the net name beside it, in the net's colour.</summary>
-    private static void LabelPads(PageBuilder page, Layout layout, BoardView view, NetPalette palette, LabelPlacer placer)
-    {
-        foreach (var island in layout.Islands())
-        {
-            var box = view.ToPage(TemplateSheet.IslandBox(island));
-            var idSize = SheetStyle.TextTiny;
-            // in the upper part of the pad, clear of the lead landings, which mostly sit at its centre
-            if (TextMetrics.Width(island.Id, idSize) < box.Width * 0.7 && idSize * 3.2 < box.Height)
-                page.Text(island.Id, new Point(box.Center.X, box.Top + idSize * (island.Shape == IslandShape.Round ? 1.6 : 1.2)), idSize, TextAnchor.Middle, ink: SheetStyle.Mid);
-            if (island.Net is null) continue;
-            var (w, h) = Label.Size(island.Net, SheetStyle.TextSmall, FontWeight.Bold);
-            var chosen = placer.Place(LabelPlacer.Around(box, w, h, 0.4));
-            Label.Draw(page, chosen, island.Net, SheetStyle.TextSmall, FontWeight.Bold, palette.InkOf(island.Net));
-        }
-    }
+    private static int LegendEntryCount(Project project) => 9 + new NetPalette(project).Nets.Count;
 
-    /// <summary>Reference (bold) over value, inside the body when it fits, else beside it.</summary>
-    private static void LabelParts(PageBuilder page, IReadOnlyList<(Part Part, Footprint Footprint, Placement Placement)> parts, BoardView view, LabelPlacer placer)
-    {
-        foreach (var (part, footprint, placement) in parts)
-        {
-            var body = Marks.BoundsOf(Marks.BodyOf(footprint, placement).Select(view.ToPage));
-            var value = TextMetrics.Fit(part.Value, SheetStyle.TextSmall, 40);
-            var w = Math.Max(TextMetrics.Width(part.Ref, SheetStyle.TextNormal, FontWeight.Bold), TextMetrics.Width(value, SheetStyle.TextSmall)) + 0.4;
-            var h = SheetStyle.TextNormal + (value.Length > 0 ? SheetStyle.TextSmall * 1.15 : 0);
-            var inside = Box.Around(body.Center, w, h);
-            var box = body.Contains(inside) ? inside : placer.Place(LabelPlacer.Around(body, w, h, 0.6));
-            if (body.Contains(inside)) placer.Block(inside);
-            page.Text(part.Ref, new Point(box.Center.X, box.Top + SheetStyle.TextNormal * 0.8), SheetStyle.TextNormal, TextAnchor.Middle, FontWeight.Bold);
-            if (value.Length > 0) page.Text(value, new Point(box.Center.X, box.Bottom - SheetStyle.TextSmall * 0.22), SheetStyle.TextSmall, TextAnchor.Middle);
-        }
-    }
-
-    private static void DrawLegend(PageBuilder page, Box area, Project project, NetPalette palette)
+    /// <summary>Every symbol the view can show, then each net with its colour, line pattern and voltage (estimates marked as such).</summary>
+    private static void DrawLegend(PageBuilder page, Box area, Project project, BoardScene scene, NetPalette palette)
     {
         page.Line(new Point(area.Left, area.Top), new Point(area.Right, area.Top), SheetStyle.Rule);
         page.Text("Legend", new Point(area.Left, area.Top + 4), SheetStyle.TextNormal, weight: FontWeight.Bold);
         var columns = Math.Max(1, (int)Math.Floor(area.Width / LegendColumn));
+        var kinds = scene.Marks.Select(m => m.Kind).ToHashSet();
         var entries = new List<(Action<Point> Symbol, string Text)>
         {
-            (p => { page.Rect(Box.Around(p, 7, 3), SheetStyle.Normal, Ink.White); }, "Part body"),
-            (p => Marks.Ground(page, p, 2.0, SheetStyle.Thin, Ink.White), "Lead to the ground plane"),
-            (p => page.Line(p - new Point(3.5, 0), p + new Point(3.5, 0), Stroke.Solid(Ink.Black, 0.5)), "Ground lead"),
+            (p => { page.Rect(Box.Around(p, 7, 3), SheetStyle.Normal, BodyFill); }, "Part body, seen from above"),
+            (p => { page.Line(p - new Point(3.5, 0), p + new Point(2.4, 0), Stroke.Solid(SheetStyle.Mid, 0.5)); page.Circle(p + new Point(2.4, 0), BoardScene.DotRadius, null, SheetStyle.Mid); }, "Lead: solder where the dot is"),
+            (p => { page.Line(p - new Point(3.5, 0), p + new Point(1.5, 0), Stroke.Solid(Ink.Black, 0.5)); Marks.Ground(page, p + new Point(2.4, 0), BoardScene.PlaneSymbol, SheetStyle.Thin, Ink.White); }, "Ground lead: solder to the plane"),
+            (p => page.Text("E B C", p + new Point(0, 0.6), BoardScene.PinSize, TextAnchor.Middle, FontWeight.Bold), "Pin name at its lead"),
+            (p => { page.Line(p - new Point(3.5, 1.5), p, SheetStyle.Fine); page.Circle(p, 0.3, null, Ink.Black); }, "Leader: the label belongs here"),
         };
+        if (kinds.Contains(MarkKind.Band)) entries.Add((p => { page.Rect(Box.Around(p, 7, 3), SheetStyle.Normal, BodyFill); page.Rect(Box.Around(p + new Point(2, 0), 1.2, 3), null, Ink.Black); }, "Band: the cathode (K) end"));
+        if (kinds.Contains(MarkKind.Notch) || kinds.Contains(MarkKind.Dot)) entries.Add((p => { page.Rect(Box.Around(p, 7, 3), SheetStyle.Normal, BodyFill); page.Circle(p + new Point(-2.2, 0.5), 0.4, null, Ink.Black); }, "Notch or dot: the pin 1 end"));
+        if (kinds.Contains(MarkKind.Winding)) entries.Add((p => page.Circle(p, 0.45, null, Ink.Black), "Dot: where a winding starts"));
         foreach (var net in palette.Nets)
         {
             var name = net;
             var facts = project.FindNet(net);
-            var volts = facts?.Voltage is { } v ? string.Create(CultureInfo.InvariantCulture, $" ({v:0.#} V)") : "";
             entries.Add((p =>
             {
                 page.Line(p - new Point(3.5, 0), p + new Point(1, 0), palette.StrokeOf(name, 0.5));
                 page.Circle(p + new Point(2.4, 0), 1.3, Stroke.Solid(palette.InkOf(name), 0.45), palette.InkOf(name).Tint(0.82));
-            }, name + volts));
+            }, name + VoltageText(facts)));
         }
         var top = area.Top + 6;
         for (var i = 0; i < entries.Count; i++)
@@ -174,4 +203,9 @@ internal static class AssemblySheet
             page.Text(TextMetrics.Fit(entries[i].Text, SheetStyle.TextSmall, LegendColumn - 11), new Point(x + 9.5, y + SheetStyle.TextSmall * 0.36), SheetStyle.TextSmall);
         }
     }
+
+    /// <summary>" (12 V)" for a stated voltage, " (≈ 8.2 V est.)" for one the importer estimated, "" when none is known.</summary>
+    internal static string VoltageText(Net? net) => net?.Voltage is not { } v ? ""
+        : net.VoltageEstimated ? string.Create(CultureInfo.InvariantCulture, $" (\u2248 {v:0.#} V est.)")
+        : string.Create(CultureInfo.InvariantCulture, $" ({v:0.#} V)");
 }

@@ -1,51 +1,162 @@
+using PadPlan.Model;
 using PadPlan.Output.Drawing;
 
 namespace PadPlan.Output.Sheets;
 
-/// <summary>Puts labels where they cover no pad, mark or other label: tries the candidates in order and takes the first clear one, else the one that covers least. Lives for one page.</summary>
+/// <summary>What a label belongs to, for the rule that a label stays nearer its own object than any other of the same kind.</summary>
+public enum LabelTarget
+{
+    Pad,
+    Part,
+    Lead,
+    Other,
+}
+
+/// <summary>
+/// Greedy label placement over candidate positions (after the point-feature labelling of Christensen, Marks and
+/// Shieber 1995, greedy variant): each label tries rings of candidate boxes around its object, 12 per ring, nearest
+/// ring first, and takes the cheapest. A candidate that covers something it does not own (another label, a pad, a
+/// landing dot, a mark, a part outline), leaves the area, or sits nearer another object of its own kind than its own
+/// costs so much that it is taken only when nothing else is left; the caller counts those as unresolved and enlarges
+/// the view. Far rings get a leader line back to the object. Lives for one view.
+/// </summary>
 internal sealed class LabelPlacer(Box bounds)
 {
-    private readonly List<Box> _taken = [];
+    private const double Hard = 10_000;
+    private const double Cell = 6;
+    /// <summary>Gaps (page mm) between object and label for each ring; rings from the third on carry a leader (later for labels that should rather stay close without one, such as pin names).</summary>
+    private static readonly double[] Rings = [0.25, 0.9, 2.2, 3.8, 6.0, 9.0, 13.0];
+    public const int FirstLeaderRing = 2;
+    /// <summary>Air kept round a placed label so that neighbouring labels do not read as one.</summary>
+    private const double Air = 0.3;
 
-    public void Block(Box box) => _taken.Add(box);
+    private readonly List<(Zone Zone, string? Owner, bool Hard)> _obstacles = [];
+    private readonly Dictionary<(int, int), List<int>> _obstacleGrid = [];
+    private readonly Dictionary<LabelTarget, List<(string Id, Zone Zone)>> _targets = [];
 
-    /// <summary>Chooses among candidate boxes (first preferred) and blocks the chosen one.</summary>
+    public int Unresolved { get; private set; }
+
+    /// <summary>Something labels must not cover; an owner's own labels may (a part's name on its own body). Soft obstacles are only avoided where possible (lead lines).</summary>
+    public void Obstacle(Zone zone, string? owner = null, bool hard = true)
+    {
+        var index = _obstacles.Count;
+        _obstacles.Add((zone, owner, hard));
+        foreach (var key in Cells(zone.Bounds))
+        {
+            if (!_obstacleGrid.TryGetValue(key, out var list)) _obstacleGrid[key] = list = [];
+            list.Add(index);
+        }
+    }
+
+    public void Block(Box box) => Obstacle(new BoxZone(box));
+
+    /// <summary>An object labels of its kind must stay nearer to than to any other.</summary>
+    public void Target(LabelTarget kind, string id, Zone zone)
+    {
+        if (!_targets.TryGetValue(kind, out var list)) _targets[kind] = list = [];
+        list.Add((id, zone));
+    }
+
+    /// <summary>One label to place: size, what it belongs to, and preferred boxes tried before the rings (e.g. inside a body).</summary>
+    /// <remarks>AlsoOwns names more owners whose obstacles the label may cover: a pin name may sit on the pad its own lead lands on, a pad's labels inside the outline of a part standing over that pad.</remarks>
+    public sealed record Request(string Owner, LabelTarget Kind, string TargetId, Zone Object, double Width, double Height, IReadOnlyList<Box>? Preferred = null, int LeaderFrom = FirstLeaderRing, IReadOnlyCollection<string>? AlsoOwns = null);
+
+    /// <summary>A placed label: its box, and the leader from the box to its object when it sits in a far ring.</summary>
+    public sealed record Placed(Box Box, Point? LeaderFrom, Point? LeaderTo, bool Resolved);
+
+    public Placed Place(Request request)
+    {
+        Placed? best = null;
+        var bestCost = double.MaxValue;
+        foreach (var (box, ring) in Candidates(request))
+        {
+            var leader = ring >= request.LeaderFrom;
+            var cost = Cost(request, box, leader) + (ring < 0 ? 0 : ring * 3 + 1);
+            if (cost >= bestCost) continue;
+            bestCost = cost;
+            Point? to = leader ? request.Object.Nearest(box.Center) : null;
+            best = new Placed(box, leader ? box.Nearest(to!.Value) : null, to, cost < Hard);
+            if (cost < 1) break;
+        }
+        var placed = best!;
+        if (!placed.Resolved) Unresolved++;
+        Obstacle(new BoxZone(placed.Box.Inflate(Air)));
+        if (placed.LeaderFrom is { } a && placed.LeaderTo is { } b) Obstacle(new LineZone(a, b, 0.2), request.Owner, hard: false);
+        return placed;
+    }
+
+    /// <summary>Old-style use: the first clear box among fixed candidates (template strip ids), else the one that covers least.</summary>
     public Box Place(IReadOnlyList<Box> candidates)
     {
         var best = candidates[0];
         var bestCost = double.MaxValue;
         foreach (var candidate in candidates)
         {
-            var cost = Cost(candidate);
-            if (cost < bestCost - 1e-9)
-            {
-                best = candidate;
-                bestCost = cost;
-            }
+            var cost = Cost(null, candidate, leader: false);
+            if (cost < bestCost - 1e-9) (best, bestCost) = (candidate, cost);
             if (cost == 0) break;
         }
-        // keep a little air round each label so neighbouring labels do not read as one
-        _taken.Add(best.Inflate(1.0));
+        Obstacle(new BoxZone(best.Inflate(Air)));
         return best;
     }
 
-    private double Cost(Box candidate)
+    private IEnumerable<(Box Box, int Ring)> Candidates(Request r)
     {
-        var cost = bounds.Contains(candidate) ? 0.0 : 1000.0;
-        foreach (var other in _taken) cost += other.OverlapArea(candidate);
+        foreach (var box in r.Preferred ?? []) yield return (box, -1);
+        for (var ring = 0; ring < Rings.Length; ring++)
+            foreach (var box in Around(r.Object.Bounds, r.Width, r.Height, Rings[ring], twelve: true)) yield return (box, ring);
+    }
+
+    private double Cost(Request? r, Box box, bool leader)
+    {
+        var cost = bounds.Contains(box) ? 0.0 : Hard * 10;
+        var seen = new HashSet<int>();
+        foreach (var key in Cells(box))
+        {
+            if (!_obstacleGrid.TryGetValue(key, out var list)) continue;
+            foreach (var i in list)
+            {
+                if (!seen.Add(i)) continue;
+                var (zone, owner, hard) = _obstacles[i];
+                if (r is not null && owner is not null && (owner == r.Owner || (r.AlsoOwns?.Contains(owner) ?? false))) continue;
+                if (!zone.Bounds.Overlaps(box) || !zone.Overlaps(box)) continue;
+                cost += hard ? Hard : 2 + zone.Bounds.OverlapArea(box);
+            }
+        }
+        if (r is not null && !leader && NearerToAnother(r, box)) cost += Hard;
         return cost;
     }
 
-    /// <summary>Eight boxes of a label's size around an item's box, each a gap away: right, above, below, left, then the corners.</summary>
-    public static IReadOnlyList<Box> Around(Box item, double width, double height, double gap)
+    /// <summary>True when the box is nearer some other object of the request's kind than its own.</summary>
+    private bool NearerToAnother(Request r, Box box)
+    {
+        if (!_targets.TryGetValue(r.Kind, out var list)) return false;
+        var own = r.Object.DistanceTo(box);
+        foreach (var (id, zone) in list)
+            if (id != r.TargetId && zone.Bounds.DistanceTo(box) < own && zone.DistanceTo(box) < own - 1e-6) return true;
+        return false;
+    }
+
+    private static IEnumerable<(int, int)> Cells(Box box)
+    {
+        for (var x = (int)Math.Floor(box.Left / Cell); x <= (int)Math.Floor(box.Right / Cell); x++)
+            for (var y = (int)Math.Floor(box.Top / Cell); y <= (int)Math.Floor(box.Bottom / Cell); y++)
+                yield return (x, y);
+    }
+
+    /// <summary>
+    /// Boxes of a label's size around an item's box, each a gap away: right, above, below, left, the four corners, and
+    /// (with twelve) the four sides again shifted half a label along, so long labels can slide past a neighbour.
+    /// </summary>
+    public static IReadOnlyList<Box> Around(Box item, double width, double height, double gap, bool twelve = false)
     {
         var c = item.Center;
         var right = item.Right + gap;
         var left = item.Left - gap - width;
         var above = item.Top - gap - height;
         var below = item.Bottom + gap;
-        return
-        [
+        var list = new List<Box>
+        {
             Box.Of(right, c.Y - height / 2, width, height),
             Box.Of(c.X - width / 2, above, width, height),
             Box.Of(c.X - width / 2, below, width, height),
@@ -54,6 +165,14 @@ internal sealed class LabelPlacer(Box bounds)
             Box.Of(right, below, width, height),
             Box.Of(left, above, width, height),
             Box.Of(left, below, width, height),
-        ];
+        };
+        if (twelve)
+        {
+            list.Add(Box.Of(c.X, above, width, height));
+            list.Add(Box.Of(c.X - width, below, width, height));
+            list.Add(Box.Of(c.X - width, above, width, height));
+            list.Add(Box.Of(c.X, below, width, height));
+        }
+        return list;
     }
 }

@@ -22,7 +22,7 @@ public sealed record SheetBook(string Title, DateOnly Date, ValueList<Sheet> She
         if (Problem(project) is { } problem) throw new ArgumentException($"Project {project.Name}: {problem}", nameof(project));
         var drafts = new List<SheetDraft>();
         drafts.AddRange(TemplateSheet.Build(project, options));
-        drafts.Add(AssemblySheet.Build(project, options));
+        drafts.AddRange(AssemblySheet.Build(project, options));
         drafts.AddRange(ReportSheets.Build(project, options, check, tables));
 
         var sheets = new List<Sheet>();
