@@ -25,8 +25,12 @@ public sealed class EditorRun : IAsyncDisposable
         Directory.CreateDirectory(folder);
         var project = Path.Combine(folder, example + ".padplan.json");
         File.Copy(Path.Combine(AppContext.BaseDirectory, "examples", example, example + ".padplan.json"), project);
-        return new EditorRun(folder, project, await EditorServer.StartAsync(new EditorOptions(project)));
+        return await StartOnAsync(folder, project);
     }
+
+    /// <summary>A server on a project already in place (e.g. after the test changed the file).</summary>
+    public static async Task<EditorRun> StartOnAsync(string folder, string project) =>
+        new(folder, project, await EditorServer.StartAsync(new EditorOptions(project, Effort: PadPlan.Planning.Effort.Quick)));
 
     /// <summary>The plan as the server holds it, read with the token like the page does.</summary>
     public async Task<JsonElement> PlanAsync()

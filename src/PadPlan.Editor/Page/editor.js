@@ -251,7 +251,7 @@ function draw() {
     const t = el("text", { class: "ref", x: c[0], y: c[1] }, group);
     t.textContent = p.ref;
     for (const l of p.leads) {
-      const end = el("circle", { class: "end" + (l.pad === null ? " plane-end" : ""), cx: l.landing[0], cy: l.landing[1], r: Math.max(0.45, l.diameter), "data-lead": `${p.ref}.${l.pin}`, "data-net": l.net }, group);
+      const end = el("circle", { class: "end" + (l.pad === null ? " plane-end" : ""), cx: l.landing[0], cy: l.landing[1], r: Math.max(0.4, l.diameter * 0.6), "data-lead": `${p.ref}.${l.pin}`, "data-net": l.net }, group);
       end.addEventListener("pointerdown", e => startDrag(e, { kind: "end", id: p.ref, pin: l.pin, x: l.landing[0], y: l.landing[1] }));
     }
   }

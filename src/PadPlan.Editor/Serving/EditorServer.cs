@@ -28,10 +28,12 @@ public sealed class EditorServer : IAsyncDisposable
     private readonly Lock _placeGate = new();
     private PlaceJob? _place;
     private string _placeNote = "";
+    private readonly Effort _effort;
     private int _port;
 
-    private EditorServer(WebApplication app, EditSession session, string token)
+    private EditorServer(WebApplication app, EditSession session, string token, Effort effort)
     {
+        _effort = effort;
         _app = app;
         _session = session;
         Token = token;
@@ -60,7 +62,7 @@ public sealed class EditorServer : IAsyncDisposable
             k.AddServerHeader = false;
         });
         var app = builder.Build();
-        var server = new EditorServer(app, session, token);
+        var server = new EditorServer(app, session, token, options.Effort);
         var guard = new RequestGuard(token, () => server._port);
         app.Use(guard.InvokeAsync);
         server.Map(app);
@@ -145,7 +147,7 @@ public sealed class EditorServer : IAsyncDisposable
         lock (_placeGate)
         {
             if (_place?.Running == true) return Refused("the placer is already working.");
-            var job = PlaceJob.Start(_session.Current, PlacerSettings.Default);
+            var job = PlaceJob.Start(_session.Current, PlacerSettings.Default with { Effort = _effort });
             _place = job;
             _placeNote = "placing ...";
             _ = job.Result.ContinueWith(t => Finish(job, t), TaskScheduler.Default);
