@@ -46,6 +46,8 @@ public sealed class EditorBrowserTests(BrowserFixture browser) : IClassFixture<B
         var text = await bench.Page.TextContentAsync("#findings li[data-rule='lead-wrong-pad']");
         Assert.Contains("J1.1", text);
         Assert.Contains("shorts IN to BASE", text);
+        await bench.Page.ClickAsync("#findings li[data-rule='lead-wrong-pad']");
+        Assert.Equal(1, await bench.Page.Locator("circle.end.lit[data-lead='J1.1']").CountAsync()); // the finding lights its lead
         await Shoot(bench, "editor-short.png");
 
         await bench.ClickAndWaitAsync("undo");
@@ -81,10 +83,7 @@ public sealed class EditorBrowserTests(BrowserFixture browser) : IClassFixture<B
     {
         await using var run = await EditorRun.StartAsync();
         var bench = await BenchPage.OpenAsync(browser.Browser, run);
-        var plan = await run.PlanAsync();
-        var r3 = BenchPage.Part(plan, "R3");
-        var grab = BodyCentre(r3);
-        await bench.DragAsync(grab, (grab.X - 6, grab.Y)); // R3's leads leave their pad and plane landing: the check objects
+        await DragPartAsync(bench, run, "R3", -6, 0); // R3's leads leave their pad and plane landing: the check objects
         Assert.True(run.Server.Session.Unsaved);
         Assert.True(File.Exists(Path.Combine(run.Folder, "tiny-buffer.unsaved.padplan.json")));
         var pageRules = await bench.FindingRulesAsync();
@@ -109,8 +108,7 @@ public sealed class EditorBrowserTests(BrowserFixture browser) : IClassFixture<B
     {
         await using var run = await EditorRun.StartAsync();
         var bench = await BenchPage.OpenAsync(browser.Browser, run);
-        var grab = BodyCentre(BenchPage.Part(await run.PlanAsync(), "C2"));
-        await bench.DragAsync(grab, (grab.X, grab.Y + 3));
+        await DragPartAsync(bench, run, "C2", 0, 3);
         await bench.Page.Keyboard.PressAsync("+");
         var before = await Picture(bench);
         var revision = await bench.RevisionAsync();
@@ -125,8 +123,7 @@ public sealed class EditorBrowserTests(BrowserFixture browser) : IClassFixture<B
     {
         await using var run = await EditorRun.StartAsync();
         var bench = await BenchPage.OpenAsync(browser.Browser, run);
-        var grab = BodyCentre(BenchPage.Part(await run.PlanAsync(), "C2"));
-        await bench.DragAsync(grab, (grab.X, grab.Y + 2));
+        await DragPartAsync(bench, run, "C2", 0, 2);
         var changed = File.ReadAllText(run.ProjectPath).Replace("\"tiny-buffer\"", "\"tiny-buffer, changed elsewhere\"", StringComparison.Ordinal);
         File.WriteAllText(run.ProjectPath, changed);
 
@@ -164,6 +161,12 @@ public sealed class EditorBrowserTests(BrowserFixture browser) : IClassFixture<B
     {
         await run.Server.StopAsync();
         return await EditorRun.StartOnAsync(run.Folder, run.ProjectPath);
+    }
+
+    private static async Task DragPartAsync(BenchPage bench, EditorRun run, string reference, double dx, double dy)
+    {
+        var grab = BodyCentre(BenchPage.Part(await run.PlanAsync(), reference));
+        await bench.DragAsync(grab, (grab.X + dx, grab.Y + dy));
     }
 
     private static (double X, double Y) BodyCentre(JsonElement part)
