@@ -27,6 +27,8 @@ public sealed class EditorServer : IAsyncDisposable
     private readonly TaskCompletionSource _finished = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly Lock _placeGate = new();
     private PlaceJob? _place;
+    // True from the start of "place the rest" until its result is in the session, so no edit slips in between.
+    private bool _placing;
     private string _placeNote = "";
     private readonly Effort _effort;
     private int _port;
@@ -120,7 +122,7 @@ public sealed class EditorServer : IAsyncDisposable
 
     private bool Placing
     {
-        get { lock (_placeGate) return _place?.Running == true; }
+        get { lock (_placeGate) return _placing; }
     }
 
     private IResult View()
@@ -146,27 +148,41 @@ public sealed class EditorServer : IAsyncDisposable
     {
         lock (_placeGate)
         {
-            if (_place?.Running == true) return Refused("the placer is already working.");
+            if (_placing) return Refused("the placer is already working.");
             var job = PlaceJob.Start(_session.Current, PlacerSettings.Default with { Effort = _effort });
             _place = job;
+            _placing = true;
             _placeNote = "placing ...";
-            _ = job.Result.ContinueWith(t => Finish(job, t), TaskScheduler.Default);
+            _ = job.Result.ContinueWith(Finish, TaskScheduler.Default);
         }
         return PlaceStatus();
     }
 
-    private void Finish(PlaceJob job, Task<PlacementResult?> task)
+    private void Finish(Task<PlacementResult?> task)
     {
         string note;
-        if (task.IsFaulted) note = "the placer stopped with a fault: " + task.Exception!.GetBaseException().Message;
-        else if (task.Result is null) note = "placing stopped; the plan is as it was.";
-        else if (!task.Result.Succeeded) note = $"the placer found no plan: {task.Result.Failure!.Message} {task.Result.Failure.Hint}";
-        else
+        try
         {
-            _session.Replace(task.Result.Project!);
-            note = "placed the rest; held items stayed where they were.";
+            note = Outcome(task);
         }
-        lock (_placeGate) if (ReferenceEquals(_place, job)) _placeNote = note;
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            note = "placed, but the recovery copy could not be written: " + e.Message;
+        }
+        lock (_placeGate)
+        {
+            _placeNote = note;
+            _placing = false;
+        }
+    }
+
+    private string Outcome(Task<PlacementResult?> task)
+    {
+        if (task.IsFaulted) return "the placer stopped with a fault: " + task.Exception!.GetBaseException().Message;
+        if (task.Result is null) return "placing stopped; the plan is as it was.";
+        if (!task.Result.Succeeded) return $"the placer found no plan: {task.Result.Failure!.Message} {task.Result.Failure.Hint}";
+        _session.Replace(task.Result.Project!);
+        return "placed the rest; held items stayed where they were.";
     }
 
     private IResult PlaceStatus()
@@ -176,7 +192,7 @@ public sealed class EditorServer : IAsyncDisposable
             var last = _place?.Last ?? default;
             return Results.Json(new
             {
-                running = _place?.Running == true,
+                running = _placing,
                 run = last.Run,
                 runs = _place?.Runs ?? 0,
                 stage = last.Stage ?? "",

@@ -9,11 +9,15 @@ namespace PadPlan.Editor.Sessions;
 /// </summary>
 public sealed class PlaceJob
 {
-    private readonly CancellationTokenSource _stop = new();
+    private readonly CancellationTokenSource _stop;
     private readonly Lock _gate = new();
     private PlacerProgress _last;
 
-    private PlaceJob(int runs) => Runs = runs;
+    private PlaceJob(int runs, CancellationTokenSource stop)
+    {
+        Runs = runs;
+        _stop = stop;
+    }
 
     public int Runs { get; }
     public Task<PlacementResult?> Result { get; private set; } = Task.FromResult<PlacementResult?>(null);
@@ -25,9 +29,12 @@ public sealed class PlaceJob
         get { lock (_gate) return _last; }
     }
 
-    public static PlaceJob Start(Project project, PlacerSettings settings)
+    public static PlaceJob Start(Project project, PlacerSettings settings) => Start(project, settings, new CancellationTokenSource());
+
+    /// <summary>Starts with a stop signal the caller owns (a test can hand in one already given).</summary>
+    internal static PlaceJob Start(Project project, PlacerSettings settings, CancellationTokenSource stop)
     {
-        var job = new PlaceJob(settings.RunsFor(project.Parts.Count));
+        var job = new PlaceJob(settings.RunsFor(project.Parts.Count), stop);
         var progress = new StopOrReport(job);
         job.Result = Task.Run<PlacementResult?>(() =>
         {
