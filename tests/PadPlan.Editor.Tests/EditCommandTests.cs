@@ -8,23 +8,17 @@ namespace PadPlan.Editor.Tests;
 /// <summary>`padplan edit` on the command line: exit codes for bad input, and a whole run from start to "finish".</summary>
 public sealed partial class EditCommandTests : IDisposable
 {
-    private readonly string _folder = Path.Combine(Path.GetTempPath(), "padplan-editcmd-" + Guid.NewGuid().ToString("N"));
-    private readonly string _path;
+    private readonly ExampleCopy _copy = new();
+    private string Folder => _copy.Folder;
+    private string ProjectPath => _copy.ProjectPath;
 
-    public EditCommandTests()
-    {
-        Directory.CreateDirectory(_folder);
-        _path = Path.Combine(_folder, "tiny-buffer.padplan.json");
-        File.Copy(Path.Combine(AppContext.BaseDirectory, "examples", "tiny-buffer", "tiny-buffer.padplan.json"), _path);
-    }
-
-    public void Dispose() => Directory.Delete(_folder, recursive: true);
+    public void Dispose() => _copy.Dispose();
 
     [Fact]
     public void A_missing_project_exits_2_and_names_the_file()
     {
         var err = new StringWriter();
-        Assert.Equal(ExitCodes.InputError, PadPlanCli.Run(["edit", Path.Combine(_folder, "nope.padplan.json"), "--no-browser"], TextWriter.Null, err));
+        Assert.Equal(ExitCodes.InputError, PadPlanCli.Run(["edit", Path.Combine(Folder, "nope.padplan.json"), "--no-browser"], TextWriter.Null, err));
         Assert.Contains("nope.padplan.json", err.ToString());
     }
 
@@ -32,17 +26,17 @@ public sealed partial class EditCommandTests : IDisposable
     public void A_port_out_of_range_exits_2()
     {
         var err = new StringWriter();
-        Assert.Equal(ExitCodes.InputError, PadPlanCli.Run(["edit", _path, "--no-browser", "--port", "70000"], TextWriter.Null, err));
+        Assert.Equal(ExitCodes.InputError, PadPlanCli.Run(["edit", ProjectPath, "--no-browser", "--port", "70000"], TextWriter.Null, err));
         Assert.Contains("--port", err.ToString());
     }
 
     [Fact]
     public void A_recovery_copy_from_an_earlier_session_stops_a_new_session_from_overwriting_it()
     {
-        var recovery = Path.Combine(_folder, "tiny-buffer.unsaved.padplan.json");
+        var recovery = Path.Combine(Folder, "tiny-buffer.unsaved.padplan.json");
         File.WriteAllText(recovery, "earlier edits");
         var err = new StringWriter();
-        Assert.Equal(ExitCodes.InputError, PadPlanCli.Run(["edit", _path, "--no-browser"], TextWriter.Null, err));
+        Assert.Equal(ExitCodes.InputError, PadPlanCli.Run(["edit", ProjectPath, "--no-browser"], TextWriter.Null, err));
         Assert.Contains("tiny-buffer.unsaved.padplan.json", err.ToString());
         Assert.Equal("earlier edits", File.ReadAllText(recovery));
     }
@@ -56,7 +50,7 @@ public sealed partial class EditCommandTests : IDisposable
         {
             lock (output) return written.ToString(); // the synchronized writer locks on itself
         }
-        var run = Task.Run(() => PadPlanCli.Run(["edit", _path, "--no-browser"], output, TextWriter.Null));
+        var run = Task.Run(() => PadPlanCli.Run(["edit", ProjectPath, "--no-browser"], output, TextWriter.Null));
         Match address = Match.Empty;
         for (var i = 0; i < 600 && !(address = Address().Match(Printed())).Success; i++) await Task.Delay(100);
         Assert.True(address.Success, "edit printed no address: " + Printed());

@@ -9,24 +9,18 @@ namespace PadPlan.Editor.Tests;
 /// <summary>Edits, undo and redo, saving and the recovery copy, without a browser.</summary>
 public sealed class EditSessionTests : IDisposable
 {
-    private readonly string _folder = Path.Combine(Path.GetTempPath(), "padplan-session-" + Guid.NewGuid().ToString("N"));
-    private readonly string _path;
+    private readonly ExampleCopy _copy = new();
+    private string Folder => _copy.Folder;
+    private string ProjectPath => _copy.ProjectPath;
 
-    public EditSessionTests()
-    {
-        Directory.CreateDirectory(_folder);
-        _path = Path.Combine(_folder, "tiny-buffer.padplan.json");
-        File.Copy(Path.Combine(AppContext.BaseDirectory, "examples", "tiny-buffer", "tiny-buffer.padplan.json"), _path);
-    }
+    public void Dispose() => _copy.Dispose();
 
-    public void Dispose() => Directory.Delete(_folder, recursive: true);
-
-    private string Recovery => Path.Combine(_folder, "tiny-buffer.unsaved.padplan.json");
+    private string Recovery => Path.Combine(Folder, "tiny-buffer.unsaved.padplan.json");
 
     [Fact]
     public void Four_quarter_turns_give_back_the_same_plan()
     {
-        var session = EditSession.Open(_path);
+        var session = EditSession.Open(ProjectPath);
         var start = session.Current;
         for (var i = 0; i < 4; i++) session.Apply(new EditRequest { Kind = "turn-part", Ref = "C2" });
         // A quarter turn has order four: four of them are the identity (rotation group of the square).
@@ -36,7 +30,7 @@ public sealed class EditSessionTests : IDisposable
     [Fact]
     public void Moving_a_part_carries_its_lead_ends_by_the_same_distance()
     {
-        var session = EditSession.Open(_path);
+        var session = EditSession.Open(ProjectPath);
         var before = session.Current.Layout!.Placements.First(p => p.Ref == "R3");
         session.Apply(new EditRequest { Kind = "move-part", Ref = "R3", X = before.Position.X + 1.5, Y = before.Position.Y - 0.5 });
         var after = session.Current.Layout!.Placements.First(p => p.Ref == "R3");
@@ -50,7 +44,7 @@ public sealed class EditSessionTests : IDisposable
     [Fact]
     public void Moving_a_pad_keeps_the_leads_on_it_and_the_check_clean()
     {
-        var session = EditSession.Open(_path);
+        var session = EditSession.Open(ProjectPath);
         var pad = (RoundPad)session.Current.Layout!.Pads.First(p => p.Id == "P5");
         session.Apply(new EditRequest { Kind = "move-pad", Pad = "P5", X = pad.Center.X + 0.5, Y = pad.Center.Y + 0.5 });
         var landed = session.Current.Layout!.Placements.SelectMany(p => p.Leads).Where(l => l.Pad == "P5").ToList();
@@ -62,7 +56,7 @@ public sealed class EditSessionTests : IDisposable
     [Fact]
     public void Take_back_and_do_again_walk_the_whole_history()
     {
-        var session = EditSession.Open(_path);
+        var session = EditSession.Open(ProjectPath);
         var plans = new List<Project> { session.Current };
         session.Apply(new EditRequest { Kind = "turn-part", Ref = "C1" });
         plans.Add(session.Current);
@@ -91,11 +85,11 @@ public sealed class EditSessionTests : IDisposable
     [Fact]
     public void Holding_sets_the_locked_flag_that_the_file_keeps()
     {
-        var session = EditSession.Open(_path);
+        var session = EditSession.Open(ProjectPath);
         session.Apply(new EditRequest { Kind = "hold", Ref = "Q1", Held = true });
         session.Apply(new EditRequest { Kind = "hold", Pad = "P2", Held = true });
         Assert.True(session.Save().Saved);
-        var read = ProjectFile.Read(_path);
+        var read = ProjectFile.Read(ProjectPath);
         Assert.True(read.FindPart("Q1")!.Locked);
         Assert.True(read.Layout!.Pads.First(p => p.Id == "P2").Locked);
         Assert.False(read.FindPart("R1")!.Locked);
@@ -104,7 +98,7 @@ public sealed class EditSessionTests : IDisposable
     [Fact]
     public void Removing_a_pad_removes_its_wire_links_and_leaves_its_leads_on_the_plane()
     {
-        var session = EditSession.Open(_path);
+        var session = EditSession.Open(ProjectPath);
         session.Apply(new EditRequest { Kind = "add-pad", X = 44, Y = 30, Net = "OUT" });
         var added = session.Current.Layout!.Pads[^1].Id;
         session.Apply(new EditRequest { Kind = "add-link", From = "P5", To = added });
@@ -119,7 +113,7 @@ public sealed class EditSessionTests : IDisposable
     [Fact]
     public void A_lead_dragged_onto_the_plane_lands_there()
     {
-        var session = EditSession.Open(_path);
+        var session = EditSession.Open(ProjectPath);
         session.Apply(new EditRequest { Kind = "land-lead", Ref = "R3", Pin = "1", X = 36, Y = 24, Net = "plane" });
         var lead = session.Current.Layout!.Placements.First(p => p.Ref == "R3").Leads.First(l => l.Pin == "1");
         Assert.True(lead.OnPlane);
@@ -136,7 +130,7 @@ public sealed class EditSessionTests : IDisposable
     [InlineData("""{"kind":"land-lead","ref":"R1","pin":"9","x":1,"y":1}""", "no lead 9")]
     public void A_bad_edit_is_refused_with_a_reason_and_changes_nothing(string json, string reason)
     {
-        var session = EditSession.Open(_path);
+        var session = EditSession.Open(ProjectPath);
         var edit = System.Text.Json.JsonSerializer.Deserialize<EditRequest>(json, new System.Text.Json.JsonSerializerOptions(System.Text.Json.JsonSerializerDefaults.Web))!;
         var refused = Assert.Throws<EditRefused>(() => session.Apply(edit));
         Assert.Contains(reason, refused.Message, StringComparison.Ordinal);
@@ -147,17 +141,17 @@ public sealed class EditSessionTests : IDisposable
     [Fact]
     public void Save_refuses_when_the_file_changed_on_disk_and_keep_as_copy_writes_a_numbered_file_beside_it()
     {
-        var session = EditSession.Open(_path);
+        var session = EditSession.Open(ProjectPath);
         session.Apply(new EditRequest { Kind = "turn-part", Ref = "C1" });
-        File.AppendAllText(_path, " ");
-        var changed = File.ReadAllBytes(_path);
+        File.AppendAllText(ProjectPath, " ");
+        var changed = File.ReadAllBytes(ProjectPath);
         var outcome = session.Save();
         Assert.False(outcome.Saved);
-        Assert.Equal(changed, File.ReadAllBytes(_path));
+        Assert.Equal(changed, File.ReadAllBytes(ProjectPath));
         var copy = session.SaveCopy();
         Assert.True(copy.Saved);
         Assert.Equal("tiny-buffer-2.padplan.json", copy.File);
-        Assert.Equal(session.Current, ProjectFile.Read(Path.Combine(_folder, "tiny-buffer-2.padplan.json")));
+        Assert.Equal(session.Current, ProjectFile.Read(Path.Combine(Folder, "tiny-buffer-2.padplan.json")));
         Assert.False(File.Exists(Recovery));
     }
 }

@@ -22,7 +22,15 @@ public sealed class EditorBrowserTests(BrowserFixture browser) : IClassFixture<B
         Assert.Equal(project.Layout.Placements.Sum(p => p.Leads.Count), await bench.Page.Locator("circle.end").CountAsync());
         Assert.Equal("tiny-buffer.padplan.json", await bench.Page.TextContentAsync("#file"));
         Assert.Empty(await bench.FindingRulesAsync());
+        Assert.Equal(0, await bench.Page.Locator("line.thread").CountAsync()); // nothing open on a clean plan
         await Shoot(bench, "editor-bench.png");
+
+        // Hovering a pad lights its whole net: every pad, lead and lead end of BASE, and nothing of another net.
+        await bench.Page.HoverAsync(".island[data-id='P2']", new() { Force = true });
+        var lit = await bench.Page.Locator(".lit").EvaluateAllAsync<string[]>("items => items.map(i => i.dataset.net)");
+        var baseItems = await bench.Page.Locator("[data-net='BASE']").CountAsync();
+        Assert.Equal(baseItems, lit.Length);
+        Assert.All(lit, net => Assert.Equal("BASE", net));
     }
 
     [ChromiumFact]
@@ -44,6 +52,9 @@ public sealed class EditorBrowserTests(BrowserFixture browser) : IClassFixture<B
         var rules = await bench.FindingRulesAsync();
         Assert.Contains("lead-wrong-pad", rules);
         var text = await bench.Page.TextContentAsync("#findings li[data-rule='lead-wrong-pad']");
+        // IN is now in two pieces (J1 on P2, C1 on P1): one open thread joins them.
+        Assert.Contains("open", rules);
+        Assert.Equal(1, await bench.Page.Locator("line.thread[data-net='IN']").CountAsync());
         Assert.Contains("J1.1", text);
         Assert.Contains("shorts IN to BASE", text);
         await bench.Page.ClickAsync("#findings li[data-rule='lead-wrong-pad']");

@@ -19,13 +19,10 @@ public sealed class EditorRun : IAsyncDisposable
     public EditorServer Server { get; }
     public string Origin => $"http://127.0.0.1:{Server.Port}";
 
-    public static async Task<EditorRun> StartAsync(string example = "tiny-buffer")
+    public static async Task<EditorRun> StartAsync()
     {
-        var folder = Path.Combine(Path.GetTempPath(), "padplan-edit-" + Guid.NewGuid().ToString("N"));
-        Directory.CreateDirectory(folder);
-        var project = Path.Combine(folder, example + ".padplan.json");
-        File.Copy(Path.Combine(AppContext.BaseDirectory, "examples", example, example + ".padplan.json"), project);
-        return await StartOnAsync(folder, project);
+        var copy = new ExampleCopy();
+        return await StartOnAsync(copy.Folder, copy.ProjectPath);
     }
 
     /// <summary>A server on a project already in place (e.g. after the test changed the file).</summary>
@@ -58,7 +55,7 @@ public sealed class EditorRun : IAsyncDisposable
         }
         catch (IOException)
         {
-            // a leftover temp folder is harmless
+            // a leftover temporary folder is harmless
         }
     }
 }
