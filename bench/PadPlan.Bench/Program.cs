@@ -10,6 +10,7 @@ using PadPlan.Rules;
 // Placement benchmark: synthetic circuits of several sizes plus every example, placed at one effort, each beside the row baseline.
 // Usage: dotnet run -c Release --project bench/PadPlan.Bench -- [--sizes 20,50,100,200,500] [--effort normal] [--seed 1] [--write docs/benchmarks.md]
 //        ... -- --profile N (stage timings of one run), --preview PROJECT OUT.png (rough picture of a placed project),
+//        ... -- --edit-recheck N (the editor's work after one change on an N-part plan: edit, check, view)
 //        ... -- [--seed S] --synthetic N OUT.padplan.json (write an unplaced synthetic circuit for `padplan place`)
 var sizes = new[] { 20, 50, 100, 200, 500 };
 var effort = Effort.Normal;
@@ -25,6 +26,7 @@ for (var i = 0; i < args.Length; i++)
         case "--write": write = args[++i]; break;
         case "--preview": Preview.Write(args[++i], args[++i]); return 0;
         case "--synthetic": ProjectFile.Write(SyntheticCircuit.Make(int.Parse(args[++i], CultureInfo.InvariantCulture), seed), args[++i]); return 0;
+        case "--edit-recheck": EditRecheck.Run(int.Parse(args[++i], CultureInfo.InvariantCulture), 50); return 0;
         case "--profile": Profile.Run(int.Parse(args[++i], CultureInfo.InvariantCulture), new PlacerSettings(seed, effort)); return 0;
         default: Console.Error.WriteLine($"unknown argument {args[i]}"); return 2;
     }

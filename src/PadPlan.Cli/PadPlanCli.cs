@@ -21,6 +21,7 @@ public static class PadPlanCli
             TestplanCommand.Create(context),
             FootprintsCommand.Create(context),
             DemoCommand.Create(context),
+            EditCommand.Create(context),
         })
             root.Subcommands.Add(command);
         return root;
