@@ -17,7 +17,7 @@ public class PlaceProgressTests
 
     private static string Padplan => Path.Combine(AppContext.BaseDirectory, "padplan.dll");
 
-    [ProgramOnPathFact("script", "util-linux")]
+    [ProgramOnPathFact("script", "bsdutils, from util-linux")]
     public void On_a_terminal_one_line_redraws_itself_with_run_percentage_time_left_and_best_cost()
     {
         var project = UnplacedTinyBuffer();

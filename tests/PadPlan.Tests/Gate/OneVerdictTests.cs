@@ -75,6 +75,9 @@ public class OneVerdictTests
         Assert.True(anodeStrip.ScoreWidth >= 1.25, $"score {anodeStrip.ScoreWidth} mm beside a 250 V anode");
         // The other row carries no high voltage next to another net, so it keeps the toolkit's 0.6 mm score.
         Assert.Contains(strips, s => s.ScoreWidth == 0.6);
+        // The builder is told to cut the wider score.
+        var cuts = CliRunner.Run("cutlist", project);
+        Assert.Contains($"each {anodeStrip.ScoreWidth.ToString(System.Globalization.CultureInfo.InvariantCulture)} mm wide", cuts.Out);
     }
 
     public static TheoryData<string, bool> HighVoltageCases() => new()

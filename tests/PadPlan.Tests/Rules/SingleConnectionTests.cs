@@ -64,6 +64,19 @@ public class SingleConnectionTests
     }
 
     [Fact]
+    public void Marked_open_ended_in_a_parts_map_it_is_only_a_note()
+    {
+        var dir = TestPaths.NewTempDir();
+        var map = Path.Combine(dir, "parts.json");
+        File.WriteAllText(map, """{ "format": "padplan-parts/1", "nets": { "ant": { "openEnded": true }, "tp": { "openEnded": true } } }""");
+        var library = FootprintLibrary.Load([]);
+        var netlist = NetlistImporter.Read(System.Text.Encoding.UTF8.GetBytes(Spice + "\n.end\n"), "t.cir");
+        var project = ProjectBuilder.Build(netlist, new ImportOptions(library, PartsMap.Read(map, library))).Project;
+        Assert.All(Findings(project), f => Assert.Equal(Severity.Info, f.Severity));
+        Assert.Equal(2, Findings(project).Count);
+    }
+
+    [Fact]
     public void The_marker_survives_the_project_file()
     {
         var project = Imported(Ppn + "\nnet TP open-end\n", "t.ppn");

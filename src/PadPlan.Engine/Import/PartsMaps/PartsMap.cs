@@ -72,9 +72,9 @@ public sealed class PartsMap
             var net = reader.Net(new NetDto
             {
                 Name = kv.Key, Ground = kv.Value.Ground, Class = kv.Value.Class, Voltage = kv.Value.Voltage, VoltageEstimated = kv.Value.VoltageEstimated,
-                Current = kv.Value.Current, MaxLead = kv.Value.MaxLead, Role = kv.Value.Role,
+                Current = kv.Value.Current, MaxLead = kv.Value.MaxLead, Role = kv.Value.Role, OpenEnded = kv.Value.OpenEnded,
             }, path);
-            var facts = new NetFacts(net.Name, kv.Value.Ground, kv.Value.Class is null ? null : net.Class, net.Voltage, net.VoltageEstimated, net.Current, net.MaxLead, kv.Value.Role is null ? null : net.Role);
+            var facts = new NetFacts(net.Name, kv.Value.Ground, kv.Value.Class is null ? null : net.Class, net.Voltage, net.VoltageEstimated, net.Current, net.MaxLead, kv.Value.Role is null ? null : net.Role, OpenEnded: net.OpenEnded);
             return (facts, JsonLineLocator.LineOf(bytes, path));
         }).ToList();
         return new PartsMap(file, byRef, byValue, nets);

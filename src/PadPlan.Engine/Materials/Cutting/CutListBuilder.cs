@@ -29,7 +29,7 @@ public static class CutListBuilder
     {
         RectPad r => new CutPiece(r.Id, CutPieceKind.Rect, r.Width, r.Height, r.StockThickness, ValueList.Of(r.Id)),
         StripPad s => new CutPiece(s.Id, CutPieceKind.Strip, s.Length, s.Width, s.StockThickness,
-            s.Segments.Select(x => x.Id).ToValueList(), ScorePositions(s)),
+            s.Segments.Select(x => x.Id).ToValueList(), ScorePositions(s), s.ScoreWidth),
         _ => null,
     };
 

@@ -5,7 +5,7 @@ namespace PadPlan.Materials.Cutting;
 /// <summary>One piece to cut from stock: a rectangle pad, a scored strip, or a strip for punching discs. Length runs along X of the piece (Width), the strip's width across (Height).</summary>
 public sealed record CutPiece
 {
-    public CutPiece(string id, CutPieceKind kind, double width, double height, double thickness, ValueList<string> pads, ValueList<double>? positions = null)
+    public CutPiece(string id, CutPieceKind kind, double width, double height, double thickness, ValueList<string> pads, ValueList<double>? positions = null, double scoreWidth = 0)
     {
         Id = Guard.Name(id, "piece id");
         Kind = kind;
@@ -14,6 +14,7 @@ public sealed record CutPiece
         Thickness = Guard.Positive(thickness, "piece stock thickness");
         Pads = pads;
         Positions = positions ?? ValueList<double>.Empty;
+        ScoreWidth = Guard.NonNegative(scoreWidth, "score width");
     }
 
     public string Id { get; }
@@ -26,6 +27,8 @@ public sealed record CutPiece
     public ValueList<string> Pads { get; }
     /// <summary>Score centres (strips) or disc centres (punching strips), mm from the start end; empty for rectangles.</summary>
     public ValueList<double> Positions { get; }
+    /// <summary>Width of each score across a strip (mm): wider than usual where high voltage stands between neighbouring segments; 0 for other pieces.</summary>
+    public double ScoreWidth { get; }
 
     public double Area => Width * Height;
 }

@@ -70,7 +70,7 @@ public static class CutListTables
 
     private static string Cuts(CutPiece piece) => piece.Kind switch
     {
-        CutPieceKind.Strip => $"score across at {Mm.List(piece.Positions)}",
+        CutPieceKind.Strip => piece.Positions.Count == 0 ? "one segment, no score" : $"score across at {Mm.List(piece.Positions)}, each {Mm.Of(piece.ScoreWidth)} mm wide",
         CutPieceKind.PunchStrip => $"punch at {Mm.List(piece.Positions)}",
         _ => "",
     };
