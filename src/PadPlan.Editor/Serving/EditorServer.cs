@@ -1,3 +1,4 @@
+using PadPlan.Gate;
 using System.Net;
 using System.Security.Cryptography;
 using System.Text.Json;
@@ -158,7 +159,7 @@ public sealed class EditorServer : IAsyncDisposable
         return PlaceStatus();
     }
 
-    private void Finish(Task<PlacementResult?> task)
+    private void Finish(Task<CheckedPlacement?> task)
     {
         string note;
         try
@@ -176,7 +177,7 @@ public sealed class EditorServer : IAsyncDisposable
         }
     }
 
-    private string Outcome(Task<PlacementResult?> task)
+    private string Outcome(Task<CheckedPlacement?> task)
     {
         if (task.IsFaulted) return "the placer stopped with a fault: " + task.Exception!.GetBaseException().Message;
         if (task.Result is null) return "placing stopped; the plan is as it was.";

@@ -1,10 +1,11 @@
 using PadPlan.Model;
+using PadPlan.Gate;
 using PadPlan.Planning;
 
 namespace PadPlan.Editor.Sessions;
 
 /// <summary>
-/// "Place the rest": runs the placer in the background with held parts and pads kept where they are, reports its
+/// "Place the rest": runs the placer, gated by the real checker (CheckedPlacer), in the background with held parts and pads kept where they are, reports its
 /// progress and can be stopped. The placer keeps items with a locked flag fixed (the same rule as `padplan place`).
 /// </summary>
 public sealed class PlaceJob
@@ -20,7 +21,7 @@ public sealed class PlaceJob
     }
 
     public int Runs { get; }
-    public Task<PlacementResult?> Result { get; private set; } = Task.FromResult<PlacementResult?>(null);
+    public Task<CheckedPlacement?> Result { get; private set; } = Task.FromResult<CheckedPlacement?>(null);
     public bool Running => !Result.IsCompleted;
     public bool Stopped => _stop.IsCancellationRequested;
 
@@ -36,11 +37,11 @@ public sealed class PlaceJob
     {
         var job = new PlaceJob(settings.RunsFor(project.Parts.Count), stop);
         var progress = new StopOrReport(job);
-        job.Result = Task.Run<PlacementResult?>(() =>
+        job.Result = Task.Run<CheckedPlacement?>(() =>
         {
             try
             {
-                return Placer.Place(project, settings, progress);
+                return CheckedPlacer.Place(project, settings, progress);
             }
             catch (Exception e) when (IsStop(e) && job.Stopped)
             {
