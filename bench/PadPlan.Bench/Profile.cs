@@ -3,35 +3,58 @@ using PadPlan.Planning;
 
 namespace PadPlan.Bench;
 
-/// <summary>Times the stages of one run (annealing, legalising) for a synthetic case: `--profile N`.</summary>
+/// <summary>Times the stages of one run (start, annealing, legalising, polishing) for a synthetic case and counts the work per move: `--profile N`.</summary>
 internal static class Profile
 {
+    /// <summary>Every this many temperatures the trace prints a line.</summary>
+    private const int Trace = 10;
+
     public static void Run(int parts, PlacerSettings settings)
     {
         var project = SyntheticCircuit.Make(parts, 1000 + parts);
+        var cpu = Process.GetCurrentProcess();
+        var clock = Stopwatch.StartNew();
         var problem = ProblemBuilder.Build(project, settings, CostWeights.Default);
         var state = new AnnealState(problem);
         var annealer = new Annealer(state, settings.Seed);
-        var clock = Stopwatch.StartNew();
-        annealer.Scatter();
-        var steps = 0;
-        annealer.Run(settings.MovesFactor, (step, cost, v) => { steps = step; if (step % 8 == 0) Console.WriteLine($"  step {step}: total {cost:0.0}, violation {v:0.00}"); });
-        var anneal = clock.Elapsed.TotalSeconds;
-        var violation = state.Violation;
-        foreach (var line in state.Problems().Take(8)) Console.WriteLine("  " + line);
-        foreach (var net in problem.Nets)
+        var build = Lap(clock);
+        annealer.Start(settings.Start == StartKind.Mixed ? StartKind.Spring : settings.Start, 0);
+        var start = Lap(clock);
+        (state.NetEvaluations, state.LandingsFound, state.PairTests) = (0, 0, 0);
+        var cpuBefore = cpu.TotalProcessorTime;
+        long lastTried = 0, lastKept = 0;
+        annealer.Run(settings.MovesFactor, (step, total, v) =>
         {
-            var bad = net.Leads.Select(l => (l, isl: state.IslandOf(l))).Where(x => x.isl >= 0).Select(x => (x.l, x.isl, len: state.Land(x.l, x.isl, out _, out _, out var v), v)).ToList();
-            if (bad.All(b => b.v <= 1e-9) && bad.Count == net.Leads.Length) continue;
-            Console.WriteLine($"  net {net.Net.Name}: islands {string.Join(",", net.Islands.Select(i => problem.Islands[i].Id + "/cap" + problem.Islands[i].Capacity))}");
-            foreach (var b in bad) Console.WriteLine($"    {problem.Items[problem.Leads[b.l].Item].Name}.{problem.Leads[b.l].Pin} -> {problem.Islands[b.isl].Id}: {b.len:0.00} mm, violation {b.v:0.00}, max {problem.Leads[b.l].MaxReach}");
-        }
-        var e = state.Extent();
-        Console.WriteLine($"  region {problem.Region.Width:0.0} x {problem.Region.Height:0.0}, extent {e.Width:0.0} x {e.Height:0.0}, raw area {problem.RawArea:0}");
-        clock.Restart();
+            if (step % Trace != 0) return;
+            var (tried, kept) = (annealer.Stats.TotalTried, annealer.Stats.Kept.Sum());
+            Console.WriteLine($"  step {step}: total {total:0.0}, violation {v:0.00}, kept {(double)(kept - lastKept) / Math.Max(1, tried - lastTried):P0}");
+            (lastTried, lastKept) = (tried, kept);
+        });
+        var anneal = Lap(clock);
+        cpu.Refresh();
+        var annealCpu = (cpu.TotalProcessorTime - cpuBefore).TotalSeconds;
+        var moves = annealer.Stats.TotalTried;
+        var (nets, landings, pairs) = (state.NetEvaluations, state.LandingsFound, state.PairTests);
+        var violation = state.Violation;
+        foreach (var line in state.Problems().Take(violation > 1e-9 ? 6 : 0)) Console.WriteLine("  still broken: " + line);
         var legal = Legaliser.Finish(state);
-        var legalise = clock.Elapsed.TotalSeconds;
-        Console.WriteLine($"{parts} parts, {problem.Items.Length} items: anneal {anneal:0.00} s ({annealer.Stats.TotalTried} moves, {steps} steps, {annealer.Stats.TotalTried / anneal:0} moves/s), violation after anneal {violation:0.###}; legalise {legalise:0.00} s, legal {legal}");
-        Console.WriteLine(annealer.Stats);
+        var legalise = Lap(clock);
+        if (legal) { annealer.Polish(settings.MovesFactor); legal = Legaliser.Finish(state); }
+        var polish = Lap(clock);
+        var e = state.Extent();
+        Console.WriteLine($"{parts} parts, {problem.Items.Length} items ({problem.Leads.Length} leads, {problem.Nets.Length} nets), start {settings.Start}, effort {settings.Effort}, one run on one thread");
+        Console.WriteLine($"  moves per temperature {annealer.MovesPerTemperature(settings.MovesFactor)}, temperatures {annealer.Stats.Temperatures}, moves {moves} ({moves / anneal:0} moves/s wall, {moves / Math.Max(1e-9, annealCpu):0} per CPU s)");
+        Console.WriteLine($"  stages (wall s): build {build:0.000}, start {start:0.000}, anneal {anneal:0.000} (CPU {annealCpu:0.000}), legalise {legalise:0.000}, polish {polish:0.000}");
+        Console.WriteLine($"  inner loop: {annealer.Stats.InnerLoopBytes} bytes allocated over {annealer.Stats.InnerLoopMoves} moves ({(double)annealer.Stats.InnerLoopBytes / Math.Max(1, annealer.Stats.InnerLoopMoves):0.###} per move)");
+        Console.WriteLine($"  work per move (annealing, incl. the recount after each temperature): {(double)nets / moves:0.00} net evaluations, {(double)landings / moves:0.0} lead landings, {(double)pairs / moves:0.0} item pairs");
+        Console.WriteLine($"  violation after annealing {violation:0.###}; legal {legal}; cost {state.Cost:0}; lead {state.LeadTotal():0} mm; extent {e.Width:0} x {e.Height:0} mm in region {problem.Region.Width:0} x {problem.Region.Height:0}");
+        Console.WriteLine("  " + annealer.Stats);
+    }
+
+    private static double Lap(Stopwatch clock)
+    {
+        var s = clock.Elapsed.TotalSeconds;
+        clock.Restart();
+        return s;
     }
 }

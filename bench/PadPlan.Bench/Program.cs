@@ -7,14 +7,21 @@ using PadPlan.Planning;
 using PadPlan.ProjectFiles;
 using PadPlan.Rules;
 
-// Placement benchmark: synthetic circuits of several sizes plus every example, placed at one effort, each beside the row baseline.
-// Usage: dotnet run -c Release --project bench/PadPlan.Bench -- [--sizes 20,50,100,200,500] [--effort normal] [--seed 1] [--write docs/benchmarks.md]
-//        ... -- --profile N (stage timings of one run), --preview PROJECT OUT.png (rough picture of a placed project),
+// Placement benchmark: synthetic circuits of several sizes plus every example, placed at one effort, each beside the row
+// baseline; then both starts side by side, and the seed-to-seed spread on the examples.
+// Usage: dotnet run -c Release --project bench/PadPlan.Bench -- [--sizes 20,50,100,200,500,1000] [--effort normal] [--seed 1]
+//          [--repeat 3] [--seeds 10] [--start mixed|spring|scatter] [--skip-compare] [--skip-steady] [--write docs/benchmarks.md]
+//        ... -- --profile N (stage timings and work per move of one run), --preview PROJECT OUT.png (rough picture of a placed project),
 //        ... -- --edit-recheck N (the editor's work after one change on an N-part plan: edit, check, view)
 //        ... -- [--seed S] --synthetic N OUT.padplan.json (write an unplaced synthetic circuit for `padplan place`)
-var sizes = new[] { 20, 50, 100, 200, 500 };
+var sizes = new[] { 20, 50, 100, 200, 500, 1000 };
 var effort = Effort.Normal;
 var seed = 1;
+var repeat = 3;
+var seeds = 10;
+var start = StartKind.Mixed;
+var compare = true;
+var steady = true;
 string? write = null;
 for (var i = 0; i < args.Length; i++)
 {
@@ -23,68 +30,64 @@ for (var i = 0; i < args.Length; i++)
         case "--sizes": sizes = [.. args[++i].Split(',').Select(int.Parse)]; break;
         case "--effort": effort = Enum.Parse<Effort>(args[++i], ignoreCase: true); break;
         case "--seed": seed = int.Parse(args[++i], CultureInfo.InvariantCulture); break;
+        case "--repeat": repeat = int.Parse(args[++i], CultureInfo.InvariantCulture); break;
+        case "--seeds": seeds = int.Parse(args[++i], CultureInfo.InvariantCulture); break;
+        case "--start": start = Enum.Parse<StartKind>(args[++i], ignoreCase: true); break;
+        case "--skip-compare": compare = false; break;
+        case "--skip-steady": steady = false; break;
         case "--write": write = args[++i]; break;
         case "--preview": Preview.Write(args[++i], args[++i]); return 0;
         case "--synthetic": ProjectFile.Write(SyntheticCircuit.Make(int.Parse(args[++i], CultureInfo.InvariantCulture), seed), args[++i]); return 0;
         case "--edit-recheck": EditRecheck.Run(int.Parse(args[++i], CultureInfo.InvariantCulture), 50); return 0;
-        case "--profile": Profile.Run(int.Parse(args[++i], CultureInfo.InvariantCulture), new PlacerSettings(seed, effort)); return 0;
+        case "--profile": Profile.Run(int.Parse(args[++i], CultureInfo.InvariantCulture), new PlacerSettings(seed, effort) { Start = start }); return 0;
         default: Console.Error.WriteLine($"unknown argument {args[i]}"); return 2;
     }
 }
 var root = FindRoot();
-var settings = new PlacerSettings(seed, effort);
+var settings = new PlacerSettings(seed, effort) { Start = start };
 var cases = new List<(string Name, Project Project)>();
 foreach (var n in sizes) cases.Add(($"synthetic {n}", SyntheticCircuit.Make(n, 1000 + n)));
 foreach (var file in Directory.GetFiles(Path.Combine(root, "examples"), "*.padplan.json", SearchOption.AllDirectories).Order(StringComparer.Ordinal))
     cases.Add(($"example {Path.GetFileName(file).Replace(".padplan.json", "")}", ProjectFile.Read(file) with { Layout = null }));
-cases.AddRange(ExampleNetlists.ImportAll(Path.Combine(root, "examples")));
+var examples = ExampleNetlists.ImportAll(Path.Combine(root, "examples")).ToList();
+cases.AddRange(examples);
+examples.InsertRange(0, cases.Where(c => c.Name.StartsWith("example", StringComparison.Ordinal) && !examples.Any(e => e.Name == c.Name)));
 
-var rows = new List<BenchRow>();
-foreach (var (name, project) in cases)
+var loadBefore = Machine.Load();
+var began = DateTime.UtcNow;
+var rows = cases.Select(c => Measure(c.Name, c.Project, settings, repeat)).ToList();
+var report = new StringBuilder();
+report.AppendLine(CultureInfo.InvariantCulture, $"Machine: {Machine.Describe()}.");
+report.AppendLine();
+report.AppendLine(CultureInfo.InvariantCulture, $"Effort {effort.ToString().ToLowerInvariant()}, seed {seed}, {start.ToString().ToLowerInvariant()} start, each case placed {repeat} times (times: median, lowest-highest); quality figures are the same in every run.");
+report.AppendLine();
+report.Append(MainTable(rows));
+if (compare)
 {
-    Console.Error.WriteLine($"{name}: {project.Parts.Count} parts ...");
-    var problem = ProblemBuilder.Build(project, settings, CostWeights.Default);
-    var baseline = RowBaseline.Place(problem);
-    var baseLeads = baseline.LeadTotal() / Math.Max(1e-9, problem.LeadLengthFloor);
-    var baseExtent = baseline.Extent();
-    var baseViolations = baseline.Problems().Count();
-    var clock = Stopwatch.StartNew();
-    var result = Placer.Place(project, settings);
-    var seconds = clock.Elapsed.TotalSeconds;
-    if (!result.Succeeded)
-    {
-        rows.Add(new BenchRow(name, project.Parts.Count, false, result.Failure!.Message, seconds, 0, -1, 0, 0, 0, 0, baseViolations, baseLeads, baseExtent.Width * baseExtent.Height / problem.RawArea, baseline.Cost, "-"));
-        continue;
-    }
-    var s = result.Summary!;
-    // Violations are counted by the independent checker, not by the placer's own legality test.
-    var checkClock = Stopwatch.StartNew();
-    var check = Checker.Check(result.Project!);
-    var checkMs = checkClock.Elapsed.TotalMilliseconds;
-    rows.Add(new BenchRow(name, project.Parts.Count, true, "", seconds, s.Moves / seconds, check.Errors, checkMs,
-        s.TotalLead / Math.Max(1e-9, s.LeadFloor), s.UsedArea / s.RawArea, s.Cost,
-        baseViolations, baseLeads, baseExtent.Width * baseExtent.Height / problem.RawArea, baseline.Cost,
-        FormattableString.Invariant($"{s.BoardWidth:0} x {s.BoardHeight:0}")));
-    Console.Error.WriteLine(FormattableString.Invariant($"  {seconds:0.00} s, cost {s.Cost:0} vs baseline {baseline.Cost:0}"));
+    Console.Error.WriteLine("both starts side by side ...");
+    report.AppendLine();
+    report.AppendLine("Both starts side by side, one run each, in the same benchmark run:");
+    report.AppendLine();
+    report.Append(StartTable(cases, settings));
 }
-
-var table = new StringBuilder();
-table.AppendLine("| case | parts | time (s) | moves/s | violations (checker) | check (ms) | lead / floor | area / raw | cost | board (mm) | baseline violations | baseline lead / floor | baseline area / raw | baseline cost | cost gain |");
-table.AppendLine("|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|");
-foreach (var r in rows)
-    table.AppendLine(r.Placed
-        ? FormattableString.Invariant($"| {r.Case} | {r.Parts} | {r.Seconds:0.00} | {r.MovesPerSecond:0} | {r.Violations} | {r.CheckMilliseconds:0.0} | {r.LeadRatio:0.00} | {r.AreaRatio:0.00} | {r.Cost:0} | {r.Board} | {r.BaselineViolations} | {r.BaselineLeadRatio:0.00} | {r.BaselineAreaRatio:0.00} | {r.BaselineCost:0} | {r.Gain:0.0}x |")
-        : FormattableString.Invariant($"| {r.Case} | {r.Parts} | {r.Seconds:0.00} | - | failed: {r.Note} | - | - | - | - | - | {r.BaselineViolations} | {r.BaselineLeadRatio:0.00} | {r.BaselineAreaRatio:0.00} | {r.BaselineCost:0} | - |"));
-var machine = Machine();
-Console.WriteLine(machine);
-Console.WriteLine();
-Console.Write(table);
+if (steady)
+{
+    Console.Error.WriteLine($"seed spread over {seeds} seeds ...");
+    report.AppendLine();
+    report.AppendLine(CultureInfo.InvariantCulture, $"Seed to seed on the examples, seeds 1-{seeds}: total lead and longest lead (mm), median (lowest-highest), and the spread (highest / lowest - 1):");
+    report.AppendLine();
+    report.Append(SteadyTable(examples, settings, seeds));
+}
+var loadAfter = Machine.Load();
+report.AppendLine();
+report.AppendLine(CultureInfo.InvariantCulture, $"Run {began:yyyy-MM-dd HH:mm} UTC, {(DateTime.UtcNow - began).TotalMinutes:0.0} min; 1-minute load average {loadBefore:0.0} before, {loadAfter:0.0} after (2 cores: a load above 2 means other work shared them).");
+Console.WriteLine(report);
 if (write is not null)
 {
     var path = Path.Combine(root, write);
     var text = File.Exists(path) ? File.ReadAllText(path) : "";
     const string begin = "<!-- results:begin -->", end = "<!-- results:end -->";
-    var block = $"{begin}\n{machine}\n\nEffort {effort.ToString().ToLowerInvariant()}, seed {seed}, {settings.RunsFor(PlacerSettings.SmallCircuit)} runs per case up to {PlacerSettings.SmallCircuit} parts, {settings.RunsFor(PlacerSettings.SmallCircuit + 1)} above.\n\n{table}{end}";
+    var block = $"{begin}\n{report.ToString().TrimEnd()}\n{end}";
     var a = text.IndexOf(begin, StringComparison.Ordinal);
     var b = text.IndexOf(end, StringComparison.Ordinal);
     text = a >= 0 && b > a ? text[..a] + block + text[(b + end.Length)..] : text + "\n" + block + "\n";
@@ -93,18 +96,104 @@ if (write is not null)
 }
 return 0;
 
-static string Machine()
+static BenchRow Measure(string name, Project project, PlacerSettings settings, int repeat)
 {
-    var cpu = "unknown CPU";
-    try
+    Console.Error.WriteLine($"{name}: {project.Parts.Count} parts ...");
+    var load = Machine.Load();
+    var problem = ProblemBuilder.Build(project, settings, CostWeights.Default);
+    var baseline = RowBaseline.Place(problem);
+    var floor = problem.LeadLengthFloor;
+    var baseLeads = baseline.LeadTotal() / Math.Max(1e-9, floor);
+    var baseViolations = baseline.Problems().Count();
+    var wall = new List<double>();
+    var cpu = new List<double>();
+    PlacementResult? result = null;
+    for (var k = 0; k < repeat; k++)
     {
-        cpu = File.ReadLines("/proc/cpuinfo").FirstOrDefault(l => l.StartsWith("model name", StringComparison.Ordinal))?.Split(':', 2)[1].Trim() ?? cpu;
+        var process = Process.GetCurrentProcess();
+        var cpu0 = process.TotalProcessorTime;
+        var clock = Stopwatch.StartNew();
+        result = Placer.Place(project, settings);
+        wall.Add(clock.Elapsed.TotalSeconds);
+        process.Refresh();
+        cpu.Add((process.TotalProcessorTime - cpu0).TotalSeconds);
     }
-    catch (IOException)
+    var loadText = FormattableString.Invariant($"{load:0.0}/{Machine.Load():0.0}");
+    if (!result!.Succeeded)
+        return new BenchRow(name, project.Parts.Count, false, result.Failure!.Message, Spread.Of(wall), Spread.Of(cpu), 0, -1, 0, 0, 0, 0, 0, baseViolations, baseLeads, baseline.Cost, "-", loadText);
+    var s = result.Summary!;
+    // Violations are counted by the independent checker, not by the placer's own legality test.
+    var checkClock = Stopwatch.StartNew();
+    var check = Checker.Check(result.Project!);
+    var checkMs = checkClock.Elapsed.TotalMilliseconds;
+    var wireFloor = floor + problem.JumperFloor;
+    Console.Error.WriteLine(FormattableString.Invariant($"  {Spread.Of(wall)} s, cost {s.Cost:0} vs baseline {baseline.Cost:0}, load {loadText}"));
+    return new BenchRow(name, project.Parts.Count, true, "", Spread.Of(wall), Spread.Of(cpu), s.Moves / Spread.Of(wall).Median, check.Errors, checkMs,
+        s.TotalLead / Math.Max(1e-9, floor), (s.TotalLead + s.JumperLength) / Math.Max(1e-9, wireFloor), s.UsedArea / s.RawArea, s.Cost,
+        baseViolations, baseLeads, baseline.Cost, FormattableString.Invariant($"{s.BoardWidth:0} x {s.BoardHeight:0}"), loadText);
+}
+
+static string MainTable(List<BenchRow> rows)
+{
+    var table = new StringBuilder();
+    table.AppendLine("| case | parts | time (s) | CPU (s) | load before/after | moves/s | violations (checker) | check (ms) | lead / floor | wire / floor | area / raw | cost | board (mm) | baseline violations | baseline lead / floor | baseline cost | cost gain |");
+    table.AppendLine("|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|");
+    foreach (var r in rows)
+        table.AppendLine(r.Placed
+            ? FormattableString.Invariant($"| {r.Case} | {r.Parts} | {r.Seconds} | {r.CpuSeconds.Median:0.00} | {r.Load} | {r.MovesPerSecond:0} | {r.Violations} | {r.CheckMilliseconds:0.0} | {r.LeadRatio:0.00} | {r.WireRatio:0.00} | {r.AreaRatio:0.00} | {r.Cost:0} | {r.Board} | {r.BaselineViolations} | {r.BaselineLeadRatio:0.00} | {r.BaselineCost:0} | {r.Gain:0.0}x |")
+            : FormattableString.Invariant($"| {r.Case} | {r.Parts} | {r.Seconds} | {r.CpuSeconds.Median:0.00} | {r.Load} | - | failed: {r.Note} | - | - | - | - | - | - | {r.BaselineViolations} | {r.BaselineLeadRatio:0.00} | {r.BaselineCost:0} | - |"));
+    return table.ToString();
+}
+
+static string StartTable(List<(string Name, Project Project)> cases, PlacerSettings settings)
+{
+    var table = new StringBuilder();
+    table.AppendLine("| case | spring: time (s) | spring: cost | spring: lead / floor | scatter: time (s) | scatter: cost | scatter: lead / floor | lower cost |");
+    table.AppendLine("|---|---|---|---|---|---|---|---|");
+    foreach (var (name, project) in cases)
     {
-        // not Linux: leave the CPU unnamed
+        var floor = ProblemBuilder.Build(project, settings, CostWeights.Default).LeadLengthFloor;
+        var cells = new List<string>();
+        var costs = new List<double>();
+        foreach (var kind in new[] { StartKind.Spring, StartKind.Scatter })
+        {
+            var clock = Stopwatch.StartNew();
+            var result = Placer.Place(project, settings with { Start = kind });
+            var seconds = clock.Elapsed.TotalSeconds;
+            if (!result.Succeeded) { cells.Add(FormattableString.Invariant($"{seconds:0.00} | failed | -")); costs.Add(double.MaxValue); continue; }
+            cells.Add(FormattableString.Invariant($"{seconds:0.00} | {result.Summary!.Cost:0} | {result.Summary.TotalLead / Math.Max(1e-9, floor):0.00}"));
+            costs.Add(result.Summary.Cost);
+        }
+        var winner = costs[0] <= costs[1] ? "spring" : "scatter";
+        table.AppendLine(FormattableString.Invariant($"| {name} | {cells[0]} | {cells[1]} | {winner} ({Math.Max(costs[0], costs[1]) / Math.Min(costs[0], costs[1]) - 1:P0}) |"));
     }
-    return $"Machine: {Environment.ProcessorCount} logical processors (nproc), {cpu}; {System.Runtime.InteropServices.RuntimeInformation.FrameworkDescription}, {System.Runtime.InteropServices.RuntimeInformation.OSDescription}.";
+    return table.ToString();
+}
+
+static string SteadyTable(List<(string Name, Project Project)> examples, PlacerSettings settings, int seeds)
+{
+    var table = new StringBuilder();
+    table.AppendLine("| case | total lead (mm) | spread | longest lead (mm) | spread | time per seed (s) |");
+    table.AppendLine("|---|---|---|---|---|---|");
+    foreach (var (name, project) in examples)
+    {
+        var totals = new List<double>();
+        var longest = new List<double>();
+        var times = new List<double>();
+        for (var k = 1; k <= seeds; k++)
+        {
+            var clock = Stopwatch.StartNew();
+            var result = Placer.Place(project, settings with { Seed = k });
+            times.Add(clock.Elapsed.TotalSeconds);
+            if (!result.Succeeded) continue;
+            totals.Add(result.Summary!.TotalLead);
+            longest.Add(result.Summary.LongestLead);
+        }
+        if (totals.Count == 0) { table.AppendLine($"| {name} | failed | - | - | - | - |"); continue; }
+        var (t, l) = (Spread.Of(totals), Spread.Of(longest));
+        table.AppendLine(FormattableString.Invariant($"| {name}{(totals.Count < seeds ? $" ({seeds - totals.Count} seeds failed)" : "")} | {t.Median:0.0} ({t.Min:0.0}-{t.Max:0.0}) | {t.Width:P0} | {l.Median:0.0} ({l.Min:0.0}-{l.Max:0.0}) | {l.Width:P0} | {Spread.Of(times).Median:0.00} |"));
+    }
+    return table.ToString();
 }
 
 static string FindRoot()

@@ -4,6 +4,8 @@ namespace PadPlan.Planning;
 internal sealed record CostWeights
 {
     public double Lead { get; init; } = 1.0;
+    /// <summary>A lead this long (mm) costs twice as much per mm as a very short one: the longest leads are what a builder notices, and they vary most from seed to seed.</summary>
+    public double LongLead { get; init; } = 10.0;
     /// <summary>RF leads count this many times over: each mm adds about 1 nH (DOMAIN 2).</summary>
     public double RfFactor { get; init; } = 3.0;
     public double Jumper { get; init; } = 1.5;

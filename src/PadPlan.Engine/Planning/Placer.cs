@@ -61,16 +61,19 @@ public static class Placer
             $"Set toolkit.stockThickness to {mm} or more in the project, or stand the high-voltage nodes off the board; mains safety standards come first.");
     }
 
-    /// <summary>The best of several independent runs: legal first, then lowest cost, then lowest run number. Seeds are fixed per run, so threads never change the answer.</summary>
+    /// <summary>
+    /// The best of several independent runs: legal first, then lowest cost, then lowest run number. Runs go in fixed batches and
+    /// stop early once the two best legal ones agree on the cost; seeds and batches are fixed per run, so threads never change the answer.
+    /// </summary>
     internal static RunOutcome RunAll(PlacementProblem problem, PlacerSettings settings, IProgress<PlacerProgress>? progress)
     {
         var runs = settings.RunsFor(problem.Project.Parts.Count);
-        var results = new RunOutcome[runs];
+        var results = new RunOutcome?[runs];
         void One(int k)
         {
             var state = new AnnealState(problem);
             var annealer = new Annealer(state, settings.Seed * 7919L + k);
-            annealer.Scatter();
+            annealer.Start(settings.Start, k);
             annealer.Run(settings.MovesFactor, (step, cost, violation) => progress?.Report(new PlacerProgress(k + 1, "annealing", step, cost, violation)));
             var legal = Legaliser.Finish(state);
             if (legal)
@@ -81,14 +84,30 @@ public static class Placer
                 if (!Legaliser.Finish(state)) state.CopyFrom(kept);
             }
             progress?.Report(new PlacerProgress(k + 1, legal ? "legal" : "not legal", 0, state.Cost, state.Violation));
-            results[k] = new RunOutcome(state, legal, annealer.Stats.TotalTried);
+            results[k] = new RunOutcome(state, legal, annealer.Stats.TotalTried) { Stats = annealer.Stats };
         }
-        if (settings.AllowThreads && runs > 1)
-            Parallel.For(0, runs, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, One);
-        else
-            for (var k = 0; k < runs; k++) One(k);
-        var best = results.Select((r, k) => (r, k)).OrderBy(x => x.r.Legal ? 0 : 1).ThenBy(x => x.r.Legal ? 0 : x.r.State.Violation).ThenBy(x => x.r.State.Cost).ThenBy(x => x.k).First().r;
-        return best with { Moves = results.Sum(r => r.Moves) };
+        var done = 0;
+        while (done < runs)
+        {
+            var batch = Math.Min(PlacerLimits.RunBatch, runs - done);
+            var first = done;
+            if (settings.AllowThreads && batch > 1)
+                Parallel.For(first, first + batch, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, One);
+            else
+                for (var k = first; k < first + batch; k++) One(k);
+            done += batch;
+            if (Agree(results.Take(done))) break;
+        }
+        var finished = results.Take(done).Select(r => r!).ToArray();
+        var best = finished.Select((r, k) => (r, k)).OrderBy(x => x.r.Legal ? 0 : 1).ThenBy(x => x.r.Legal ? 0 : x.r.State.Violation).ThenBy(x => x.r.State.Cost).ThenBy(x => x.k).First().r;
+        return best with { Moves = finished.Sum(r => r.Moves), Runs = done };
+    }
+
+    /// <summary>The two cheapest legal runs are within <see cref="PlacerLimits.RunsAgree"/> of each other: more seeds would find little more.</summary>
+    private static bool Agree(IEnumerable<RunOutcome?> runs)
+    {
+        var costs = runs.Where(r => r is { Legal: true }).Select(r => r!.State.Cost).Order().Take(2).ToArray();
+        return costs.Length == 2 && costs[1] - costs[0] <= PlacerLimits.RunsAgree * Math.Max(1e-9, costs[0]);
     }
 
     private static RunOutcome PlaceOnAutoBoard(PlacementProblem problem, PlacerSettings settings, IProgress<PlacerProgress>? progress)

@@ -19,18 +19,44 @@ internal static class PlacerLimits
     public static readonly double[] GroundTurns = [0, 45, -45, 90, -90, 135, -135, 180];
     /// <summary>VPR target acceptance rate for the move-range limiter (Betz and Rose, 1997).</summary>
     public const double TargetAcceptance = 0.44;
+    /// <summary>Cooling factor while 15-80 % of moves are kept; VPR uses 0.95, 0.9 halved the moves for the same cost within seed-to-seed noise in our measurements.</summary>
+    public const double MiddleCooling = 0.9;
     /// <summary>VPR initial temperature: this many standard deviations of the cost change of random moves.</summary>
     public const double StartTemperatureSigmas = 20;
     /// <summary>VPR stopping rule: temperature below this fraction of the mean cost per net.</summary>
     public const double StopFraction = 0.005;
     /// <summary>Safety stop on the number of temperature steps.</summary>
     public const int MaxSteps = 400;
-    /// <summary>Floor on moves per temperature (before the effort factor): small circuits are cheap, so they get a thorough search anyway.</summary>
-    public const int MinMovesPerTemperature = 600;
+    /// <summary>Floor on moves per temperature (before the effort factor), so a board of a handful of parts still gets a few hundred moves per temperature; above it moves grow as N^(4/3) (VPR).</summary>
+    public const int MinMovesPerTemperature = 60;
+    /// <summary>Convergence: a temperature counts as frozen when it changes the annealing cost by less than this fraction of it ...</summary>
+    public const double FrozenCostChange = 0.002;
+    /// <summary>... and the run stops after this many frozen temperatures in a row.</summary>
+    public const int FrozenSteps = 3;
+    /// <summary>Violation (mm) below which a layout counts as clean for the stopping rule; the legaliser then removes the rest.</summary>
+    public const double ViolationTolerance = 1e-6;
+    /// <summary>Start temperature of the annealing that follows the spring start, in standard deviations of the cost change of moves within <see cref="SpringStartRangeCells"/> cells: low, so the start's order survives.</summary>
+    public const double SpringStartSigmas = 1.0;
+    /// <summary>Range of the trial moves that set the spring start's temperature, in cells: the temperature of a local clean-up, not of a new search.</summary>
+    public const double SpringProbeCells = 0.5;
+    /// <summary>Move range of the annealing that follows the spring start, in cells of the spread (one cell is about one part with its pads).</summary>
+    public const double SpringStartRangeCells = 2.0;
+    /// <summary>The spring start spreads parts over a box of this many times the sum of body and pad areas (or the whole region, if smaller).</summary>
+    public const double SpringSpreadArea = 1.8;
+    /// <summary>Gauss-Seidel sweeps of the spring solve; it converges well before this on circuits of up to a few thousand parts.</summary>
+    public const int SpringSweeps = 200;
+    /// <summary>Weak pull of every item to the middle in the spring solve, against a spring's weight of 1: keeps parts without wires in the region.</summary>
+    public const double SpringCentrePull = 0.02;
+    /// <summary>Independent runs done together before the runs so far are compared; fixed, so the result never depends on the machine.</summary>
+    public const int RunBatch = 2;
+    /// <summary>Runs stop early once the best two legal ones are within this fraction of each other's cost.</summary>
+    public const double RunsAgree = 0.03;
     /// <summary>Extra temperature steps at the final temperature while rules are still broken.</summary>
     public const int CleanupSteps = 12;
     /// <summary>Smallest move range (mm).</summary>
     public const double MinRange = 0.5;
+    /// <summary>Violation (mm per item) after annealing beyond which the legaliser does not try: such a run is not legal, and another run or a larger region is the remedy.</summary>
+    public const double HopelessViolationPerItem = 0.01;
     /// <summary>Times the automatic board region may grow when a layout does not fit.</summary>
     public const int AutoGrowTries = 4;
     /// <summary>Growth of the automatic region per try.</summary>

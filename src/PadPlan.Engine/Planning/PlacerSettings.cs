@@ -9,6 +9,9 @@ public sealed record PlacerSettings(int Seed = 1, Effort Effort = Effort.Normal,
 {
     public static PlacerSettings Default { get; } = new();
 
+    /// <summary>Where annealing starts: both starts run by run (default), the analytic spring placement, or a random scatter. See docs/benchmarks.md for the side-by-side figures.</summary>
+    public StartKind Start { get; init; } = StartKind.Mixed;
+
     /// <summary>Circuits up to this many parts get twice the runs: each run is cheap, and the best of more seeds is markedly better.</summary>
     public const int SmallCircuit = 30;
 

@@ -54,4 +54,58 @@ public static class TestCircuits
         nets = [.. nets.Select(n => uses.GetValueOrDefault(n.Name) == 1 ? new Net(n.Name, n.Ground, n.Class, n.Voltage, n.VoltageEstimated, n.Current, n.MaxLead, n.Role, OpenEnded: true) : n)];
         return Project($"random-{seed}", Board.Auto, nets, list);
     }
+
+    /// <summary>
+    /// A long signal chain like a builder's larger boards: parts in a row of stages, each net joining two to four leads of
+    /// parts at most a few places apart, every sixth lead to ground, an input landing at the start and an output at the end.
+    /// </summary>
+    public static Project Chain(int seed, int parts)
+    {
+        var rng = new Random(seed);
+        var kinds = new List<(string Ref, string Footprint, string[] Pins)>();
+        for (var i = 1; i <= parts; i++)
+        {
+            var roll = i == 1 || i == parts ? -1 : rng.Next(20);
+            kinds.Add(roll switch
+            {
+                < 0 => ($"J{i}", "landing-1", ["1"]),
+                < 8 => ($"R{i}", "res-axial-250mw", ["1", "2"]),
+                < 14 => ($"C{i}", "cap-disc-5mm", ["1", "2"]),
+                < 19 => ($"Q{i}", "to92", ["E", "B", "C"]),
+                _ => ($"U{i}", "dip8", ["1", "2", "3", "4", "5", "6", "7", "8"]),
+            });
+        }
+        var slots = new List<(int Part, string Pin)>();
+        var pins = kinds.Select(_ => new List<(string Pin, string Net)>()).ToList();
+        for (var i = 0; i < kinds.Count; i++)
+            foreach (var pin in kinds[i].Pins)
+            {
+                if (kinds[i].Footprint == "dip8" && pin == "4") pins[i].Add((pin, "GND"));
+                else if (kinds[i].Footprint != "landing-1" && rng.Next(6) == 0) pins[i].Add((pin, "GND"));
+                else slots.Add((i, pin));
+            }
+        // Nets take consecutive slots after a shuffle within short windows, so each joins nearby parts only.
+        for (var start = 0; start < slots.Count; start += 6)
+        {
+            var end = Math.Min(slots.Count, start + 8);
+            for (var k = end - 1; k > start; k--)
+            {
+                var j = start + rng.Next(k - start + 1);
+                (slots[k], slots[j]) = (slots[j], slots[k]);
+            }
+        }
+        var nets = new List<Net> { new("GND", Ground: true) };
+        for (var at = 0; at < slots.Count;)
+        {
+            var size = Math.Min(2 + rng.Next(3), slots.Count - at);
+            if (slots.Count - at - size == 1) size++;
+            var name = $"N{nets.Count}";
+            var members = slots.Skip(at).Take(size).ToList();
+            var role = members.Any(m => m.Part == 0) ? SignalRole.Input : members.Any(m => m.Part == kinds.Count - 1) ? SignalRole.Output : SignalRole.None;
+            nets.Add(new Net(name, Role: role));
+            foreach (var (part, pin) in members) pins[part].Add((pin, name));
+            at += size;
+        }
+        return Project($"chain-{seed}-{parts}", Board.Auto, nets, kinds.Select((k, i) => Part(k.Ref, k.Footprint, [.. pins[i].OrderBy(p => p.Pin, StringComparer.Ordinal)])));
+    }
 }

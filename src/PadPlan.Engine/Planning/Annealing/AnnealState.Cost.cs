@@ -13,11 +13,15 @@ internal sealed partial class AnnealState
     /// <summary>Soft cost found by <see cref="Pair"/> calls since it was last cleared.</summary>
     private double _soft;
 
+    /// <summary>Work counters for the profile: nets evaluated, lead landings found, item pairs tested.</summary>
+    public long NetEvaluations, LandingsFound, PairTests;
+
     /// <summary>Lead length to an island for one lead, with its landing point and any broken reach limit.</summary>
     public double Land(int l, int s, out double ax, out double ay, out double violation)
     {
         var lead = _leads[l];
         var island = _islands[s];
+        LandingsFound++;
         return Landing.Find(_exX[l], _exY[l], _ouX[l], _ouY[l], island.Round, _isX[s], _isY[s], _isHW[s], _isHH[s],
             lead.Diameter + 2 * _slack, lead.MinReach, lead.MaxReach - _slack, out ax, out ay, out violation);
     }
@@ -28,6 +32,7 @@ internal sealed partial class AnnealState
         var net = _nets[n];
         var isl = net.Islands;
         var count = isl.Length;
+        NetEvaluations++;
         cost = 0;
         viol = 0;
         if (count == 0) { viol = 10 * net.Leads.Length; return; }
@@ -46,7 +51,7 @@ internal sealed partial class AnnealState
             {
                 var l = free[a];
                 var len = Land(l, isl[0], out _, out _, out var v);
-                cost += len * _w.Lead * _leads[l].Weight;
+                cost += LeadCost(l, len);
                 viol += v;
                 assign[l] = isl[0];
                 _use[0]++;
@@ -82,7 +87,7 @@ internal sealed partial class AnnealState
                 placed++;
                 var l = free[a];
                 assign[l] = isl[k];
-                cost += _pairLen[id] * _w.Lead * _leads[l].Weight;
+                cost += LeadCost(l, _pairLen[id]);
                 viol += _pairViol[id];
             }
             viol += 5.0 * (free.Length - placed);
@@ -94,6 +99,9 @@ internal sealed partial class AnnealState
             if (over > 0) viol += 5.0 * over;
         }
     }
+
+    /// <summary>A lead costs more per millimetre the longer it is, so the search evens out long leads instead of trading one long lead for several short ones.</summary>
+    private double LeadCost(int l, double len) => len * _w.Lead * _leads[l].Weight * (1 + len / _w.LongLead);
 
     /// <summary>Length of the shortest tree of straight jumpers joining a net's islands, centre to centre (Prim).</summary>
     private double JumperLength(int[] isl)
@@ -195,6 +203,7 @@ internal sealed partial class AnnealState
     /// <summary>Violations between two different items: bodies too close, islands closer than the pad gap, ground landings too close to an island.</summary>
     private double Pair(int i, int j)
     {
+        PairTests++;
         if (_eMinX[i] > _eMaxX[j] + _cull || _eMinX[j] > _eMaxX[i] + _cull || _eMinY[i] > _eMaxY[j] + _cull || _eMinY[j] > _eMaxY[i] + _cull) return 0;
         var a = _items[i];
         var b = _items[j];

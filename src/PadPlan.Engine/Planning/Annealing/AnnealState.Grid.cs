@@ -6,6 +6,8 @@ internal sealed partial class AnnealState
     private const double CellSize = 8.0;
     /// <summary>Room around the region that the grid still covers; items beyond it share the edge cells.</summary>
     private const double GridApron = 20.0;
+    /// <summary>Items a cell has room for before its list must grow.</summary>
+    private const int CellRoom = 24;
 
     private double _gridX0, _gridY0;
     private int _cols, _rows;
@@ -22,7 +24,8 @@ internal sealed partial class AnnealState
         _cols = Math.Max(1, (int)Math.Ceiling((r.Width + 2 * GridApron) / CellSize));
         _rows = Math.Max(1, (int)Math.Ceiling((r.Height + 2 * GridApron) / CellSize));
         _cells = new List<int>[_cols * _rows];
-        for (var k = 0; k < _cells.Length; k++) _cells[k] = [];
+        // Room for a crowded cell from the start, so the move loop does not grow lists (it must not allocate).
+        for (var k = 0; k < _cells.Length; k++) _cells[k] = new List<int>(CellRoom);
         _cellBox = new int[4 * _items.Length];
         Array.Fill(_cellBox, -1);
         _seen = new int[_items.Length];

@@ -32,9 +32,27 @@ internal sealed class Annealer
 
     public bool HasMoves => _kinds.Length > 0;
 
+    /// <summary>Cell size (mm) of the spring start's spread, 0 after a scatter: the annealing then starts cool and close by.</summary>
+    private double _startCell;
+
+    /// <summary>Places the items as <paramref name="start"/> says; a mixed start takes the spring start on even runs and a scatter on odd ones.</summary>
+    public void Start(StartKind start, int run)
+    {
+        if (start == StartKind.Spring || (start == StartKind.Mixed && run % 2 == 0)) SpringStart();
+        else Scatter();
+    }
+
+    /// <summary>An analytic start: parts where their springs (nets) pull them, spread over the region in that order; pads then at their nets' leads.</summary>
+    public void SpringStart()
+    {
+        _startCell = SpringLayout.Place(_s, _parts, _rng);
+        PadsToLeads();
+    }
+
     /// <summary>Movable items scattered over the region; pads then sent to the middle of their nets' leads.</summary>
     public void Scatter()
     {
+        _startCell = 0;
         var r = _s.Problem.Region;
         foreach (var i in _parts)
         {
@@ -42,6 +60,12 @@ internal sealed class Annealer
             _s.Y[i] = _rng.Between(r.MinY, r.MaxY);
             _s.Rot[i] = _rng.Next(4);
         }
+        PadsToLeads();
+    }
+
+    private void PadsToLeads()
+    {
+        var r = _s.Problem.Region;
         _s.Recompute();
         foreach (var i in _pads)
         {
@@ -52,7 +76,7 @@ internal sealed class Annealer
         _s.Recompute();
     }
 
-    /// <summary>Anneals to the end of the schedule, then quenches; reports after every temperature.</summary>
+    /// <summary>Anneals until the schedule says the run has converged, then quenches; reports after every temperature.</summary>
     public void Run(double movesFactor, Action<int, double, double>? report)
     {
         if (!HasMoves) return;
@@ -60,34 +84,81 @@ internal sealed class Annealer
         _s.Penalty = w.PenaltyStart;
         _s.Slack = PlacerLimits.AnnealSlack;
         _s.Recompute();
-        var movable = _parts.Length + _pads.Length;
-        var perTemperature = (int)Math.Max(PlacerLimits.MinMovesPerTemperature * movesFactor, movesFactor * Math.Pow(movable, 4.0 / 3.0));
+        var perTemperature = MovesPerTemperature(movesFactor);
         var region = _s.Problem.Region;
-        var schedule = new AnnealSchedule(StartTemperature(perTemperature), Math.Max(region.Width, region.Height));
+        var maxRange = Math.Max(region.Width, region.Height);
+        // From a spring start, anneal cool and close by, so the start's order survives; from a scatter, hot and far (VPR).
+        var startRange = _startCell > 0 ? PlacerLimits.SpringStartRangeCells * _startCell : maxRange;
+        var start = _startCell > 0
+            ? PlacerLimits.SpringStartSigmas * CostChangeSpread(perTemperature, PlacerLimits.SpringProbeCells * _startCell, softOnly: true)
+            : PlacerLimits.StartTemperatureSigmas * CostChangeSpread(perTemperature, startRange, softOnly: false);
+        var schedule = new AnnealSchedule(start, maxRange, startRange);
         var nets = Math.Max(1, _s.Problem.Nets.Length + _grounded.Length);
-        while (!schedule.Done(_s.Total, nets))
+        while (!schedule.Done(_s.Cost, _s.Violation, nets))
         {
-            var kept = 0;
-            for (var k = 0; k < perTemperature; k++)
-                if (TryMove(schedule.Temperature, schedule.Range)) kept++;
+            var kept = Moves(perTemperature, schedule.Temperature, schedule.Range);
             _s.Recompute();
-            schedule.Update((double)kept / perTemperature);
+            schedule.Update((double)kept / perTemperature, _s.Total);
             _s.Penalty = Math.Min(w.PenaltyEnd, _s.Penalty * w.PenaltyGrowth);
             report?.Invoke(schedule.Step, _s.Total, _s.Violation);
         }
+        Stats.Temperatures = schedule.Step;
         // Clean-up: while rules are still broken, keep the last temperature and double the penalty, so the layout can
         // still climb out of the last overlaps instead of freezing with them.
         for (var extra = 0; extra < PlacerLimits.CleanupSteps && _s.Violation > 1e-9; extra++)
         {
             _s.Penalty = Math.Min(w.PenaltyEnd * 64, _s.Penalty * 2);
-            for (var k = 0; k < perTemperature; k++) TryMove(schedule.Temperature, Math.Max(schedule.Range, 2.0));
+            Moves(perTemperature, schedule.Temperature, Math.Max(schedule.Range, 2.0));
             _s.Recompute();
             report?.Invoke(schedule.Step + extra + 1, _s.Total, _s.Violation);
         }
         _s.Penalty = Math.Max(_s.Penalty, w.PenaltyEnd);
         _s.Recompute();
-        for (var k = 0; k < 2 * perTemperature; k++) TryMove(0, PlacerLimits.MinRange * 2);
+        Moves(2 * perTemperature, 0, PlacerLimits.MinRange * 2);
         _s.Recompute();
+        TryHalfTurn();
+    }
+
+    /// <summary>
+    /// Turns the whole layout half round about the middle of the region when that is cheaper. Every gap, reach and overlap stays
+    /// the same, only the pulls to the edges change; annealing cannot find this by itself, as it would have to move every
+    /// item at once (an input that ended up on the right stays there).
+    /// </summary>
+    private void TryHalfTurn()
+    {
+        var p = _s.Problem;
+        if (p.Items.Any(i => i.Fixed)) return;
+        var r = p.Region;
+        var before = _s.Total;
+        void Turn()
+        {
+            for (var i = 0; i < p.Items.Length; i++)
+            {
+                _s.X[i] = r.MinX + r.MaxX - _s.X[i];
+                _s.Y[i] = r.MinY + r.MaxY - _s.Y[i];
+                if (p.Items[i].IsPart) _s.Rot[i] = (_s.Rot[i] + 2) & 3;
+            }
+            _s.Recompute();
+        }
+        Turn();
+        if (_s.Total < before - 1e-9) return;
+        Turn();
+    }
+
+    /// <summary>VPR's moves per temperature, N^(4/3) for N movable items, scaled by the effort; a small floor for tiny boards.</summary>
+    public int MovesPerTemperature(double movesFactor) =>
+        (int)Math.Max(PlacerLimits.MinMovesPerTemperature * movesFactor, movesFactor * Math.Pow(_parts.Length + _pads.Length, 4.0 / 3.0));
+
+    /// <summary>The inner loop: trial moves at one temperature. Returns how many were kept; counts the bytes it allocated (it must be none).</summary>
+    private int Moves(int count, double temperature, double range)
+    {
+        var before = GC.GetAllocatedBytesForCurrentThread();
+        var kept = 0;
+        for (var k = 0; k < count; k++)
+            if (TryMove(temperature, range)) kept++;
+        Stats.InnerLoopBytes += GC.GetAllocatedBytesForCurrentThread() - before;
+        Stats.InnerLoopMoves += count;
+        return kept;
     }
 
     /// <summary>After legalising: greedy moves with no slack and a prohibitive penalty, so leads shrink into the room the annealing slack kept free while no rule may break.</summary>
@@ -98,28 +169,27 @@ internal sealed class Annealer
         _s.Penalty = 1e6;
         _s.Recompute();
         var movable = _parts.Length + _pads.Length;
-        var moves = (int)Math.Max(200, 2 * movesFactor * Math.Pow(movable, 4.0 / 3.0));
-        for (var k = 0; k < moves; k++) TryMove(0, 1.0);
+        Moves((int)Math.Max(200, 2 * movesFactor * Math.Pow(movable, 4.0 / 3.0)), 0, 1.0);
         _s.Recompute();
     }
 
-    /// <summary>VPR's start: a multiple of the spread of cost changes over random trial moves.</summary>
-    private double StartTemperature(int samples)
+    /// <summary>VPR's start: the spread (standard deviation) of the cost changes of random trial moves within a range.</summary>
+    /// <param name="softOnly">Leave the violation penalty out: a start that already has good order should not be shaken up by the cost of small overlaps, which downhill moves clear anyway.</param>
+    private double CostChangeSpread(int samples, double range, bool softOnly)
     {
-        var region = _s.Problem.Region;
-        var range = Math.Max(region.Width, region.Height);
         double sum = 0, sumSq = 0;
         var n = Math.Min(samples, 2000);
         for (var k = 0; k < n; k++)
         {
             var d = Propose(range, out _);
+            if (softOnly) d = _s.DeltaCost;
             sum += d;
             sumSq += d * d;
             _s.Rollback();
         }
         var mean = sum / n;
         var sigma = Math.Sqrt(Math.Max(0, sumSq / n - mean * mean));
-        return Math.Max(1e-3, PlacerLimits.StartTemperatureSigmas * sigma);
+        return Math.Max(1e-4, sigma);
     }
 
     private bool TryMove(double temperature, double range)
@@ -199,7 +269,6 @@ internal sealed class Annealer
         return _s.DeltaCost + _s.Penalty * _s.DeltaViolation;
     }
 
-    /// <summary>Where a part would sit if each of its free leads' exits lay on the island it lands on, averaged; its position when it has none.</summary>
     /// <summary>Moves an item to a target point, jittered by up to 2 mm (less when the move range is smaller), kept inside the region.</summary>
     private void JumpNear(int i, (double X, double Y) target, double range, Region r)
     {
@@ -209,6 +278,7 @@ internal sealed class Annealer
         _s.Y[i] = Math.Clamp(target.Y + _rng.Between(-jitter, jitter), r.MinY, r.MaxY);
     }
 
+    /// <summary>Where a part would sit if each of its free leads' exits lay on the island it lands on, averaged; its position when it has none.</summary>
     private (double X, double Y) PadCentre(int partItem)
     {
         var p = _s.Problem;

@@ -13,6 +13,9 @@ internal static class Legaliser
     {
         s.Penalty = 1e4;
         s.Slack = 0;
+        s.Recompute();
+        // Annealing that ends far from legal is not mended by local moves; searching spots for every item would only take long.
+        if (s.Violation > PlacerLimits.HopelessViolationPerItem * s.Problem.Items.Length) return false;
         for (var attempt = 0; attempt < 3; attempt++)
         {
             Repair(s);

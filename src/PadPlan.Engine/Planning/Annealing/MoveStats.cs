@@ -9,6 +9,12 @@ internal sealed class MoveStats
     public long[] Kept { get; } = new long[Kinds];
 
     public long TotalTried => Tried.Sum();
+    /// <summary>Temperatures the schedule went through before it stopped.</summary>
+    public int Temperatures { get; set; }
+    /// <summary>Bytes allocated inside the inner move loop (measured around it); it should stay 0.</summary>
+    public long InnerLoopBytes { get; set; }
+    /// <summary>Moves made inside the measured inner loop.</summary>
+    public long InnerLoopMoves { get; set; }
 
     public void Count(MoveKind kind, bool kept)
     {

@@ -31,8 +31,11 @@ internal sealed class PlacementProblem
         }
     }
 
-    /// <summary>Sum over leads of their minimum reach: the floor under the total lead length (mm).</summary>
-    public double LeadLengthFloor => Leads.Sum(l => l.MinReach);
+    /// <summary>The floor under the total lead length (mm), part by part: see <see cref="WireFloor"/>.</summary>
+    public double LeadLengthFloor => Items.Where(i => i.IsPart).Sum(i => WireFloor.LeadsOf(this, i));
+
+    /// <summary>The floor under the total jumper length (mm), net by net: see <see cref="WireFloor"/>.</summary>
+    public double JumperFloor => Nets.Sum(n => WireFloor.JumpersOf(this, n));
 
     public PlacementProblem WithRegion(Region region) => new()
     {
