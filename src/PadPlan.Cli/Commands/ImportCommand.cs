@@ -47,6 +47,7 @@ public static class ImportCommand
             if (!parse.GetValue(quiet))
             {
                 var p = result.Project;
+                if (Output.Tables.ImportSummaryTable.For(p) is { } summary) context.Err.Write(Output.Tables.TableText.ToText(summary));
                 var assumed = p.Parts.Count(x => x.FootprintAssumed);
                 context.Err.WriteLine($"imported {p.Parts.Count} parts, {p.Nets.Count} nets, {p.Footprints.Count} footprints" +
                     (assumed > 0 ? $" ({assumed} assumed: see the warnings)" : "") + $"; wrote {outFile.FullName}");

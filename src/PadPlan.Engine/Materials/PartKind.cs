@@ -5,6 +5,7 @@ public enum PartKind
 {
     Resistor,
     Potentiometer,
+    TrimmerCapacitor,
     Capacitor,
     Inductor,
     FerriteBead,

@@ -4,7 +4,9 @@ namespace PadPlan.Materials;
 
 /// <summary>
 /// Tells a part's kind from its reference letters (IEEE 315 / ASME Y14.44 class letters: R, C, L, T, D or CR, Q, U,
-/// Y, F, J/P; from memory), falling back on the footprint's family and mount when the letters say nothing.
+/// Y, F, J/P; from memory) and its footprint together: a landing footprint is wire landings and nothing else is; a
+/// crystal or trimmer footprint names the part whatever its letter; letters that only say "connector" or "SPICE
+/// subcircuit" (X, J, P, W) give way to the footprint's family.
 /// </summary>
 public static class PartKinds
 {
@@ -26,17 +28,31 @@ public static class PartKinds
     [
         ("landing", PartKind.Wire), ("resistor", PartKind.Resistor), ("capacitor", PartKind.Capacitor), ("inductor", PartKind.Inductor),
         ("choke", PartKind.Inductor), ("transformer", PartKind.Transformer), ("diode", PartKind.Diode), ("transistor", PartKind.Transistor),
-        ("ic", PartKind.IntegratedCircuit), ("crystal", PartKind.Crystal), ("fuse", PartKind.Fuse),
+        ("ic", PartKind.IntegratedCircuit), ("crystal", PartKind.Crystal), ("fuse", PartKind.Fuse), ("trimmer", PartKind.Potentiometer),
+        ("generic", PartKind.IntegratedCircuit), ("led", PartKind.Diode),
     ];
 
     public static PartKind Of(Part part, Footprint? footprint)
     {
+        if (footprint?.Mount == MountStyle.Landing) return PartKind.Wire;
         var letters = new string(part.Ref.TakeWhile(char.IsAsciiLetter).ToArray());
-        if (Prefixes.TryGetValue(letters, out var kind)) return kind;
-        if (footprint is null) return PartKind.Other;
-        if (footprint.Mount == MountStyle.Landing) return PartKind.Wire;
+        var byLetters = Prefixes.TryGetValue(letters, out var kind) ? kind : PartKind.Other;
+        var byFamily = footprint is null ? PartKind.Other : FromFamily(footprint, byLetters);
+        // the footprint is the physical part: it wins where it is specific, and where the letters only name a connector or a call
+        if (byFamily is PartKind.Crystal or PartKind.Potentiometer or PartKind.TrimmerCapacitor) return byFamily;
+        if (byLetters is PartKind.Wire or PartKind.Other) return byFamily == PartKind.Wire || footprint is null && byLetters == PartKind.Wire ? PartKind.Other : byFamily;
+        return byLetters;
+    }
+
+    private static PartKind FromFamily(Footprint footprint, PartKind byLetters)
+    {
         foreach (var (word, k) in Families)
-            if (footprint.Family.StartsWith(word, StringComparison.OrdinalIgnoreCase)) return k;
+        {
+            if (!footprint.Family.StartsWith(word, StringComparison.OrdinalIgnoreCase)) continue;
+            // a trimmer footprint holds a trimmer capacitor when the footprint or the letter says capacitor
+            if (k == PartKind.Potentiometer && (byLetters == PartKind.Capacitor || footprint.Name.Contains("cap", StringComparison.OrdinalIgnoreCase))) return PartKind.TrimmerCapacitor;
+            return k;
+        }
         return PartKind.Other;
     }
 
@@ -44,18 +60,19 @@ public static class PartKinds
     public static string UnitOf(PartKind kind) => kind switch
     {
         PartKind.Resistor or PartKind.Potentiometer => "Ω",
-        PartKind.Capacitor => "F",
+        PartKind.Capacitor or PartKind.TrimmerCapacitor => "F",
         PartKind.Inductor => "H",
         _ => "",
     };
 
     /// <summary>Kinds whose values follow IEC 60062 codes and IEC 60063 series.</summary>
-    public static bool HasSeriesValue(PartKind kind) => kind is PartKind.Resistor or PartKind.Capacitor or PartKind.Inductor or PartKind.Potentiometer;
+    public static bool HasSeriesValue(PartKind kind) => kind is PartKind.Resistor or PartKind.Capacitor or PartKind.Inductor or PartKind.Potentiometer or PartKind.TrimmerCapacitor;
 
     /// <summary>A builder's word for the kind.</summary>
     public static string Name(PartKind kind) => kind switch
     {
         PartKind.FerriteBead => "ferrite bead",
+        PartKind.TrimmerCapacitor => "trimmer capacitor",
         PartKind.IntegratedCircuit => "IC",
         PartKind.Wire => "wire landing",
         _ => kind.ToString().ToLowerInvariant(),

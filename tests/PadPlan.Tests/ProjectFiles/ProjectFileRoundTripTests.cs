@@ -13,6 +13,19 @@ public sealed class ProjectFileRoundTripTests
         Assert.Equal(project, again);
     }
 
+    [Theory]
+    [InlineData("dev-mos-thermal")]      // thermal nodes with no lead, a left-off subcircuit call
+    [InlineData("dev-behavioural")]      // left-off elements with no nodes
+    [InlineData("sub-opamp-numbered")]   // a pinout, .subckt deck lines
+    public void Round_trip_keeps_the_import_record(string deck)
+    {
+        var project = PadPlan.Tests.Import.SpiceCorpus.Import(deck).Project;
+        Assert.NotEmpty(project.Imported!.Summary);
+        Assert.NotEmpty(project.Imported.Elements);
+        var again = ProjectFile.Parse(ProjectFile.ToBytes(project), "memory");
+        Assert.Equal(project, again);
+    }
+
     [Fact]
     public void Round_trip_keeps_every_kind_of_pad_keepout_and_jumper()
     {

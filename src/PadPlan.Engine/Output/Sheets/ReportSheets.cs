@@ -30,6 +30,7 @@ internal static class ReportSheets
         {
             DrawCheck(flow, check);
         }
+        if (ImportSummaryTable.For(project) is { } imported) TableBlock.Draw(flow, imported);
         if (tables.Count == 0)
         {
             flow.Heading("Tables", SheetStyle.TextHeading);
