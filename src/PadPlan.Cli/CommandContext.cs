@@ -5,8 +5,8 @@ namespace PadPlan.Cli;
 /// <summary>Where a command writes: results to Out, messages and progress to Err. Runs a command body and turns failures into exit codes.</summary>
 public sealed class CommandContext(TextWriter stdout, TextWriter stderr)
 {
-    public TextWriter Out { get; } = stdout;
-    public TextWriter Err { get; } = stderr;
+    public TextWriter Out { get; } = new VisibleTextWriter(stdout);
+    public TextWriter Err { get; } = new VisibleTextWriter(stderr);
 
     /// <summary>Runs a command body: bad input becomes exit 2 with a message naming the place; anything unexpected becomes exit 3.</summary>
     public int Guarded(Func<int> body)

@@ -19,6 +19,7 @@ public static class PlaceCommand
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
+            using var claim = ProjectFile.Claim(file.FullName);
             var input = ProjectFile.Read(file.FullName);
             var settings = new PlacerSettings(parse.GetValue(seed), Enum.Parse<Effort>(parse.GetValue(effort)!, ignoreCase: true), parse.GetValue(keep));
             var result = Placer.Place(input, settings, parse.GetValue(quiet) ? null : new StderrProgress(context.Err, settings.RunsFor(input.Parts.Count)));
