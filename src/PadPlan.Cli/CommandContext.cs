@@ -5,10 +5,12 @@ namespace PadPlan.Cli;
 /// <summary>Where a command writes: results to Out, messages and progress to Err. Runs a command body and turns failures into exit codes.</summary>
 public sealed class CommandContext(TextWriter stdout, TextWriter stderr, bool errIsTerminal = false)
 {
-    public TextWriter Out { get; } = stdout;
-    public TextWriter Err { get; } = stderr;
+    public TextWriter Out { get; } = new VisibleTextWriter(stdout);
+    public TextWriter Err { get; } = new VisibleTextWriter(stderr);
     /// <summary>Err is a terminal a person watches, so progress may redraw a line in place; otherwise only results and messages go there.</summary>
     public bool ErrIsTerminal { get; } = errIsTerminal;
+    /// <summary>Stderr itself, for the progress line alone: it writes only PadPlan's own figures and the terminal codes that redraw the line, which <see cref="Err"/> would make visible.</summary>
+    internal TextWriter ProgressLine { get; } = stderr;
 
     /// <summary>Runs a command body: bad input becomes exit 2 with a message naming the place; anything unexpected becomes exit 3.</summary>
     public int Guarded(Func<int> body)

@@ -12,6 +12,14 @@ public static class TestPaths
     /// <summary>The small hand-placed plan every area's tests may use as a known-good layout.</summary>
     public static string TinyBuffer => Path.Combine(Examples, "tiny-buffer", "tiny-buffer.padplan.json");
 
+    /// <summary>A copy of the tiny-buffer fixture in a fresh temp folder, for tests that run commands on it.</summary>
+    public static string CopyOfTinyBuffer(string name = "t.padplan.json")
+    {
+        var file = Path.Combine(NewTempDir(), name);
+        File.Copy(TinyBuffer, file);
+        return file;
+    }
+
     /// <summary>A fresh empty folder under the system temp folder.</summary>
     public static string NewTempDir()
     {

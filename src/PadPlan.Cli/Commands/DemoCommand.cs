@@ -42,7 +42,7 @@ public static class DemoCommand
     {
         var source = ExampleFolder(name);
         var netlist = Directory.EnumerateFiles(source).Where(f => f.EndsWith(".ppn", StringComparison.Ordinal) || f.EndsWith(".cir", StringComparison.Ordinal)).Order(StringComparer.Ordinal).First();
-        Directory.CreateDirectory(dir);
+        using var set = OutputSet.Begin(dir);
         var say = context.Err;
         say.WriteLine($"PadPlan demo: {name} ({Path.GetFileName(netlist)})");
 
@@ -52,7 +52,7 @@ public static class DemoCommand
         var map = File.Exists(partsFile) ? PartsMap.Read(partsFile, library) : null;
         var imported = NetlistImporter.ImportFile(netlist, new ImportOptions(library, map, null, null));
         foreach (var note in imported.Notes) say.WriteLine($"  note: {note.Describe()}");
-        var projectFile = Path.Combine(dir, $"{name}{ProjectFile.Extension}");
+        var projectFile = $"{name}{ProjectFile.Extension}";
         say.WriteLine($"1. import: {imported.Project.Parts.Count} parts, {imported.Project.Nets.Count} nets");
 
         // 2. place
@@ -63,33 +63,34 @@ public static class DemoCommand
             return ExitCodes.RuleViolations;
         }
         var project = placed.Project!;
-        ProjectFile.Write(project, projectFile);
+        set.Add(projectFile, ProjectFile.ToBytes(project));
         say.WriteLine($"2. place: board {project.Board.Width:0} x {project.Board.Height:0} mm, {project.Layout!.Pads.Count} pads");
 
         // 3. check
         var check = Checker.Check(project);
-        AtomicFile.WriteAllText(Path.Combine(dir, "check.txt"), CheckReportTables.ToText(project.Name, check, strict: false));
-        AtomicFile.WriteAllBytes(Path.Combine(dir, "check.json"), CheckReportJson.ToBytes(project.Name, check, strict: false));
+        set.AddText("check.txt", CheckReportTables.ToText(project.Name, check, strict: false));
+        set.Add("check.json", CheckReportJson.ToBytes(project.Name, check, strict: false));
         say.WriteLine($"3. check: {CheckReportTables.Summary(project.Name, check, strict: false)}");
 
         // 4. materials
         var materials = MaterialsTables.Of(project);
         var (cut, bom, order, tests) = (materials.CutList, materials.Bom, materials.BuildOrder, materials.TestPlan);
-        AtomicFile.WriteAllText(Path.Combine(dir, "cutlist.txt"), Text(cut));
-        AtomicFile.WriteAllText(Path.Combine(dir, "bom.txt"), TableText.ToText(bom));
-        AtomicFile.WriteAllText(Path.Combine(dir, "bom.csv"), TableText.ToCsv(bom));
-        AtomicFile.WriteAllText(Path.Combine(dir, "build-order.txt"), TableText.ToText(order));
-        AtomicFile.WriteAllText(Path.Combine(dir, "testplan.txt"), Text(tests));
-        AtomicFile.WriteAllText(Path.Combine(dir, "testplan.csv"), TableText.ToCsv(tests[0]));
+        set.AddText("cutlist.txt", Text(cut));
+        set.AddText("bom.txt", TableText.ToText(bom));
+        set.AddText("bom.csv", TableText.ToCsv(bom));
+        set.AddText("build-order.txt", TableText.ToText(order));
+        set.AddText("testplan.txt", Text(tests));
+        set.AddText("testplan.csv", TableText.ToCsv(tests[0]));
         say.WriteLine($"4. materials: cut list, BOM ({project.Parts.Count} parts), build order ({order.Rows.Count} steps), test plan ({tests[0].Rows.Count} tests)");
 
         // 5. sheets
         var book = SheetBook.Build(project, new SheetOptions(Paper.A4, printedDate), check, materials.All);
-        var sheets = SheetOutput.Write(context, book, dir, SheetFormats.All, dpi: 150, list: false);
-        say.WriteLine($"5. sheets: {book.Sheets.Count} pages ({sheets.Count} files)");
+        var sheets = SheetOutput.Add(set, book, SheetFormats.All, dpi: 150);
+        set.Commit();
+        say.WriteLine($"5. sheets: {book.Sheets.Count} pages ({sheets} files)");
 
         context.Out.WriteLine($"Demo finished. Files are in {dir}:");
-        context.Out.WriteLine($"  {Path.GetFileName(projectFile)}  the placed project");
+        context.Out.WriteLine($"  {projectFile}  the placed project");
         context.Out.WriteLine("  sheets.pdf         template (print at actual size, measure the 50 mm bar), assembly view, report pages");
         context.Out.WriteLine("  *.svg, *.png       the same pages one by one");
         context.Out.WriteLine("  check.txt/.json    the check report");

@@ -22,6 +22,7 @@ public static class ImportCommand
             var outFile = parse.GetValue(output)!;
             if (outFile.Exists && !parse.GetValue(force))
                 throw new UsageException($"{outFile.FullName} already exists and may hold a layout. Give another -o file, or --force to replace it.");
+            using var claim = ProjectFile.Claim(outFile.FullName);
             SharedOptions.TryBoardSize(parse, board, out var size);
             var extraDirs = (parse.GetValue(dirs) ?? []).Select(d => d.FullName).ToList();
             var library = FootprintLibrary.Load(extraDirs);

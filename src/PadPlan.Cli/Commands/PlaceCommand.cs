@@ -27,6 +27,7 @@ public static class PlaceCommand
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
+            using var claim = ProjectFile.Claim(file.FullName);
             var input = ProjectFile.Read(file.FullName);
             var keepExisting = parse.GetValue(keep);
             var replacing = input.Layout is { } old && (old.Placements.Count > 0 || old.Pads.Count > 0) && !keepExisting;
@@ -39,7 +40,7 @@ public static class PlaceCommand
                 input = input with { Board = size is { } s ? input.Board.WithSize(s.Width, s.Height) : AutoBoard(input.Board) };
             var settings = new PlacerSettings(parse.GetValue(seed), Enum.Parse<Effort>(parse.GetValue(effort)!, ignoreCase: true), keepExisting);
             var runs = settings.RunsFor(input.Parts.Count);
-            var terminal = !parse.GetValue(quiet) && !parse.GetValue(verbose) && context.ErrIsTerminal ? new TerminalProgress(context.Err, runs) : null;
+            var terminal = !parse.GetValue(quiet) && !parse.GetValue(verbose) && context.ErrIsTerminal ? new TerminalProgress(context.ProgressLine, runs) : null;
             IProgress<PlacerProgress>? progress = parse.GetValue(quiet) ? null : parse.GetValue(verbose) ? new VerboseProgress(context.Err, runs) : terminal;
             CheckedPlacement result;
             using (terminal)

@@ -58,7 +58,10 @@ internal sealed partial class DtoReader(string file, byte[] text)
     {
         if (dto is null) return Model.Board.Auto;
         var keepouts = (dto.Keepouts ?? []).Select((k, i) => Keepout(k, $"{path}.keepouts[{i}]", i)).ToValueList();
-        return Build(path, () => new Board(dto.Width, dto.Height, dto.CornerRadius ?? 0, dto.Margin ?? 2.0, dto.Thickness ?? 1.6, keepouts));
+        var margin = dto.Margin ?? 2.0;
+        if (dto.Width is { } w && dto.Height is { } h && 2 * margin >= Math.Min(w, h))
+            throw Fail($"{path}.margin", FormattableString.Invariant($"a margin of {margin} mm on each side leaves no room on a {w} x {h} mm board; it must be less than {Math.Min(w, h) / 2} mm."));
+        return Build(path, () => new Board(dto.Width, dto.Height, dto.CornerRadius ?? 0, margin, dto.Thickness ?? 1.6, keepouts));
     }
 
     private Keepout Keepout(ShapeDto k, string path, int index)

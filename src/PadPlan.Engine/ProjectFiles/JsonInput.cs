@@ -1,14 +1,18 @@
 using System.Text.Json;
 using System.Text.Json.Serialization.Metadata;
 using PadPlan.IO;
+using PadPlan.ProjectFiles.Limits;
 
 namespace PadPlan.ProjectFiles;
 
 /// <summary>Deserialises one of PadPlan's JSON files, turning a parse error into an <see cref="InputException"/> with line, column, JSON path and a plain explanation.</summary>
 internal static class JsonInput
 {
-    /// <summary>The DTO, never null; <paramref name="what"/> names the kind of file in messages ("a project", "a parts map").</summary>
-    public static T Deserialize<T>(byte[] bytes, JsonTypeInfo<T> type, string file, string what) where T : class
+    /// <summary>
+    /// The DTO, never null, with every value inside <paramref name="limits"/>; <paramref name="bytes"/> must have passed
+    /// <see cref="TextEncodingCheck.Utf8"/>. <paramref name="what"/> names the kind of file in messages ("a project").
+    /// </summary>
+    public static T Deserialize<T>(byte[] bytes, JsonTypeInfo<T> type, LimitTable limits, string file, string what) where T : class
     {
         T? dto;
         try
@@ -19,7 +23,9 @@ internal static class JsonInput
         {
             throw new InputException(file, Explain(e), (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1, e.Path, e);
         }
-        return dto ?? throw new InputException(file, $"the file holds JSON null, not {what}.", 1);
+        if (dto is null) throw new InputException(file, $"the file holds JSON null, not {what}.", 1);
+        LimitCheck.Check(bytes, limits, file);
+        return dto;
     }
 
     private static string Explain(JsonException e)

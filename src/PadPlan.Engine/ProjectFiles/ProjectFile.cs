@@ -1,6 +1,7 @@
 using System.Text.Json;
 using PadPlan.IO;
 using PadPlan.Model;
+using PadPlan.ProjectFiles.Limits;
 
 namespace PadPlan.ProjectFiles;
 
@@ -14,30 +15,15 @@ public static class ProjectFile
     /// <summary>Reads and checks a project file; throws <see cref="InputException"/> naming the place of any problem.</summary>
     public static Project Read(string path)
     {
-        byte[] bytes;
-        try
-        {
-            bytes = File.ReadAllBytes(path);
-        }
-        catch (FileNotFoundException)
-        {
-            throw new InputException(path, "no such project file. Create one with 'padplan import NETLIST -o FILE.padplan.json'.");
-        }
-        catch (DirectoryNotFoundException)
-        {
-            throw new InputException(path, "the folder of this project file does not exist.");
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new InputException(path, $"cannot read the project file: {e.Message}");
-        }
+        var bytes = InputFile.ReadAllBytes(path, InputLimits.MaxFileBytes, "project file", "Create one with 'padplan import NETLIST -o FILE.padplan.json'.");
         return Parse(bytes, path);
     }
 
     /// <summary>Parses and checks project JSON; the file name is used in messages only.</summary>
     public static Project Parse(byte[] bytes, string fileName)
     {
-        var dto = JsonInput.Deserialize(bytes, ProjectJsonContext.Default.ProjectDto, fileName, "a project");
+        bytes = TextEncodingCheck.Utf8(bytes, fileName);
+        var dto = JsonInput.Deserialize(bytes, ProjectJsonContext.Default.ProjectDto, InputLimits.Project, fileName, "a project");
         var reader = new DtoReader(fileName, bytes);
         if (dto.Format is null)
             throw reader.Fail("$.format", $"missing \"format\": a PadPlan project file starts with \"format\": \"{FormatTag}\".");
@@ -67,6 +53,19 @@ public static class ProjectFile
     {
         var json = JsonSerializer.Serialize(DtoWriter.Project(project), ProjectJsonContext.Default.ProjectDto);
         return System.Text.Encoding.UTF8.GetBytes(json.ReplaceLineEndings("\n") + "\n");
+    }
+
+    /// <summary>
+    /// Claims a project file for changing, before it is read: leftovers of killed runs removed, a read-only file refused,
+    /// and the one-writer lock taken (a second writer is refused). Dispose the claim after writing.
+    /// </summary>
+    public static WriterLock Claim(string path)
+    {
+        AtomicFile.EnsureReplaceable(path);
+        Directory.CreateDirectory(Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".");
+        var claim = WriterLock.Take(path);
+        AtomicFile.RemoveStaleTemps(Path.GetDirectoryName(claim.File) ?? ".", Path.GetFileName(claim.File));
+        return claim;
     }
 
     /// <summary>Writes a project atomically: the old file stays whole until the new one is complete.</summary>

@@ -17,13 +17,33 @@ public static class Checker
         if (project.Board.IsAuto)
             findings.Add(Findings.Error(RuleIds.BoardSize, "the board size is still automatic although the plan has a layout, so the margin cannot be checked.",
                 "Run 'padplan place' to fix the size, or give the board a width and height.", null, project.Name));
-        findings.AddRange(CompletenessCheck.Run(ctx));
-        findings.AddRange(ConnectivityCheck.Run(ctx));
-        findings.AddRange(SpacingCheck.Run(ctx));
-        findings.AddRange(LeadCheck.Run(ctx));
-        findings.AddRange(PlacementCheck.Run(ctx));
-        findings.AddRange(ElectricalCheck.Run(ctx));
+        findings.AddRange(Capped(CompletenessCheck.Run(ctx)
+            .Concat(ConnectivityCheck.Run(ctx))
+            .Concat(SpacingCheck.Run(ctx))
+            .Concat(LeadCheck.Run(ctx))
+            .Concat(PlacementCheck.Run(ctx))
+            .Concat(ElectricalCheck.Run(ctx))));
         return Report(findings, ParasiticEstimates.Run(ctx));
+    }
+
+    /// <summary>Findings of one rule and severity listed at most; the rest are counted in one closing finding.</summary>
+    public const int MaxListedPerRule = 100;
+
+    // A plan with thousands of pads piled on one spot has millions of pair findings; listing them all filled gigabytes
+    // (issue 15). The first ones show what is wrong; a count stands for the rest.
+    private static IEnumerable<Finding> Capped(IEnumerable<Finding> findings)
+    {
+        var counts = new Dictionary<(string Rule, Severity Severity), int>();
+        foreach (var finding in findings)
+        {
+            var key = (finding.RuleId, finding.Severity);
+            var n = counts.GetValueOrDefault(key) + 1;
+            counts[key] = n;
+            if (n <= MaxListedPerRule) yield return finding;
+        }
+        foreach (var ((rule, severity), n) in counts.Where(kv => kv.Value > MaxListedPerRule))
+            yield return new Finding(rule, severity, $"{n - MaxListedPerRule} more findings of this rule are not listed (of {n}).",
+                "Fix the ones listed first, then check again.", null, ValueList<string>.Empty);
     }
 
     // Worst first, then by rule and place, so that the same plan always gives the same report.

@@ -75,8 +75,8 @@ public sealed class BadProjectFileTests
     public void A_pad_of_zero_size_is_refused()
     {
         var e = Refused(Edit(n => n["layout"]!["pads"]![1]!["d"] = 0));
-        Assert.Equal("$.layout.pads[1]", e.JsonPath);
-        Assert.Contains("diameter", e.Message);
+        Assert.Equal("$.layout.pads[1].d", e.JsonPath);
+        Assert.Contains("more than 0", e.Message);
         Assert.NotNull(e.Line);
     }
 

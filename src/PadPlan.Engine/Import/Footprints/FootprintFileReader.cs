@@ -1,6 +1,7 @@
 using PadPlan.IO;
 using PadPlan.Model;
 using PadPlan.ProjectFiles;
+using PadPlan.ProjectFiles.Limits;
 
 namespace PadPlan.Import;
 
@@ -12,21 +13,14 @@ public static class FootprintFileReader
     /// <summary>The footprints of a file, each with its JSON path for later messages.</summary>
     public static IReadOnlyList<(Footprint Footprint, string Path)> Read(string file)
     {
-        byte[] bytes;
-        try
-        {
-            bytes = File.ReadAllBytes(file);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new InputException(file, $"cannot read the footprint file: {e.Message}");
-        }
+        var bytes = InputFile.ReadAllBytes(file, InputLimits.MaxFileBytes, "footprint file");
         return Parse(bytes, file);
     }
 
     public static IReadOnlyList<(Footprint Footprint, string Path)> Parse(byte[] bytes, string file)
     {
-        var dto = JsonInput.Deserialize(bytes, ProjectJsonContext.Default.FootprintFileDto, file, "footprints");
+        bytes = TextEncodingCheck.Utf8(bytes, file);
+        var dto = JsonInput.Deserialize(bytes, ProjectJsonContext.Default.FootprintFileDto, InputLimits.FootprintFile, file, "footprints");
         var reader = new DtoReader(file, bytes);
         if (dto.Format != FormatTag)
             throw reader.Fail("$.format", $"a footprint file starts with \"format\": \"{FormatTag}\" (found {(dto.Format is null ? "nothing" : $"\"{dto.Format}\"")}).");

@@ -1,6 +1,7 @@
 using PadPlan.IO;
 using PadPlan.Model;
 using PadPlan.ProjectFiles;
+using PadPlan.ProjectFiles.Limits;
 
 namespace PadPlan.Import;
 
@@ -33,21 +34,14 @@ public sealed class PartsMap
 
     public static PartsMap Read(string path, FootprintLibrary library)
     {
-        byte[] bytes;
-        try
-        {
-            bytes = System.IO.File.ReadAllBytes(path);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new InputException(path, $"cannot read the parts map: {e.Message}");
-        }
+        var bytes = InputFile.ReadAllBytes(path, InputLimits.MaxFileBytes, "parts map");
         return Parse(bytes, path, library);
     }
 
     public static PartsMap Parse(byte[] bytes, string file, FootprintLibrary library)
     {
-        var dto = JsonInput.Deserialize(bytes, ImportJsonContext.Default.PartsMapDto, file, "a parts map");
+        bytes = TextEncodingCheck.Utf8(bytes, file);
+        var dto = JsonInput.Deserialize(bytes, ImportJsonContext.Default.PartsMapDto, InputLimits.PartsMap, file, "a parts map");
         var reader = new DtoReader(file, bytes);
         if (dto.Format != FormatTag)
             throw reader.Fail("$.format", $"a parts map starts with \"format\": \"{FormatTag}\" (found {(dto.Format is null ? "nothing" : $"\"{dto.Format}\"")}).");

@@ -9,10 +9,11 @@ public sealed record ReportTable(string Title, ValueList<string> Columns, ValueL
 
     public static ReportTable Create(string title, IEnumerable<string> columns, IEnumerable<IEnumerable<string>> rows, IEnumerable<string>? notes = null)
     {
-        var cols = columns.ToValueList();
-        var body = rows.Select(r => r.ToValueList()).ToValueList();
+        // user text (part values, names) reaches the terminal and CSV through here: made visible once, for every form
+        var cols = columns.Select(c => VisibleText.Of(c)).ToValueList();
+        var body = rows.Select(r => r.Select(c => VisibleText.Of(c)).ToValueList()).ToValueList();
         foreach (var row in body)
             if (row.Count != cols.Count) throw new ArgumentException($"table '{title}': a row has {row.Count} cells for {cols.Count} columns.");
-        return new ReportTable(title, cols, body, notes?.ToValueList());
+        return new ReportTable(VisibleText.Of(title), cols, body, notes?.Select(n => VisibleText.Of(n, keepLineBreaks: true)).ToValueList());
     }
 }

@@ -25,7 +25,11 @@ public static class TableText
         sb.Append(line.TrimEnd()).Append('\n');
     }
 
-    /// <summary>CSV per RFC 4180: comma separated, CRLF line ends, fields with commas, quotes or line breaks quoted.</summary>
+    /// <summary>
+    /// CSV per RFC 4180: comma separated, CRLF line ends, fields with commas, quotes or line breaks quoted. A cell that a
+    /// spreadsheet would read as a formula (starting with =, +, -, @, TAB or CR) gets a leading single quote, as the OWASP
+    /// CSV-injection guidance advises; plain numbers ("-12", "+3.3") stay as they are.
+    /// </summary>
     public static string ToCsv(ReportTable table)
     {
         var sb = new StringBuilder();
@@ -34,6 +38,17 @@ public static class TableText
         return sb.ToString();
     }
 
-    private static string Quote(string cell) =>
-        cell.IndexOfAny([',', '"', '\r', '\n']) >= 0 ? "\"" + cell.Replace("\"", "\"\"") + "\"" : cell;
+    private static string Quote(string cell)
+    {
+        var safe = Neutralise(cell);
+        return safe.IndexOfAny([',', '"', '\r', '\n']) >= 0 ? "\"" + safe.Replace("\"", "\"\"") + "\"" : safe;
+    }
+
+    /// <summary>The cell with a leading single quote if a spreadsheet could take it for a formula (OWASP, CSV Injection).</summary>
+    public static string Neutralise(string cell) =>
+        cell.Length > 0 && cell[0] is '=' or '+' or '-' or '@' or '\t' or '\r' && !IsPlainNumber(cell) ? "'" + cell : cell;
+
+    private static bool IsPlainNumber(string cell) =>
+        double.TryParse(cell, System.Globalization.NumberStyles.AllowLeadingSign | System.Globalization.NumberStyles.AllowDecimalPoint | System.Globalization.NumberStyles.AllowExponent,
+            System.Globalization.CultureInfo.InvariantCulture, out _);
 }
