@@ -51,7 +51,8 @@ public sealed class FuzzRunner(FuzzSettings settings)
     private FuzzCase RunCase(int index, IReadOnlyList<Corpus.Seed> corpus, string dir, TimeSpan timeout)
     {
         // one generator per case, so any case can be rerun alone from the seed and its index
-        var random = new Random(HashCode.Combine(settings.Seed, index) & int.MaxValue);
+        // (not HashCode.Combine: it is seeded afresh in every process)
+        var random = new Random(unchecked(settings.Seed * 1_000_003 + index * 7919) & int.MaxValue);
         var seed = corpus[random.Next(corpus.Count)];
         var (bytes, damage) = new Mutator(random).Mutate(seed.Bytes, json: seed.Kind != "netlist");
         Directory.CreateDirectory(dir);

@@ -9,11 +9,14 @@ public static class RefusedProject
     private static readonly string Good = File.ReadAllText(TestPaths.TinyBuffer);
 
     /// <summary>The fixture with one change, written to a fresh temp folder; returns the file.</summary>
-    public static string Write(Action<JsonNode> change)
+    public static string Write(Action<JsonNode> change) => WriteText(Edited(change));
+
+    /// <summary>The fixture's JSON text with one change.</summary>
+    public static string Edited(Action<JsonNode> change)
     {
         var node = JsonNode.Parse(Good)!;
         change(node);
-        return WriteText(node.ToJsonString());
+        return node.ToJsonString();
     }
 
     public static string WriteText(string text)
