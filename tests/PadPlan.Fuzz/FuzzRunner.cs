@@ -43,7 +43,7 @@ public sealed class FuzzRunner(FuzzSettings settings)
         var fixture = Path.Combine(work, "calibration.padplan.json");
         File.Copy(Path.Combine(Corpus.Examples, "tiny-buffer", "tiny-buffer.padplan.json"), fixture);
         var clock = Stopwatch.StartNew();
-        PadPlanCli.Run(["place", fixture, "--effort", "quick", "-q"], TextWriter.Null, TextWriter.Null);
+        PadPlanCli.Run(["place", fixture, "--force", "--effort", "quick", "-q"], TextWriter.Null, TextWriter.Null);
         var reference = clock.Elapsed;
         return reference * 10 > settings.CaseTimeout ? reference * 10 : settings.CaseTimeout;
     }
@@ -116,7 +116,7 @@ public sealed class FuzzRunner(FuzzSettings settings)
                 File.WriteAllBytes(project, bytes);
                 string[] args = random.Next(10) switch
                 {
-                    0 or 1 => ["place", project, "--effort", "quick", "--seed", random.Next(1, 100).ToString(System.Globalization.CultureInfo.InvariantCulture), "-q"],
+                    0 or 1 => ["place", project, "--force", "--effort", "quick", "--seed", random.Next(1, 100).ToString(System.Globalization.CultureInfo.InvariantCulture), "-q"],
                     2 => ["sheets", project, "-o", Path.Combine(dir, "sheets"), "--formats", "svg", "--date", "2025-01-01"],
                     3 => ["bom", project, "--csv", Path.Combine(dir, "bom.csv")],
                     4 => ["cutlist", project],

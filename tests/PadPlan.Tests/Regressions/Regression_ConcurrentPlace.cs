@@ -13,7 +13,7 @@ public sealed class Regression_ConcurrentPlace
         var runs = Enumerable.Range(0, 2).Select(i => Task.Run(() =>
         {
             start.SignalAndWait();
-            return CliRunner.Run("place", file, "--effort", "normal", "--seed", $"{i + 1}", "-q");
+            return CliRunner.Run("place", file, "--force", "--effort", "normal", "--seed", $"{i + 1}", "-q");
         })).ToArray();
         var results = await Task.WhenAll(runs);
         var codes = results.Select(r => r.ExitCode).Order().ToArray();

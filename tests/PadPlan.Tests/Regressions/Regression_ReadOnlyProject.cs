@@ -13,7 +13,7 @@ public sealed class Regression_ReadOnlyProject
         var mode = UnixFileMode.UserRead | UnixFileMode.GroupRead | UnixFileMode.OtherRead;
         if (!OperatingSystem.IsWindows()) File.SetUnixFileMode(file, mode);
         else File.SetAttributes(file, FileAttributes.ReadOnly);
-        var result = CliRunner.Run("place", file, "--effort", "quick", "-q");
+        var result = CliRunner.Run("place", file, "--force", "--effort", "quick", "-q");
         Assert.Equal(2, result.ExitCode);
         Assert.Contains("t.padplan.json", result.Err, StringComparison.Ordinal);
         Assert.Contains("read-only", result.Err, StringComparison.Ordinal);

@@ -22,7 +22,7 @@ public sealed class Regression_StaleTempFiles
         var live = Path.Combine(dir, $".t.padplan.json.{Environment.ProcessId}.{Guid.NewGuid():N}.tmp");
         var other = Path.Combine(dir, "notes.tmp");
         foreach (var f in new[] { stale, live, other }) File.WriteAllText(f, "half");
-        var result = CliRunner.Run("place", file, "--effort", "quick", "-q");
+        var result = CliRunner.Run("place", file, "--force", "--effort", "quick", "-q");
         Assert.True(result.ExitCode is 0 or 1, result.Err);
         Assert.False(File.Exists(stale));
         Assert.True(File.Exists(live));
