@@ -14,28 +14,29 @@ public class AssemblySceneTests(ITestOutputHelper output)
     [MemberData(nameof(Examples))]
     public void Example_views_have_no_label_problems_and_show_every_lead_and_mark(string name)
     {
-        var project = ExampleProjects.Placed(name);
-        var plan = AssemblySheet.Choose(project, SheetFixtures.Options());
-        var problems = SceneAudit.Problems(plan.Scene);
-        foreach (var p in problems.Take(40)) output.WriteLine(p);
-        output.WriteLine($"scale {plan.Scale}, {plan.Tiles.Tiles.Count} page(s), {plan.Scene.Labels.Count} labels, unresolved {plan.Scene.Unresolved}");
-        Assert.Empty(problems);
-        AssertEveryLeadDrawnAndEveryPartMarked(project, plan.Scene);
+        Audit(ExampleProjects.Placed(name));
     }
 
     [Fact]
     public void A_dense_200_part_board_gets_clear_labels_at_a_larger_scale()
     {
         var project = SyntheticBoard.Build(200);
+        var plan = Audit(project);
+        // every tile of the view is a page of the book
+        var book = SheetBook.Build(project, SheetFixtures.Options(), null, []);
+        Assert.Equal(plan.Tiles.Tiles.Count, book.Sheets.Count(s => s.Kind == SheetKind.Assembly));
+    }
+
+    /// <summary>Chooses the view, prints what the audit finds and asserts it finds nothing; then checks leads and marks.</summary>
+    private AssemblySheet.Plan Audit(Project project)
+    {
         var plan = AssemblySheet.Choose(project, SheetFixtures.Options());
         var problems = SceneAudit.Problems(plan.Scene);
         foreach (var p in problems.Take(40)) output.WriteLine(p);
         output.WriteLine($"scale {plan.Scale}, {plan.Tiles.Tiles.Count} page(s), {plan.Scene.Labels.Count} labels, unresolved {plan.Scene.Unresolved}");
         Assert.Empty(problems);
         AssertEveryLeadDrawnAndEveryPartMarked(project, plan.Scene);
-        // every tile of the view is a page of the book
-        var book = SheetBook.Build(project, SheetFixtures.Options(), null, []);
-        Assert.Equal(plan.Tiles.Tiles.Count, book.Sheets.Count(s => s.Kind == SheetKind.Assembly));
+        return plan;
     }
 
     /// <summary>A drawn lead from exit to landing for every lead the layout lands; a pin name or mark on every polarised or multi-pin part.</summary>
