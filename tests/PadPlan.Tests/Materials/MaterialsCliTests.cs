@@ -70,7 +70,7 @@ public sealed class MaterialsCliTests
         Assert.Contains("Bill of materials", r.Out);
         Assert.Contains("Build order", r.Out);
         Assert.StartsWith("Qty,Part,Value,Code,Series,Footprint,References\r\n", File.ReadAllText(csv));
-        Assert.StartsWith("Step,Do,What,Where,Note\r\n", File.ReadAllText(Path.Combine(dir, "parts-build-order.csv")));
+        Assert.StartsWith("Step,Do,What,Where,Note,Done\r\n", File.ReadAllText(Path.Combine(dir, "parts-build-order.csv")));
         var plain = CliRunner.Run("bom", TestPaths.TinyBuffer);
         Assert.DoesNotContain("Build order", plain.Out);
     }

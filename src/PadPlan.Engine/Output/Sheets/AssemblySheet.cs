@@ -164,7 +164,14 @@ internal static class AssemblySheet
         page.Poly(points, false, palette.StrokeOf(from.Net, 0.7));
     }
 
-    private static int LegendEntryCount(Project project) => 9 + new NetPalette(project).Nets.Count;
+    /// <summary>Symbol entries the legend can hold (the five always shown and up to three marks).</summary>
+    private const int SymbolEntries = 8;
+    /// <summary>Most nets the legend lists one by one; beyond that it says where the net names are instead.</summary>
+    private const int MaxLegendNets = 28;
+
+    private static int LegendEntryCount(Project project) => SymbolEntries + NetsListed(new NetPalette(project));
+
+    private static int NetsListed(NetPalette palette) => palette.Nets.Count <= MaxLegendNets ? palette.Nets.Count : 1;
 
     /// <summary>Every symbol the view can show, then each net with its colour, line pattern and voltage (estimates marked as such).</summary>
     private static void DrawLegend(PageBuilder page, Box area, Project project, BoardScene scene, NetPalette palette)
@@ -184,7 +191,9 @@ internal static class AssemblySheet
         if (kinds.Contains(MarkKind.Band)) entries.Add((p => { page.Rect(Box.Around(p, 7, 3), SheetStyle.Normal, BodyFill); page.Rect(Box.Around(p + new Point(2, 0), 1.2, 3), null, Ink.Black); }, "Band: the cathode (K) end"));
         if (kinds.Contains(MarkKind.Notch) || kinds.Contains(MarkKind.Dot)) entries.Add((p => { page.Rect(Box.Around(p, 7, 3), SheetStyle.Normal, BodyFill); page.Circle(p + new Point(-2.2, 0.5), 0.4, null, Ink.Black); }, "Notch or dot: the pin 1 end"));
         if (kinds.Contains(MarkKind.Winding)) entries.Add((p => page.Circle(p, 0.45, null, Ink.Black), "Dot: where a winding starts"));
-        foreach (var net in palette.Nets)
+        if (NetsListed(palette) < palette.Nets.Count)
+            entries.Add((p => page.Circle(p + new Point(2.4, 0), 1.3, SheetStyle.Thin, SheetStyle.Shade), $"{palette.Nets.Count} nets: each pad shows its net name"));
+        foreach (var net in NetsListed(palette) < palette.Nets.Count ? [] : palette.Nets)
         {
             var name = net;
             var facts = project.FindNet(net);

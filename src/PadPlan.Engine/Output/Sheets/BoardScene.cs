@@ -130,7 +130,7 @@ public sealed record BoardScene(
             var inset = body.Inflate(-0.2) is var b && b.Width > w && b.Height > h ? new Box(b.Left + w / 2, b.Top + h / 2, b.Right - w / 2, b.Bottom - h / 2) : body;
             IReadOnlyList<Box> preferred = [Box.Around(inset.Nearest(lead.Exit), w, h), Box.Around(lead.Exit, w, h)];
             var placed = placer.Place(new LabelPlacer.Request(lead.Ref, LabelTarget.Lead, lead.Name, exit, w, h, preferred, LeaderFrom: LabelPlacer.FirstLeaderRing + 2, AlsoOwns: lead.Pad is null ? null : [lead.Pad]));
-            labels.Add(new SceneLabel(LabelRole.PinName, LabelTarget.Lead, lead.Name, text, null, placed.Box));
+            labels.Add(new SceneLabel(LabelRole.PinName, LabelTarget.Lead, lead.Name, text, null, placed.Box, placed.LeaderFrom, placed.LeaderTo));
         }
         var over = pads.ToDictionary(p => p.Id, p => (IReadOnlyCollection<string>)parts.Where(part => Geometry2D.Inside(p.Box.Center, part.Outline)).Select(part => part.Ref).ToList());
         foreach (var pad in pads)

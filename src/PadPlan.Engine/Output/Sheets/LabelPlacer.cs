@@ -32,7 +32,7 @@ internal sealed class LabelPlacer(Box bounds)
 
     private readonly List<(Zone Zone, string? Owner, bool Hard)> _obstacles = [];
     private readonly Dictionary<(int, int), List<int>> _obstacleGrid = [];
-    private readonly Dictionary<LabelTarget, List<(string Id, Zone Zone)>> _targets = [];
+    private readonly Dictionary<(LabelTarget, int, int), List<(string Id, Zone Zone)>> _targets = [];
 
     public int Unresolved { get; private set; }
 
@@ -53,8 +53,11 @@ internal sealed class LabelPlacer(Box bounds)
     /// <summary>An object labels of its kind must stay nearer to than to any other.</summary>
     public void Target(LabelTarget kind, string id, Zone zone)
     {
-        if (!_targets.TryGetValue(kind, out var list)) _targets[kind] = list = [];
-        list.Add((id, zone));
+        foreach (var (x, y) in Cells(zone.Bounds))
+        {
+            if (!_targets.TryGetValue((kind, x, y), out var list)) _targets[(kind, x, y)] = list = [];
+            list.Add((id, zone));
+        }
     }
 
     /// <summary>One label to place: size, what it belongs to, and preferred boxes tried before the rings (e.g. inside a body).</summary>
@@ -130,10 +133,13 @@ internal sealed class LabelPlacer(Box bounds)
     /// <summary>True when the box is nearer some other object of the request's kind than its own.</summary>
     private bool NearerToAnother(Request r, Box box)
     {
-        if (!_targets.TryGetValue(r.Kind, out var list)) return false;
         var own = r.Object.DistanceTo(box);
-        foreach (var (id, zone) in list)
-            if (id != r.TargetId && zone.Bounds.DistanceTo(box) < own && zone.DistanceTo(box) < own - 1e-6) return true;
+        foreach (var (x, y) in Cells(box.Inflate(own)))
+        {
+            if (!_targets.TryGetValue((r.Kind, x, y), out var list)) continue;
+            foreach (var (id, zone) in list)
+                if (id != r.TargetId && zone.Bounds.DistanceTo(box) < own && zone.DistanceTo(box) < own - 1e-6) return true;
+        }
         return false;
     }
 

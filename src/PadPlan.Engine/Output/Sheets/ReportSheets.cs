@@ -7,7 +7,7 @@ using PadPlan.Output.Drawing;
 
 namespace PadPlan.Output.Sheets;
 
-/// <summary>The report pages: cautions, the checker's summary and findings, then each table (cut list, BOM, build order, test plan) as given.</summary>
+/// <summary>The report pages: cautions, the checker's summary and findings, the lead table, then each table (cut list, BOM, build order, test plan) as given.</summary>
 internal static class ReportSheets
 {
     public static IReadOnlyList<SheetDraft> Build(Project project, SheetOptions options, CheckReport? check, IReadOnlyList<ReportTable> tables)
@@ -31,6 +31,7 @@ internal static class ReportSheets
             DrawCheck(flow, check);
         }
         if (ImportSummaryTable.For(project) is { } imported) TableBlock.Draw(flow, imported);
+        TableBlock.Draw(flow, LeadTable.For(project));
         if (tables.Count == 0)
         {
             flow.Heading("Tables", SheetStyle.TextHeading);

@@ -84,7 +84,12 @@ internal static class TemplateSheet
         DrawSizeFigures(page, boardBox, project.Board);
 
         var placer = new LabelPlacer(boardBox.Inflate(-0.3));
-        foreach (var island in layout.Islands()) placer.Block(view.ToPage(IslandBox(island)).Inflate(0.3));
+        foreach (var island in layout.Islands())
+        {
+            var zone = IslandZone(island, view);
+            placer.Obstacle(new BoxZone(zone.Bounds.Inflate(0.3)), island.Id);
+            placer.Target(LabelTarget.Pad, island.Id, zone);
+        }
         foreach (var keepout in project.Board.Keepouts) placer.Block(view.ToPage(Marks.BoundsOf(keepout)));
         foreach (var landing in GroundLandings(layout)) placer.Block(Box.Around(view.ToPage(landing), Marks.GroundSize, Marks.GroundSize).Inflate(0.2));
         foreach (var (_, footprint, placement) in PlacedParts(project)) placer.Block(view.ToPage(Marks.BoundsOf(Marks.BodyOf(footprint, placement))));
@@ -111,8 +116,10 @@ internal static class TemplateSheet
         {
             var island = pad.Islands()[0];
             var (w, h) = Label.Size(pad.Id, IdSize, FontWeight.Bold);
-            var box = placer.Place(LabelPlacer.Around(view.ToPage(IslandBox(island)), w, h, 0.3));
-            Label.Draw(page, box, pad.Id, IdSize, FontWeight.Bold);
+            // the same rules as on the assembly view: clear of everything else, nearer its own pad than any other, else on a leader
+            var placed = placer.Place(new LabelPlacer.Request(island.Id, LabelTarget.Pad, island.Id, IslandZone(island, view), w, h));
+            if (placed.LeaderFrom is { } a && placed.LeaderTo is { } b) page.Line(a, b, SheetStyle.Hair);
+            Label.Draw(page, placed.Box, pad.Id, IdSize, FontWeight.Bold);
         }
         foreach (var strip in layout.Pads.OfType<StripPad>()) LabelSegments(page, strip, view, placer);
         LabelKeepouts(page, project, view, placer);
@@ -123,6 +130,12 @@ internal static class TemplateSheet
         layout.Placements.SelectMany(p => p.Leads).Where(l => l.OnPlane).Select(l => l.At);
 
     internal static Box IslandBox(Island island) => Box.Around(island.Center, island.Width, island.Height);
+
+    private static Zone IslandZone(Island island, BoardView view)
+    {
+        var box = view.ToPage(IslandBox(island));
+        return island.Shape == IslandShape.Round ? new DiscZone(box.Center, box.Width / 2) : new BoxZone(box);
+    }
 
     private static void CentreMark(PageBuilder page, Island island, BoardView view)
     {
@@ -157,11 +170,12 @@ internal static class TemplateSheet
         {
             var box = view.ToPage(IslandBox(island));
             var (w, h) = Label.Size(island.Id, SegmentIdSize, upward: !strip.Vertical);
-            var gap = ScoreOverhang + 0.2;
-            IReadOnlyList<Box> candidates = strip.Vertical
-                ? [Box.Of(box.Right + gap, box.Center.Y - h / 2, w, h), Box.Of(box.Left - gap - w, box.Center.Y - h / 2, w, h)]
-                : [Box.Of(box.Center.X - w / 2, box.Bottom + gap, w, h), Box.Of(box.Center.X - w / 2, box.Top - gap - h, w, h)];
-            Label.Draw(page, placer.Place(candidates), island.Id, SegmentIdSize, upward: !strip.Vertical);
+            // inside its own segment where it fits (turned across a horizontal strip), else beside it on a leader
+            var inside = Box.Around(box.Center, w, h);
+            var placed = placer.Place(new LabelPlacer.Request(island.Id, LabelTarget.Pad, island.Id, new BoxZone(box), w, h,
+                box.Inflate(-0.1).Contains(inside) ? [inside] : [], LeaderFrom: 0));
+            if (placed.LeaderFrom is { } a && placed.LeaderTo is { } b) page.Line(a, b, SheetStyle.Hair);
+            Label.Draw(page, placed.Box, island.Id, SegmentIdSize, upward: !strip.Vertical);
         }
         var (sw, sh) = Label.Size(strip.Id, IdSize, FontWeight.Bold);
         IReadOnlyList<Box> ends = strip.Vertical

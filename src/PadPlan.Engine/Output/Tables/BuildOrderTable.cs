@@ -22,7 +22,8 @@ public static class BuildOrderTable
         var unplaced = project.Parts.Where(p => project.Layout?.Placements.All(x => x.Ref != p.Ref) ?? true).Select(p => p.Ref).ToList();
         if (unplaced.Count > 0) notes.Insert(0, $"Not placed, so not in these steps: {string.Join(", ", unplaced)}.");
         if (Cautions.HighVoltageWarning(project) is { } hv) notes.Add("Caution: " + hv);
-        return ReportTable.Create("Build order", ["Step", "Do", "What", "Where", "Note"],
-            BuildOrder.Steps(project).Select(s => new[] { s.Number.ToString(), s.Action, s.What, s.Where, s.Note }), notes);
+        // "Done" is left empty: a tick box on the printed sheet, a column to fill in on the text and CSV forms
+        return ReportTable.Create("Build order", ["Step", "Do", "What", "Where", "Note", "Done"],
+            BuildOrder.Steps(project).Select(s => new[] { s.Number.ToString(), s.Action, s.What, s.Where, s.Note, "" }), notes);
     }
 }

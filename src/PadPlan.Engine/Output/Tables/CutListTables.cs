@@ -14,13 +14,13 @@ public static class CutListTables
     public static ReportTable Rounds(CutList list) => ReportTable.Create(
         "Round pads to punch",
         ["Punch (mm)", "Board (mm)", "Count", "Pads"],
-        list.Rounds.Select(g => new[] { Mm.Of(g.Diameter), Mm.Of(g.Thickness), g.Count.ToString(), string.Join(" ", g.Pads) }),
+        list.Rounds.Select(g => new[] { Mm.Of(g.Diameter), Mm.Of(g.Thickness), g.Count.ToString(), string.Join(" ", g.Pads.Order(NaturalOrder.Comparer)) }),
         [$"{list.Rounds.Sum(g => g.Count)} round pads in all. Punch each disc from a punching strip (see the pieces below), copper side up."]);
 
     public static ReportTable Pieces(CutList list) => ReportTable.Create(
         "Rectangles and strips to cut",
         ["Piece", "Kind", "Board (mm)", "Length x width (mm)", "Cuts", "Gives"],
-        list.AllPieces.Select(p => new[] { p.Id, KindName(p.Kind), Mm.Of(p.Thickness), Mm.Size(p.Width, p.Height), Cuts(p), string.Join(" ", p.Pads) }),
+        list.AllPieces.Select(p => new[] { p.Id, KindName(p.Kind), Mm.Of(p.Thickness), Mm.Size(p.Width, p.Height), Cuts(p), string.Join(" ", p.Pads.Order(NaturalOrder.Comparer)) }),
         [
             "Positions are millimetres from the start end of the piece (the left end, or the top end of a vertical strip on the board).",
             $"Copper-clad needed: {Mm.Area(list.StockAreaNeeded)} before kerf, {Mm.Area(list.StockAreaWithKerf)} at most with a {Mm.Of(list.Plan.Kerf)} mm kerf; pad copper on the board: {Mm.Area(list.PadCopperArea)}.",
