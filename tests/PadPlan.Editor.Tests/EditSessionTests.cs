@@ -154,4 +154,21 @@ public sealed class EditSessionTests : IDisposable
         Assert.Equal(session.Current, ProjectFile.Read(Path.Combine(Folder, "tiny-buffer-2.padplan.json")));
         Assert.False(File.Exists(Recovery));
     }
+
+    [Fact]
+    public void Save_refuses_while_another_padplan_changes_the_file_and_leaves_it_as_it_was()
+    {
+        var session = EditSession.Open(ProjectPath);
+        session.Apply(new EditRequest { Kind = "turn-part", Ref = "C1" });
+        var before = File.ReadAllBytes(ProjectPath);
+        using (PadPlan.IO.WriterLock.Take(ProjectPath))
+        {
+            var outcome = session.Save();
+            Assert.False(outcome.Saved);
+            Assert.Contains("is being changed by another padplan", outcome.Message, StringComparison.Ordinal);
+            Assert.Equal(before, File.ReadAllBytes(ProjectPath));
+        }
+        Assert.True(session.Save().Saved); // the same save goes through once the other writer is done
+        Assert.Equal(session.Current, ProjectFile.Read(ProjectPath));
+    }
 }

@@ -98,7 +98,7 @@ public sealed class EditSession
             if (onDisk is null || !onDisk.AsSpan().SequenceEqual(_diskHash))
                 return new SaveOutcome(false, FileName,
                     $"{FileName} was changed on disk after it was opened here, so saving would lose that change. Keep a copy instead (\"keep as copy\"), then compare the two.");
-            WriteTo(Path);
+            if (Refusal(Path) is { } refused) return refused;
             return new SaveOutcome(true, FileName, $"saved {FileName}");
         }
     }
@@ -110,17 +110,31 @@ public sealed class EditSession
         {
             var copy = FreeCopyPath(Path);
             var oldRecovery = RecoveryPath;
-            WriteTo(copy);
+            if (Refusal(copy) is { } refused) return refused;
             if (File.Exists(oldRecovery)) File.Delete(oldRecovery);
             Path = copy;
             return new SaveOutcome(true, FileName, $"kept the plan as {FileName} beside the project; this page now edits that file");
         }
     }
 
+    /// <summary>Writes the plan to the file, or says why not: the same claim as every other writer (a read-only file, or another padplan changing it, is refused).</summary>
+    private SaveOutcome? Refusal(string path)
+    {
+        try
+        {
+            WriteTo(path);
+            return null;
+        }
+        catch (InputException e)
+        {
+            return new SaveOutcome(false, FileName, e.Message);
+        }
+    }
+
     private void WriteTo(string path)
     {
         var bytes = ProjectFile.ToBytes(Current);
-        AtomicFile.WriteAllBytes(path, bytes);
+        using (ProjectFile.Claim(path)) AtomicFile.WriteAllBytes(path, bytes);
         _diskHash = SHA256.HashData(bytes);
         _saved = Current;
         Revision++;
