@@ -321,6 +321,7 @@ internal static class TemplateSheet
             (p => Marks.Ground(page, p, Marks.GroundSize, SheetStyle.Fine), "Ground landing: solder the lead to the plane"),
             (p => { var b = Box.Around(p, 4.4, 2.6); foreach (var (a, c) in Hatch.Rect(b, 0.8)) page.Line(a, c, SheetStyle.FaintLine); page.Rect(b, Stroke.Dashed(SheetStyle.Mid, 0.25, 1.2, 0.6)); }, "Keep-out: no pad, part or ground lead"),
             (p => page.Rect(Box.Around(p, 4.4, 2.2), SheetStyle.FaintLine), "Faint: part bodies, for orientation only"),
+            (p => page.Line(p + new Point(-2.2, 0.9), p + new Point(1.2, -0.6), SheetStyle.Hair), "Thin line from an id: the id names the pad or segment at its far end"),
         };
         if (tiled) entries.Add((p => { page.Circle(p, 1.3, SheetStyle.Fine); page.Cross(p, 2.0, SheetStyle.Fine); }, "Alignment: lay sheets so the marks meet"));
         const double rowHeight = 3.5;
