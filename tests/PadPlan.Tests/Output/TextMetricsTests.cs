@@ -6,7 +6,7 @@ namespace PadPlan.Tests.Output;
 public sealed class TextMetricsTests
 {
     [Theory]
-    [InlineData("2N3904 general purpose NPN transistor in TO-92", 20)]
+    [InlineData("QN-41 general purpose NPN transistor in TO-92", 20)]
     [InlineData("100n", 20)]
     [InlineData("ABCDEFGHIJKLMNOPQRSTUVWXYZ", 5)]
     public void Fit_returns_text_no_wider_than_asked_ending_in_an_ellipsis_when_cut(string text, double width)
