@@ -154,8 +154,8 @@ internal static class CutPlanDrawing
         }
     }
 
-    // The id inside its piece: across it if there is room, else along a tall narrow piece, shortened with an ellipsis
-    // to the piece's length; a white ground under it keeps it readable over disc outlines. Null when even the smallest
+    // The id inside its piece: across it if there is room, else along a tall narrow piece, at a smaller size if the whole id
+    // then fits, else shortened with an ellipsis to the piece's length; a white ground under it keeps it readable over disc outlines. Null when even the smallest
     // readable size does not fit inside the piece.
     private static DrawnPiece? PieceLabel(PageBuilder page, string id, Box box)
     {
@@ -163,7 +163,10 @@ internal static class CutPlanDrawing
         var upright = box.Height > box.Width * 1.5;
         var across = upright ? box.Width : box.Height;
         var along = (upright ? box.Height : box.Width) - 2 * inset;
+        // a smaller size, down to the smallest readable one, if the whole id then fits; else an ellipsis at full size
         var size = Math.Clamp(across * 0.6, LabelMin, LabelMax);
+        if (TextMetrics.Width(id, LabelMin) <= along)
+            while (size > LabelMin && TextMetrics.Width(id, size) > along) size = Math.Max(LabelMin, size - 0.1);
         var fitted = TextMetrics.Fit(id, size, along);
         var width = TextMetrics.Width(fitted, size);
         var high = size * TextMetrics.CapHeight;
