@@ -84,7 +84,7 @@ public static class DemoCommand
         say.WriteLine($"4. materials: cut list, BOM ({project.Parts.Count} parts), build order ({order.Rows.Count} steps), test plan ({tests[0].Rows.Count} tests)");
 
         // 5. sheets
-        var book = SheetBook.Build(project, new SheetOptions(Paper.A4, printedDate), check, materials.All);
+        var book = SheetBook.Build(project, new SheetOptions(Paper.A4, printedDate), check, materials.All, materials.Cutting);
         var sheets = SheetOutput.Add(set, book, SheetFormats.All, dpi: 150);
         set.Commit();
         say.WriteLine($"5. sheets: {book.Sheets.Count} pages ({sheets} files)");

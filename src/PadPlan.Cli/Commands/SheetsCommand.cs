@@ -36,7 +36,8 @@ public static class SheetsCommand
             var plan = ProjectFile.Read(file.FullName);
             if (SheetBook.Problem(plan) is { } problem) throw new InputException(file.FullName, problem);
             var check = Checker.Check(plan);
-            var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate), check, MaterialsTables.Of(plan).All);
+            var materials = MaterialsTables.Of(plan);
+            var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate), check, materials.All, materials.Cutting);
             SheetOutput.Write(context, book, parse.GetValue(output)!.FullName, chosenFormats, resolution);
             context.Err.WriteLine($"{book.Sheets.Count} sheet(s) on {chosenPaper.Name}, dated {printedDate:yyyy-MM-dd}. Print the template at actual size and measure its check bar before cutting.");
             return ExitCodes.Success;

@@ -9,6 +9,9 @@ public sealed record CuttingPlan(ValueList<StockPiece> Stock, ValueList<PlacedPi
 
     public IEnumerable<PlacedPiece> On(StockPiece stock) => Placed.Where(p => p.StockId == stock.Id);
 
+    /// <summary>The straight cuts that free every piece on one stock piece, numbered in the order to make them (<see cref="CutOrder"/>).</summary>
+    public ValueList<StockCut> CutsOn(StockPiece stock) => CutOrder.On(this, stock);
+
     /// <summary>Stock pieces that have at least one piece cut from them.</summary>
     public IEnumerable<StockPiece> Used => Stock.Where(s => On(s).Any());
 

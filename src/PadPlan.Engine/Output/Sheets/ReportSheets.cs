@@ -7,10 +7,10 @@ using PadPlan.Output.Drawing;
 
 namespace PadPlan.Output.Sheets;
 
-/// <summary>The report pages: cautions, the checker's summary and findings, the lead table, then each table (cut list, BOM, build order, test plan) as given.</summary>
+/// <summary>The report pages: cautions, the checker's summary and findings, the lead table, then each table (cut list, BOM, build order, test plan) as given, with the cutting plan drawn on its stock right after its table.</summary>
 internal static class ReportSheets
 {
-    public static IReadOnlyList<SheetDraft> Build(Project project, SheetOptions options, CheckReport? check, IReadOnlyList<ReportTable> tables)
+    public static IReadOnlyList<SheetDraft> Build(Project project, SheetOptions options, CheckReport? check, IReadOnlyList<ReportTable> tables, Materials.Cutting.CutList? cutting = null)
     {
         var frame = new PageFrame(options.Paper, false);
         var flow = new ReportFlow(frame);
@@ -37,7 +37,15 @@ internal static class ReportSheets
             flow.Heading("Tables", SheetStyle.TextHeading);
             flow.Paragraph("The cut list, parts list, build order and test plan are not included with these sheets.", SheetStyle.TextNormal);
         }
-        foreach (var table in tables) TableBlock.Draw(flow, table);
+        var drawn = false;
+        foreach (var table in tables)
+        {
+            TableBlock.Draw(flow, table);
+            if (cutting is null || drawn || table.Title != CutListTables.PlanTitle) continue;
+            CutPlanDrawing.Draw(flow, cutting);
+            drawn = true;
+        }
+        if (cutting is not null && !drawn) CutPlanDrawing.Draw(flow, cutting);
         return flow.Pages().Select(body => new SheetDraft(SheetKind.Report, frame, "Report: cautions, check, tables", body)).ToList();
     }
 

@@ -16,14 +16,14 @@ public sealed record SheetBook(string Title, DateOnly Date, ValueList<Sheet> She
         return null;
     }
 
-    /// <summary>Builds every page. The check report and tables come from the checker and the materials step; pass null / none to leave them out.</summary>
-    public static SheetBook Build(Project project, SheetOptions options, CheckReport? check, IReadOnlyList<ReportTable> tables)
+    /// <summary>Builds every page. The check report and tables come from the checker and the materials step; pass null / none to leave them out. The cut list, when given, is drawn on its stock after the cutting-plan table.</summary>
+    public static SheetBook Build(Project project, SheetOptions options, CheckReport? check, IReadOnlyList<ReportTable> tables, Materials.Cutting.CutList? cutting = null)
     {
         if (Problem(project) is { } problem) throw new ArgumentException($"Project {project.Name}: {problem}", nameof(project));
         var drafts = new List<SheetDraft>();
         drafts.AddRange(TemplateSheet.Build(project, options));
         drafts.AddRange(AssemblySheet.Build(project, options));
-        drafts.AddRange(ReportSheets.Build(project, options, check, tables));
+        drafts.AddRange(ReportSheets.Build(project, options, check, tables, cutting));
 
         var sheets = new List<Sheet>();
         var perKind = new Dictionary<SheetKind, int>();

@@ -9,6 +9,9 @@ namespace PadPlan.Output.Tables;
 /// <summary>The cut list as report tables: round pads by punch, pieces to cut with their cuts, and the cutting plan on stock.</summary>
 public static class CutListTables
 {
+    /// <summary>Title of the cutting-plan table; the report pages draw the plan on its stock right after it.</summary>
+    public const string PlanTitle = "Cutting plan (corner of each piece from the stock's corner; Turned = lies across)";
+
     public static IReadOnlyList<ReportTable> From(CutList list) => [Rounds(list), Pieces(list), Plan(list)];
 
     public static ReportTable Rounds(CutList list) => ReportTable.Create(
@@ -49,7 +52,7 @@ public static class CutListTables
                 : $"DOES NOT FIT: {p.Id} needs {Mm.Of(p.Thickness)} mm board and no stock of that thickness is given. Add one with --stock WxHx{Mm.Of(p.Thickness)}.");
         notes.Add("Every cut runs straight from edge to edge of the part being cut: start with a cut right across the stock that no piece straddles, then divide each part the same way.");
         notes.Add("Caution: " + Cautions.GlassFibre);
-        return ReportTable.Create("Cutting plan (corner of each piece from the stock's corner; Turned = lies across)",
+        return ReportTable.Create(PlanTitle,
             ["Stock", "Piece", "At x, y (mm)", "Size on stock (mm)", "Turned"], rows, notes);
     }
 
