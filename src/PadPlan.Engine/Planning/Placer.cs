@@ -35,7 +35,7 @@ public static class Placer
                 }
             }
             var placed = project with { Board = board, Layout = LayoutWriter.Write(outcome.State, shiftX, shiftY) };
-            return PlacementResult.Placed(placed, PlacementSummary.Of(placed, outcome.State, outcome.Moves, clock.Elapsed, settings, problem.AutoBoard));
+            return PlacementResult.Placed(placed, PlacementSummary.Of(placed, outcome.State, outcome.Moves, outcome.Runs, clock.Elapsed, settings, problem.AutoBoard));
         }
         catch (PlacementImpossibleException e)
         {
@@ -136,7 +136,7 @@ public static class Placer
         }
         // Find how big the board would have to be, keeping its proportions, with a quick search.
         var quick = settings with { Effort = Effort.Quick };
-        var scale = Math.Max(1.1, Math.Sqrt(problem.RawArea * PlacerLimits.AutoAreaFactor / Math.Max(1, region.Width * region.Height)));
+        var scale = Math.Max(1.1, Math.Sqrt(problem.RawArea * PlacerLimits.AutoAreaFactor(problem.Project.Parts.Count) / Math.Max(1, region.Width * region.Height)));
         RunOutcome? trial = null;
         for (var attempt = 0; attempt <= PlacerLimits.AutoGrowTries; attempt++, scale *= 1.15)
         {

@@ -43,8 +43,12 @@ internal static class PlacerLimits
     public const double SpringStartRangeCells = 2.0;
     /// <summary>The spring start spreads parts over a box of this many times the sum of body and pad areas (or the whole region, if smaller).</summary>
     public const double SpringSpreadArea = 1.8;
-    /// <summary>Gauss-Seidel sweeps of the spring solve; it converges well before this on circuits of up to a few thousand parts.</summary>
+    /// <summary>Gauss-Seidel sweeps that smooth the spring start's y noise into the slowest modes of the springs.</summary>
     public const int SpringSweeps = 200;
+    /// <summary>Conjugate-gradient iterations of the spring start's x solve at most; a chain of N parts needs about N.</summary>
+    public const int SpringIterations = 5000;
+    /// <summary>The x solve stops when the residual is this fraction of the right-hand side (both as vector lengths).</summary>
+    public const double SpringResidual = 1e-8;
     /// <summary>Weak pull of every item to the middle in the spring solve, against a spring's weight of 1: keeps parts without wires in the region.</summary>
     public const double SpringCentrePull = 0.02;
     /// <summary>Independent runs done together before the runs so far are compared; fixed, so the result never depends on the machine.</summary>
@@ -53,6 +57,10 @@ internal static class PlacerLimits
     public const double RunsAgree = 0.03;
     /// <summary>Extra temperature steps at the final temperature while rules are still broken.</summary>
     public const int CleanupSteps = 12;
+    /// <summary>Share of trial moves aimed at a net that breaks its reach (before the table is normalised; the other kinds sum to about 1.15). While no net is broken such a move is an ordinary shift.</summary>
+    public const double MendShare = 0.1;
+    /// <summary>Smallest shift (mm) of a move aimed at crowding: about a pad and its gap, enough to step past a neighbour.</summary>
+    public const double MendReachMm = 4.0;
     /// <summary>Smallest move range (mm).</summary>
     public const double MinRange = 0.5;
     /// <summary>Violation (mm per item) after annealing beyond which the legaliser does not try: such a run is not legal, and another run or a larger region is the remedy.</summary>
@@ -61,6 +69,12 @@ internal static class PlacerLimits
     public const int AutoGrowTries = 4;
     /// <summary>Growth of the automatic region per try.</summary>
     public const double AutoGrowFactor = 1.2;
-    /// <summary>Area allowance of the first automatic region over the sum of body and pad areas.</summary>
-    public const double AutoAreaFactor = 2.6;
+    /// <summary>
+    /// Area allowance of the first automatic region over the sum of body and pad areas: 2.6 up to 50 parts, rising with the
+    /// logarithm of the part count to 3.8 at 500 parts and more. Large circuits have more nets that must cross the board and need
+    /// room between parts (measured: the 1,000-part benchmark circuit froze with broken rules at 3.2, legal at 3.8; a small
+    /// board is no more compact than 2.6 allows).
+    /// </summary>
+    public static double AutoAreaFactor(int parts) =>
+        parts <= 50 ? 2.6 : parts >= 500 ? 3.8 : 2.6 + 1.2 * Math.Log(parts / 50.0) / Math.Log(10);
 }

@@ -21,7 +21,7 @@ public sealed record PlacerSettings(int Seed = 1, Effort Effort = Effort.Normal,
     /// <summary>Scale of moves per temperature relative to the VPR default of N^(4/3).</summary>
     public double MovesFactor => Effort switch
     {
-        Effort.Quick => 0.5,
+        Effort.Quick => 2.0,
         Effort.Thorough => 10.0,
         _ => 4.0,
     };

@@ -3,7 +3,7 @@ namespace PadPlan.Planning;
 /// <summary>Where annealing starts from.</summary>
 public enum StartKind
 {
-    /// <summary>Both, run by run: even runs start from the spring placement, odd runs from a scatter, and the best result is kept. The spring start gives lower cost on most boards, the scatter legalises more surely on crowded ones.</summary>
+    /// <summary>On a small circuit both, run by run: even runs start from the spring placement, odd runs from a scatter, and the best result is kept; on a larger circuit (more than <see cref="PlacerSettings.SmallCircuit"/> parts) every run starts from the spring placement, which gives lower cost there and legalises more surely.</summary>
     Mixed,
     /// <summary>An analytic global placement: parts where their nets pull them (a spring model solved for least squared wire), spread over the board in that order; annealed cool from there.</summary>
     Spring,

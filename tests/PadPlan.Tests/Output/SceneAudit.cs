@@ -8,7 +8,7 @@ namespace PadPlan.Tests.Output;
 /// Counts what is wrong with the labels of an assembly scene, from the drawn geometry alone: a label covering another
 /// label, a landing dot, a plane symbol, a polarity mark, a pad or a part outline it does not belong to; and a label
 /// (without a leader line) that lies nearer another object of its own kind than its own. A label with a leader must
-/// have the leader end on its own object. A pin name may sit on the pad its own lead lands on, and a pad's labels inside the outline of a part standing over that pad. Rules from the issue; the measure (shortest box-to-shape distance) is ours.
+/// have the leader end on its own object. A pin name may sit on the pad its own lead lands on, a pad's labels inside the outline of a part standing over that pad, and that part's name over the pad. Rules from the issue; the measure (shortest box-to-shape distance) is ours.
 /// </summary>
 public static class SceneAudit
 {
@@ -31,7 +31,8 @@ public static class SceneAudit
                 if (mark.Bounds.Overlaps(label.Box)) problems.Add($"label {Name(label)} covers the {mark.Kind} mark of {mark.Ref}");
             var ownPad = label.Target == LabelTarget.Pad ? label.TargetId : label.Target == LabelTarget.Lead ? scene.Leads.First(l => l.Name == label.TargetId).Pad : null;
             foreach (var pad in scene.Pads)
-                if (pad.Id != ownPad && pad.Zone.Overlaps(label.Box)) problems.Add($"label {Name(label)} covers pad {pad.Id}");
+                if (pad.Id != ownPad && pad.Zone.Overlaps(label.Box) && !(label.Role == LabelRole.PartName && PadUnder(scene, pad.Id, scene.Parts.First(p => p.Ref == ownRef))))
+                    problems.Add($"label {Name(label)} covers pad {pad.Id}");
             foreach (var part in scene.Parts)
                 if (part.Ref != ownRef && part.Zone.Overlaps(label.Box) && !(label.Target == LabelTarget.Pad && PadUnder(scene, label.TargetId, part))) problems.Add($"label {Name(label)} covers the outline of {part.Ref}");
             if (!scene.Board.Inflate(10).Contains(label.Box)) problems.Add($"label {Name(label)} lies off the view");

@@ -146,7 +146,9 @@ public sealed record BoardScene(
             var w = Math.Max(TextMetrics.Width(part.Ref, SheetStyle.TextNormal, FontWeight.Bold), TextMetrics.Width(value, SheetStyle.TextSmall)) + 0.4;
             var h = SheetStyle.TextNormal + (value.Length > 0 ? SheetStyle.TextSmall * 1.15 : 0);
             var inside = Box.Around(part.Zone.Bounds.Center, w, h);
-            var placed = placer.Place(new LabelPlacer.Request(part.Ref, LabelTarget.Part, part.Ref, part.Zone, w, h, part.Zone.Bounds.Contains(inside) ? [inside] : []));
+            // A part standing over another part's pad: its name may sit inside its own outline over that pad, as the outline already does.
+            var under = pads.Where(p => over[p.Id].Contains(part.Ref)).Select(p => p.Id).ToList();
+            var placed = placer.Place(new LabelPlacer.Request(part.Ref, LabelTarget.Part, part.Ref, part.Zone, w, h, part.Zone.Bounds.Contains(inside) ? [inside] : [], AlsoOwns: under.Count > 0 ? under : null));
             labels.Add(new SceneLabel(LabelRole.PartName, LabelTarget.Part, part.Ref, part.Ref, value.Length > 0 ? value : null, placed.Box, placed.LeaderFrom, placed.LeaderTo));
         }
         foreach (var pad in pads.Where(p => p.Net is not null))

@@ -61,7 +61,7 @@ internal sealed class LabelPlacer(Box bounds)
     }
 
     /// <summary>One label to place: size, what it belongs to, and preferred boxes tried before the rings (e.g. inside a body).</summary>
-    /// <remarks>AlsoOwns names more owners whose obstacles the label may cover: a pin name may sit on the pad its own lead lands on, a pad's labels inside the outline of a part standing over that pad.</remarks>
+    /// <remarks>AlsoOwns names more owners whose obstacles the label may cover: a pin name may sit on the pad its own lead lands on, a pad's labels inside the outline of a part standing over that pad, and that part's name over the pad.</remarks>
     public sealed record Request(string Owner, LabelTarget Kind, string TargetId, Zone Object, double Width, double Height, IReadOnlyList<Box>? Preferred = null, int LeaderFrom = FirstLeaderRing, IReadOnlyCollection<string>? AlsoOwns = null);
 
     /// <summary>A placed label: its box, and the leader from the box to its object when it sits in a far ring.</summary>

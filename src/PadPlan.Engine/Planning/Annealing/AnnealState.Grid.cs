@@ -7,7 +7,7 @@ internal sealed partial class AnnealState
     /// <summary>Room around the region that the grid still covers; items beyond it share the edge cells.</summary>
     private const double GridApron = 20.0;
     /// <summary>Items a cell has room for before its list must grow.</summary>
-    private const int CellRoom = 24;
+    private const int CellRoom = 64;
 
     private double _gridX0, _gridY0;
     private int _cols, _rows;

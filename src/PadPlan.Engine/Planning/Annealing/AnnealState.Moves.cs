@@ -99,6 +99,7 @@ internal sealed partial class AnnealState
             var n = _affected[k];
             _netCost[n] = _netCostNew[n];
             _netViol[n] = _netViolNew[n];
+            MarkNet(n);
             foreach (var l in _nets[n].FreeLeads) _leadIsland[l] = _leadIslandNew[l];
         }
         _unaryCost[_ta] = _uaCost;

@@ -75,6 +75,11 @@ internal sealed partial class AnnealState
         _unaryCost = new double[n]; _unaryViol = new double[n];
         _leadIsland = new int[_leads.Length];
         Array.Fill(_leadIsland, -1);
+        _broken = new int[_nets.Length];
+        _brokenAt = new int[_nets.Length];
+        Array.Fill(_brokenAt, -1);
+        _crowded = new int[n];
+        _crowdedStamp = new int[n];
         _netCostNew = new double[_nets.Length]; _netViolNew = new double[_nets.Length];
         _leadIslandNew = new int[_leads.Length];
         _netStamp = new int[_nets.Length];
@@ -131,9 +136,12 @@ internal sealed partial class AnnealState
         for (var i = 0; i < _items.Length; i++) UpdateGeometry(i);
         double cost = 0, viol = 0;
         _soft = 0;
+        _recount++;
+        _crowdedCount = 0;
         for (var n = 0; n < _nets.Length; n++)
         {
             EvalNet(n, _leadIsland, out _netCost[n], out _netViol[n]);
+            MarkNet(n);
             cost += _netCost[n];
             viol += _netViol[n];
         }
@@ -142,7 +150,14 @@ internal sealed partial class AnnealState
             EvalUnary(i, out _unaryCost[i], out _unaryViol[i]);
             cost += _unaryCost[i];
             viol += _unaryViol[i];
-            for (var j = i + 1; j < _items.Length; j++) viol += Pair(i, j);
+            for (var j = i + 1; j < _items.Length; j++)
+            {
+                var v = Pair(i, j);
+                if (v <= 0) continue;
+                viol += v;
+                MarkCrowded(i);
+                MarkCrowded(j);
+            }
         }
         Cost = cost + _soft;
         Violation = viol;

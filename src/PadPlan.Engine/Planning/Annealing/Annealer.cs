@@ -24,6 +24,7 @@ internal sealed class Annealer
         if (_parts.Length > 1) table.Add((MoveKind.SwapParts, 0.07));
         if (_pads.Length > 0) table.AddRange([(MoveKind.ShiftPad, 0.3), (MoveKind.PadToLeads, 0.1)]);
         if (_grounded.Length > 0) table.Add((MoveKind.GroundLanding, 0.1));
+        if (_parts.Length > 0 || _pads.Length > 0) table.AddRange([(MoveKind.MendReach, PlacerLimits.MendShare), (MoveKind.MendCrowding, PlacerLimits.MendShare / 2)]);
         _kinds = [.. table.Select(t => t.Item1)];
         var sum = table.Sum(t => t.Item2);
         var run = 0.0;
@@ -35,10 +36,11 @@ internal sealed class Annealer
     /// <summary>Cell size (mm) of the spring start's spread, 0 after a scatter: the annealing then starts cool and close by.</summary>
     private double _startCell;
 
-    /// <summary>Places the items as <paramref name="start"/> says; a mixed start takes the spring start on even runs and a scatter on odd ones.</summary>
+    /// <summary>Places the items as <paramref name="start"/> says; a mixed start takes the spring start on even runs and a scatter on odd ones on a small circuit, the spring start on every run of a larger one (where a scatter seldom legalises; docs/benchmarks.md).</summary>
     public void Start(StartKind start, int run)
     {
-        if (start == StartKind.Spring || (start == StartKind.Mixed && run % 2 == 0)) SpringStart();
+        var small = _s.Problem.Project.Parts.Count <= PlacerSettings.SmallCircuit;
+        if (start == StartKind.Spring || (start == StartKind.Mixed && (run % 2 == 0 || !small))) SpringStart();
         else Scatter();
     }
 
@@ -210,6 +212,15 @@ internal sealed class Annealer
         while (k < _cumulative.Length - 1 && pick >= _cumulative[k]) k++;
         kind = _kinds[k];
         var r = _s.Problem.Region;
+        if (kind is MoveKind.MendReach or MoveKind.MendCrowding)
+        {
+            if (kind == MoveKind.MendReach ? MendReach(range, r) : MendCrowding(range, r))
+            {
+                _s.Evaluate();
+                return _s.DeltaCost + _s.Penalty * _s.DeltaViolation;
+            }
+            kind = _parts.Length > 0 ? MoveKind.ShiftPart : MoveKind.ShiftPad;
+        }
         switch (kind)
         {
             case MoveKind.ShiftPart:
@@ -267,6 +278,57 @@ internal sealed class Annealer
         }
         _s.Evaluate();
         return _s.DeltaCost + _s.Penalty * _s.DeltaViolation;
+    }
+
+    /// <summary>
+    /// Opens a directed move on a net that breaks its reach: its worst lead's island moves to the middle of the exits it serves
+    /// (when it is a free pad), or the lead's part and the island's part (an IC on its strip) move toward each other until the
+    /// lead's exit is half its reach limit from the island. False when no net is broken
+    /// or the chosen items are locked; nothing is opened then.
+    /// </summary>
+    private bool MendReach(double range, Region r)
+    {
+        if (_s.BrokenNetCount == 0) return false;
+        var net = _s.BrokenNet(_rng.Next(_s.BrokenNetCount));
+        var (lead, island) = _s.WorstLead(net);
+        if (lead < 0) return false;
+        var p = _s.Problem;
+        var holder = p.Islands[island].Item;
+        var partItem = p.Leads[lead].Item;
+        var moveHolder = !p.Items[holder].Fixed && (_rng.NextDouble() < 0.5 || p.Items[partItem].Fixed);
+        if (!moveHolder && p.Items[partItem].Fixed) return false;
+        var (ix, iy, _, _) = _s.IslandBox(island);
+        if (moveHolder && !p.Items[holder].IsPart)
+        {
+            JumpNear(holder, LeadCentre(holder), range, r);
+            return true;
+        }
+        // The lead's part toward the island, or the part that carries the island (an IC on its strip) toward the lead: along
+        // the line between them, until the exit is half the lead's reach limit from the island.
+        var (ex, ey) = _s.Exit(lead);
+        var d = Math.Sqrt((ex - ix) * (ex - ix) + (ey - iy) * (ey - iy));
+        var shift = d < 1e-9 ? 0 : Math.Max(0, d - p.Leads[lead].MaxReach / 2) / d;
+        var (dx, dy) = ((ix - ex) * shift, (iy - ey) * shift);
+        if (moveHolder) JumpNear(holder, (_s.X[holder] - dx, _s.Y[holder] - dy), range, r);
+        else JumpNear(partItem, (_s.X[partItem] + dx, _s.Y[partItem] + dy), range, r);
+        return true;
+    }
+
+    /// <summary>Opens a shift of an item that broke a gap or overlap rule at the last recount, by up to the move range but at least <see cref="PlacerLimits.MendReachMm"/>; sometimes turned. False when there is none.</summary>
+    private bool MendCrowding(double range, Region r)
+    {
+        var count = _s.CrowdedCount;
+        if (count == 0) return false;
+        var i = _s.Crowded(_rng.Next(count));
+        var item = _s.Problem.Items[i];
+        if (item.Fixed) return false;
+        var reach = Math.Max(range, PlacerLimits.MendReachMm);
+        _s.Begin(i);
+        _s.X[i] = Math.Clamp(_s.X[i] + _rng.Between(-reach, reach), r.MinX, r.MaxX);
+        _s.Y[i] = Math.Clamp(_s.Y[i] + _rng.Between(-reach, reach), r.MinY, r.MaxY);
+        if (item.IsPart && _rng.NextDouble() < 0.25) _s.Rot[i] = _rng.Next(4);
+        else if (item.CanTurn && _rng.NextDouble() < 0.25) _s.Rot[i] ^= 1;
+        return true;
     }
 
     /// <summary>Moves an item to a target point, jittered by up to 2 mm (less when the move range is smaller), kept inside the region.</summary>

@@ -14,4 +14,8 @@ internal enum MoveKind
     SwapParts,
     /// <summary>Choose another ground landing for one ground lead.</summary>
     GroundLanding,
+    /// <summary>Take a net whose leads do not all reach its pads and bring its worst lead and its island together: the pad to the middle of the leads it serves, or the part beside the island (a directed move, as placers aim moves at broken constraints).</summary>
+    MendReach,
+    /// <summary>Shift an item that broke a gap or overlap rule at the last recount by at least a few millimetres: a directed move at crowding the move range has shrunk too far to clear.</summary>
+    MendCrowding,
 }

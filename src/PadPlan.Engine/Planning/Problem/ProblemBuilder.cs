@@ -119,7 +119,7 @@ internal static class ProblemBuilder
             Region = default, AutoBoard = project.Board.IsAuto, Weights = weights, Rules = rules,
         };
         var board = project.Board;
-        var region = board.IsAuto ? AutoRegion(problem, board.Margin, PlacerLimits.AutoAreaFactor) : Region.OfBoard(board.Width!.Value, board.Height!.Value, board.Margin);
+        var region = board.IsAuto ? AutoRegion(problem, board.Margin, PlacerLimits.AutoAreaFactor(project.Parts.Count)) : Region.OfBoard(board.Width!.Value, board.Height!.Value, board.Margin);
         return problem.WithRegion(region);
     }
 

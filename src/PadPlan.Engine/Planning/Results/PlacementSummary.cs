@@ -22,6 +22,7 @@ public sealed record PlacementSummary(
     double RawArea,
     double Cost,
     long Moves,
+    int Runs,
     TimeSpan Time,
     int Seed,
     Effort Effort)
@@ -36,11 +37,11 @@ public sealed record PlacementSummary(
         foreach (var line in PadsBySize) yield return "  " + line;
         yield return string.Create(c, $"leads: total {TotalLead:0.0} mm, longest {LongestLead:0.0} mm ({LongestLeadName})");
         yield return string.Create(c, $"jumpers: {Jumpers}{(Jumpers > 0 ? $", {JumperLength:0.0} mm of wire" : "")}");
-        yield return string.Create(c, $"time: {Time.TotalSeconds:0.00} s, {Moves} moves, seed {Seed}, effort {Effort.ToString().ToLowerInvariant()}");
+        yield return string.Create(c, $"time: {Time.TotalSeconds:0.00} s, {Moves} moves in {Runs} run{(Runs == 1 ? "" : "s")}, seed {Seed}, effort {Effort.ToString().ToLowerInvariant()}");
     }
 
     /// <summary>Measures a placed project.</summary>
-    internal static PlacementSummary Of(Project project, AnnealState s, long moves, TimeSpan time, PlacerSettings settings, bool boardChosen)
+    internal static PlacementSummary Of(Project project, AnnealState s, long moves, int runs, TimeSpan time, PlacerSettings settings, bool boardChosen)
     {
         var layout = project.Layout!;
         var bySize = new SortedDictionary<string, int>(StringComparer.Ordinal);
@@ -67,6 +68,6 @@ public sealed record PlacementSummary(
             figures.TotalLead, figures.LongestLead, figures.LongestLeadName, s.Problem.LeadLengthFloor,
             layout.Jumpers.Count, jumperLength,
             project.Board.Width!.Value, project.Board.Height!.Value, boardChosen,
-            extent.Width * extent.Height, s.Problem.RawArea, s.Cost, moves, time, settings.Seed, settings.Effort);
+            extent.Width * extent.Height, s.Problem.RawArea, s.Cost, moves, runs, time, settings.Seed, settings.Effort);
     }
 }
