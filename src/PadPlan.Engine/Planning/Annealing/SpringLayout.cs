@@ -3,9 +3,10 @@ namespace PadPlan.Planning;
 /// <summary>
 /// The analytic start: a quadratic (spring) placement, as the analytic VLSI placers begin. Every lead pulls its part toward
 /// each island of its net with a spring, pads being free nodes; input and output nets are anchored to the left and right
-/// edges and locked items stay put. The x positions that minimise the squared spring lengths solve a sparse symmetric
-/// positive-definite system, solved by conjugate gradients (Hestenes and Stiefel, 1952), which converges on a long chain
-/// of a thousand parts where plain relaxation sweeps do not. y has no anchors (its exact solution is one line), so y is
+/// edges, locked items stay put, and a weak pull toward netlist order positions what no anchor reaches. The x positions
+/// that minimise the squared spring lengths solve a sparse symmetric positive-definite system, solved by conjugate
+/// gradients (Hestenes and Stiefel, 1952), which converges on a long chain of a thousand parts where plain relaxation
+/// sweeps do not. y has no anchors (its exact solution is one line), so y is
 /// smoothed seeded noise with the x direction taken out: the slowest modes of the springs, as spectral layouts use.
 /// The solution bunches in the middle, so it is spread over an even grid in one of two orders, whichever leaves the
 /// springs shorter: columns by x and each column by y, or the x order laid out as a snake (column down, next column up),
@@ -30,7 +31,7 @@ internal static class SpringLayout
             x[i] = items[i].Fixed ? s.X[i] : r.CentreX + rng.Between(-1, 1);
             y[i] = items[i].Fixed ? s.Y[i] : r.CentreY + rng.Between(-1, 1);
         }
-        SolveX(items, springs, x, r.MinX, r.MaxX, r.CentreX);
+        SolveX(items, springs, x, r.MinX, r.MaxX, NetlistOrder(items, parts, springs, r.MinX, r.MaxX));
         Smooth(items, springs, y, r.CentreY);
         Decorrelate(parts, x, y);
 
@@ -115,11 +116,35 @@ internal static class SpringLayout
     }
 
     /// <summary>
-    /// Solves the x coordinates exactly (to a small residual) by conjugate gradients with a diagonal preconditioner. Each free
-    /// item's equation: (c + a + sum of weights) x_i - sum of w x_j = c middle + a anchor + sum over locked partners of w x_j,
-    /// with c the weak pull to the middle and a = 1 for items on input (left edge) or output (right edge) nets.
+    /// Where netlist order would put each item across the region: the i-th of n movable parts at (i + 1/2) / n of the width,
+    /// a pad at the mean of its parts. A builder writes a netlist roughly from input to output, and a part of the circuit
+    /// that no input or output anchors (a separate stage, a supply filter) has no position of its own in the spring solve;
+    /// the weak pull toward this order gives it one, and breaks ties inside it the way the circuit was written.
     /// </summary>
-    private static void SolveX(ProblemItem[] items, List<(int To, double W)>[] springs, double[] v, double low, double high, double middle)
+    private static double[] NetlistOrder(ProblemItem[] items, int[] parts, List<(int To, double W)>[] springs, double low, double high)
+    {
+        var target = new double[items.Length];
+        Array.Fill(target, (low + high) / 2);
+        for (var k = 0; k < parts.Length; k++) target[parts[k]] = low + (k + 0.5) / parts.Length * (high - low);
+        var isPart = new bool[items.Length];
+        foreach (var i in parts) isPart[i] = true;
+        for (var i = 0; i < items.Length; i++)
+        {
+            if (isPart[i]) continue;
+            double sum = 0, weight = 0;
+            foreach (var (to, w) in springs[i])
+                if (isPart[to]) { sum += w * target[to]; weight += w; }
+            if (weight > 0) target[i] = sum / weight;
+        }
+        return target;
+    }
+
+    /// <summary>
+    /// Solves the x coordinates exactly (to a small residual) by conjugate gradients with a diagonal preconditioner. Each free
+    /// item's equation: (c + a + sum of weights) x_i - sum of w x_j = c prior_i + a anchor + sum over locked partners of w x_j,
+    /// with c the weak pull toward netlist order and a = 1 for items on input (left edge) or output (right edge) nets.
+    /// </summary>
+    private static void SolveX(ProblemItem[] items, List<(int To, double W)>[] springs, double[] v, double low, double high, double[] prior)
     {
         var n = items.Length;
         var diag = new double[n];
@@ -127,8 +152,8 @@ internal static class SpringLayout
         for (var i = 0; i < n; i++)
         {
             if (items[i].Fixed) continue;
-            diag[i] = PlacerLimits.SpringCentrePull;
-            b[i] = PlacerLimits.SpringCentrePull * middle;
+            diag[i] = PlacerLimits.SpringOrderPull;
+            b[i] = PlacerLimits.SpringOrderPull * prior[i];
             if (items[i].Flow != 0) { diag[i] += 1; b[i] += items[i].Flow < 0 ? low : high; }
             foreach (var (to, w) in springs[i])
             {
