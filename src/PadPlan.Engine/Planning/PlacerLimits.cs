@@ -68,7 +68,7 @@ internal static class PlacerLimits
     /// <summary>Share of trial moves aimed at a net that breaks its reach (before the table is normalised; the other kinds sum to about 1.15). While no net is broken such a move is an ordinary shift.</summary>
     public const double MendShare = 0.1;
     /// <summary>Smallest shift (mm) of a move aimed at crowding: about a pad and its gap, enough to step past a neighbour.</summary>
-    public const double MendReachMm = 4.0;
+    public const double MendCrowdingShift = 4.0;
     /// <summary>Smallest move range (mm).</summary>
     public const double MinRange = 0.5;
     /// <summary>Violation (mm per item) after annealing beyond which the legaliser does not try: such a run is not legal, and another run or a larger region is the remedy.</summary>

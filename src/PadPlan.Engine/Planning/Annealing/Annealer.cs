@@ -314,7 +314,7 @@ internal sealed class Annealer
         return true;
     }
 
-    /// <summary>Opens a shift of an item that broke a gap or overlap rule at the last recount, by up to the move range but at least <see cref="PlacerLimits.MendReachMm"/>; sometimes turned. False when there is none.</summary>
+    /// <summary>Opens a shift of an item that broke a gap or overlap rule at the last recount, by up to the move range but at least <see cref="PlacerLimits.MendCrowdingShift"/>; sometimes turned. False when there is none.</summary>
     private bool MendCrowding(double range, Region r)
     {
         var count = _s.CrowdedCount;
@@ -322,7 +322,7 @@ internal sealed class Annealer
         var i = _s.Crowded(_rng.Next(count));
         var item = _s.Problem.Items[i];
         if (item.Fixed) return false;
-        var reach = Math.Max(range, PlacerLimits.MendReachMm);
+        var reach = Math.Max(range, PlacerLimits.MendCrowdingShift);
         _s.Begin(i);
         _s.X[i] = Math.Clamp(_s.X[i] + _rng.Between(-reach, reach), r.MinX, r.MaxX);
         _s.Y[i] = Math.Clamp(_s.Y[i] + _rng.Between(-reach, reach), r.MinY, r.MaxY);
