@@ -227,13 +227,7 @@ internal sealed class Annealer
             case MoveKind.ShiftPad:
             {
                 var pool = kind == MoveKind.ShiftPart ? _parts : _pads;
-                var i = pool[_rng.Next(pool.Length)];
-                _s.Begin(i);
-                _s.X[i] = Math.Clamp(_s.X[i] + _rng.Between(-range, range), r.MinX, r.MaxX);
-                _s.Y[i] = Math.Clamp(_s.Y[i] + _rng.Between(-range, range), r.MinY, r.MaxY);
-                var item = _s.Problem.Items[i];
-                if (item.IsPart && _rng.NextDouble() < 0.15) _s.Rot[i] = _rng.Next(4);
-                else if (item.CanTurn && _rng.NextDouble() < 0.2) _s.Rot[i] ^= 1;
+                Shift(pool[_rng.Next(pool.Length)], range, 0.15, 0.2, r);
                 break;
             }
             case MoveKind.TurnPart:
@@ -320,15 +314,20 @@ internal sealed class Annealer
         var count = _s.CrowdedCount;
         if (count == 0) return false;
         var i = _s.Crowded(_rng.Next(count));
+        if (_s.Problem.Items[i].Fixed) return false;
+        Shift(i, Math.Max(range, PlacerLimits.MendCrowdingShift), 0.25, 0.25, r);
+        return true;
+    }
+
+    /// <summary>Opens a move of one item by up to <paramref name="reach"/> in x and y, kept inside the region; a part is sometimes turned to any quarter, a rectangular pad sometimes a quarter.</summary>
+    private void Shift(int i, double reach, double partTurn, double padTurn, Region r)
+    {
         var item = _s.Problem.Items[i];
-        if (item.Fixed) return false;
-        var reach = Math.Max(range, PlacerLimits.MendCrowdingShift);
         _s.Begin(i);
         _s.X[i] = Math.Clamp(_s.X[i] + _rng.Between(-reach, reach), r.MinX, r.MaxX);
         _s.Y[i] = Math.Clamp(_s.Y[i] + _rng.Between(-reach, reach), r.MinY, r.MaxY);
-        if (item.IsPart && _rng.NextDouble() < 0.25) _s.Rot[i] = _rng.Next(4);
-        else if (item.CanTurn && _rng.NextDouble() < 0.25) _s.Rot[i] ^= 1;
-        return true;
+        if (item.IsPart && _rng.NextDouble() < partTurn) _s.Rot[i] = _rng.Next(4);
+        else if (item.CanTurn && _rng.NextDouble() < padTurn) _s.Rot[i] ^= 1;
     }
 
     /// <summary>Moves an item to a target point, jittered by up to 2 mm (less when the move range is smaller), kept inside the region.</summary>
