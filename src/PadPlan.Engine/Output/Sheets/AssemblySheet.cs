@@ -18,10 +18,10 @@ internal static class AssemblySheet
     internal static readonly double[] StandardScales = [5, 4, 3, 2.5, 2, 1.5, 1];
     /// <summary>Reductions for a board larger than the page (ISO 5455: 1 : 2, 1 : 5, 1 : 10, with 1 : 2.5 and 1 : 4 between).</summary>
     private static readonly double[] Reductions = [0.5, 0.4, 0.25, 0.2, 0.1];
-    private const double LegendRow = 4.2;
+    private const double LegendRow = 3.8;
     private const double LegendColumn = 46;
     /// <summary>Room round the board for labels that stand outside its edge (page mm).</summary>
-    private const double Room = 8;
+    private const double Room = 6;
     /// <summary>Gap between the drawing and the parts table (page mm).</summary>
     private const double Gutter = 3;
     /// <summary>Most parts per detail page: a board needing detail gets at most one such page per 50 parts.</summary>
@@ -165,8 +165,11 @@ internal static class AssemblySheet
         return details.ToValueList();
     }
 
+    /// <summary>"5 : 1", "5 : 2", "3 : 2", "1 : 2": whole numbers on both sides, as drawing scales are written (ISO 5455).</summary>
     internal static string ScaleText(double scale) => scale >= 1
-        ? string.Create(CultureInfo.InvariantCulture, $"{scale:0.##} : 1")
+        ? Math.Abs(scale - Math.Round(scale)) < 1e-9 ? string.Create(CultureInfo.InvariantCulture, $"{scale:0} : 1")
+            : Math.Abs(scale * 2 - Math.Round(scale * 2)) < 1e-9 ? string.Create(CultureInfo.InvariantCulture, $"{scale * 2:0} : 2")
+            : string.Create(CultureInfo.InvariantCulture, $"{scale:0.##} : 1")
         : string.Create(CultureInfo.InvariantCulture, $"1 : {1 / scale:0.##}");
 
     /// <summary>Draws the scene; on a detail page (keep given) only labels wholly inside the kept box, on the main view only labels that found a clear place.</summary>
@@ -277,7 +280,7 @@ internal static class AssemblySheet
         if (kinds.Contains(MarkKind.Band)) entries.Add((p => { page.Rect(Box.Around(p, 7, 3), SheetStyle.Normal, BodyFill); page.Rect(Box.Around(p + new Point(2, 0), 1.2, 3), null, Ink.Black); }, "Band: the cathode (K) end"));
         if (kinds.Contains(MarkKind.Notch) || kinds.Contains(MarkKind.Dot)) entries.Add((p => { page.Rect(Box.Around(p, 7, 3), SheetStyle.Normal, BodyFill); page.Circle(p + new Point(-2.2, 0.5), 0.4, null, Ink.Black); }, "Notch or dot: the pin 1 end"));
         if (kinds.Contains(MarkKind.Winding)) entries.Add((p => page.Circle(p, 0.45, null, Ink.Black), "Dot: where a winding starts"));
-        if (keyed) entries.Add((p => page.Text("12", p + new Point(0, 0.7), BoardScene.MinRefSize, TextAnchor.Middle, FontWeight.Bold, KeyInk), "Key number: see the parts table"));
+        if (keyed) entries.Add((p => page.Text(BoardScene.KeyPrefix + "12", p + new Point(0, 0.7), BoardScene.KeySize, TextAnchor.Middle, FontWeight.Bold, KeyInk), "Key number: see the parts table"));
         if (padsUnnamed) entries.Add((p => page.Circle(p + new Point(2.4, 0), 1.3, SheetStyle.Thin, Ink.White), "Pad ids: all on the template"));
         if (NetsListed(palette) < palette.Nets.Count)
             entries.Add((p => page.Circle(p + new Point(2.4, 0), 1.3, SheetStyle.Thin, SheetStyle.Shade), $"{palette.Nets.Count} nets: each pad shows its net name"));

@@ -143,7 +143,7 @@ public sealed record BoardScene(
             var text = part.Ref;
             if (placed is null)
             {
-                text = (++key).ToString(System.Globalization.CultureInfo.InvariantCulture);
+                text = KeyPrefix + (++key).ToString(System.Globalization.CultureInfo.InvariantCulture);
                 role = LabelRole.PartKey;
                 placed = PlaceName(placer, part, text, KeySize) ?? placer.Place(NameRequest(part, text, KeySize) with { LeaderMayCross = true });
             }
@@ -172,12 +172,20 @@ public sealed record BoardScene(
     public const double MinRefSize = 2.0;
     /// <summary>Em size of a key number: as small as a pin name, since it is one or two digits.</summary>
     public const double KeySize = PinSize;
+    /// <summary>Key numbers read "#3", so that they are not taken for pin numbers.</summary>
+    public const string KeyPrefix = "#";
 
     private static LabelPlacer.Request NameRequest(ScenePart part, string text, double size)
     {
         var (w, h) = Label.Size(text, size, FontWeight.Bold);
-        var inside = Box.Around(part.Zone.Bounds.Center, w, h);
-        return new LabelPlacer.Request(part.Ref, LabelTarget.Part, part.Ref, part.Zone, w, h, part.Zone.Bounds.Inflate(-0.15).Contains(inside) ? [inside] : []);
+        // inside the body: the middle first, then slid towards each end and side, clear of pads the body stands over
+        var room = part.Zone.Bounds.Inflate(-0.15);
+        var (dx, dy) = (Math.Max(0, (room.Width - w) / 2), Math.Max(0, (room.Height - h) / 2));
+        var inside = new[] { (0.0, 0.0), (-dx, 0.0), (dx, 0.0), (0.0, -dy), (0.0, dy), (-dx, -dy), (dx, -dy), (-dx, dy), (dx, dy) }
+            .Select(o => Box.Around(room.Center + new Point(o.Item1, o.Item2), w, h))
+            .Where(b => room.Contains(b) && Geometry2D.Corners(b).All(c => Geometry2D.Inside(c, part.Outline) || part.Zone.DistanceTo(Box.Around(c, 0, 0)) < 1e-6))
+            .Distinct().ToList();
+        return new LabelPlacer.Request(part.Ref, LabelTarget.Part, part.Ref, part.Zone, w, h, inside);
     }
 
     private static LabelPlacer.Placed? PlaceName(LabelPlacer placer, ScenePart part, string text, double size) => placer.TryPlace(NameRequest(part, text, size));

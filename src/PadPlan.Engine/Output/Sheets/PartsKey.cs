@@ -16,10 +16,10 @@ internal sealed record PartsKey(ValueList<PartsKey.Row> Rows, double KeyWidth, d
 
     public const double Size = 1.8;
     public const double RowHeight = 2.5;
-    private const double CellGap = 1.4;
+    private const double CellGap = 1.2;
     private const double TitleHeight = 4.2;
     private const double MaxValue = 22;
-    private const double MaxNote = 34;
+    private const double MaxNote = 30;
 
     public double ColumnWidth => KeyWidth + RefWidth + ValueWidth + NoteWidth + 3 * CellGap;
     public int Keyed => Rows.Count(r => r.Key.Length > 0);
@@ -34,11 +34,12 @@ internal sealed record PartsKey(ValueList<PartsKey.Row> Rows, double KeyWidth, d
             .OrderBy(p => p.Part.Ref, NaturalOrder.Comparer)
             .Select(p => new Row("", p.Part.Ref, p.Part.Value, Note(p.Part, p.Footprint, p.Placement)))
             .ToValueList();
-        double Widest(IEnumerable<string> cells, FontWeight weight = FontWeight.Regular) => cells.Select(c => TextMetrics.Width(c, Size, weight)).DefaultIfEmpty(0).Max() + 0.2;
-        var keyWidth = Widest([rows.Count.ToString(CultureInfo.InvariantCulture), "#"], FontWeight.Bold);
-        var refWidth = Widest(rows.Select(r => r.Ref).Append("Part"), FontWeight.Bold);
-        var valueWidth = Math.Min(MaxValue, Widest(rows.Select(r => r.Value).Append("Value")));
-        var noteWidth = Math.Min(MaxNote, Widest(rows.Select(r => r.Note).Append("Which way round")));
+        double Widest(IEnumerable<string> cells, string header, FontWeight weight = FontWeight.Regular) =>
+            Math.Max(TextMetrics.Width(header, Size, FontWeight.Bold), cells.Select(c => TextMetrics.Width(c, Size, weight)).DefaultIfEmpty(0).Max()) + 0.2;
+        var keyWidth = Widest([BoardScene.KeyPrefix + rows.Count.ToString(CultureInfo.InvariantCulture)], "#", FontWeight.Bold);
+        var refWidth = Widest(rows.Select(r => r.Ref), "Part", FontWeight.Bold);
+        var valueWidth = Math.Min(MaxValue, Widest(rows.Select(r => r.Value), "Value"));
+        var noteWidth = Math.Min(MaxNote, Widest(rows.Select(r => r.Note), "Which way round"));
         return new PartsKey(rows, keyWidth, refWidth, valueWidth, noteWidth);
     }
 
@@ -66,8 +67,7 @@ internal sealed record PartsKey(ValueList<PartsKey.Row> Rows, double KeyWidth, d
             {
                 MarkKind.Band => $"band = {PinMarks.Display(pin)} end, on {Lands(pin)}",
                 MarkKind.Plus => $"+ on {Lands(pin)}",
-                MarkKind.Notch => $"notch = pin 1 end",
-                MarkKind.Dot => $"dot = pin 1",
+                MarkKind.Notch or MarkKind.Dot => "notch/dot = pin 1",
                 MarkKind.Winding => $"dot = start of {PinMarks.Display(pin)}",
                 _ => "",
             });
