@@ -283,7 +283,7 @@ internal static class AssemblySheet
         if (keyed) entries.Add((p => page.Text(BoardScene.KeyPrefix + "12", p + new Point(0, 0.7), BoardScene.KeySize, TextAnchor.Middle, FontWeight.Bold, KeyInk), "Key number: see the parts table"));
         if (padsUnnamed) entries.Add((p => page.Circle(p + new Point(2.4, 0), 1.3, SheetStyle.Thin, Ink.White), "Pad ids: all on the template"));
         if (NetsListed(palette) < palette.Nets.Count)
-            entries.Add((p => page.Circle(p + new Point(2.4, 0), 1.3, SheetStyle.Thin, SheetStyle.Shade), $"{palette.Nets.Count} nets: each pad shows its net name"));
+            entries.Add((p => page.Circle(p + new Point(2.4, 0), 1.3, SheetStyle.Thin, SheetStyle.Shade), $"{palette.Nets.Count} nets: see the leads table"));
         foreach (var net in NetsListed(palette) < palette.Nets.Count ? [] : palette.Nets)
         {
             var name = net;

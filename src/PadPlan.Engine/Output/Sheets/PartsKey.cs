@@ -18,7 +18,7 @@ internal sealed record PartsKey(ValueList<PartsKey.Row> Rows, double KeyWidth, d
     public const double RowHeight = 2.5;
     private const double CellGap = 1.2;
     private const double TitleHeight = 4.2;
-    private const double MaxValue = 22;
+    private const double MaxValue = 32;
     private const double MaxNote = 30;
 
     public double ColumnWidth => KeyWidth + RefWidth + ValueWidth + NoteWidth + 3 * CellGap;
