@@ -34,13 +34,14 @@ public sealed partial record SpiceScan(
         var models = new Dictionary<string, string>(StringComparer.OrdinalIgnoreCase);
         var parameters = new Dictionary<string, double>(StringComparer.OrdinalIgnoreCase);
         var deck = new List<CarriedLine>();
+        var deckLineNumbers = new List<int>();
         var top = new List<SpiceLine>();
         var open = new Stack<(string Name, int Line, System.Text.StringBuilder Letters)>();
         SpiceLine? control = null;
         void Carry(SpiceLine line)
         {
             if (SpiceText.Problem(line.Text) is { } problem) throw new InputException(file, $"this line {problem}", line.Line);
-            try { deck.Add(CarriedLine.Parse(line.Text)); }
+            try { deck.Add(CarriedLine.Parse(line.Text)); deckLineNumbers.Add(line.Line); }
             catch (ArgumentException e) { throw new InputException(file, e.Message, line.Line); }
         }
         void Skipped(SpiceLine line, string head, string where) =>
@@ -105,6 +106,7 @@ public sealed partial record SpiceScan(
         }
         if (control is not null)
             throw new InputException(file, ".control is never closed: add .endc after the last command of the block.", control.Line);
+        if (CarriedLine.Problem(deck) is { } problem) throw new InputException(file, problem.Message, deckLineNumbers[problem.Index]);
         return new SpiceScan(subckts, models, parameters, deck, top);
     }
 

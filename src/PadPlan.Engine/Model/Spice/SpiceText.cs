@@ -19,6 +19,9 @@ public static class SpiceText
     /// <summary>The deepest nesting of .subckt definitions (docs/limits.md).</summary>
     public const int MaxSubcircuitNesting = 16;
 
+    /// <summary>The most elements one carried .subckt definition may expand to, counting the bodies of the subcircuits it calls (docs/limits.md).</summary>
+    public const int MaxSubcircuitElements = 100_000;
+
     /// <summary>True for a character a deck word may hold.</summary>
     public static bool IsWordChar(char c) => c is > ' ' and < '\u007f' and not (';' or '\\' or '`');
 
