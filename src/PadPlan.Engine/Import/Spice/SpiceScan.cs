@@ -96,7 +96,7 @@ public sealed partial record SpiceScan(
             else if (Carried.Contains(head)) Carry(line);
             else if (NotCarried.Contains(head)) Skipped(line, words[0], "");
             if (head is ".include" or ".inc" or ".lib" && words.Count >= 2)
-                notes.Add(new ImportNote(file, line.Line, $"{words[0]} {NetlistText.Echo(string.Join(" ", words.Skip(1)))}: not followed. Parts and subcircuits in that file are not imported; the exported deck names it in a comment only (docs/netlist-format.md, \"Exported decks\")."));
+                notes.Add(new ImportNote(file, line.Line, $"{words[0]} {NetlistText.Echo(string.Join(" ", words.Skip(1)))}: not followed. Parts and subcircuits in that file are not imported; the exported deck names it in a comment only (docs/netlist-format.md, \"Exported decks are built from the parsed model\")."));
             else if (!head.StartsWith('.')) top.Add(line);
         }
         if (open.Count > 0)
