@@ -9,9 +9,10 @@ namespace PadPlan.IO;
 /// </summary>
 public static partial class AtomicFile
 {
+    /// <summary>Writes through a symbolic link: the file it points to is replaced and the link stays a link.</summary>
     public static void WriteAllBytes(string path, ReadOnlySpan<byte> bytes)
     {
-        var full = Path.GetFullPath(path);
+        var full = RealPath(path);
         var dir = Path.GetDirectoryName(full) ?? ".";
         EnsureReplaceable(full);
         RemoveStaleTemps(dir, Path.GetFileName(full));
@@ -40,6 +41,23 @@ public static partial class AtomicFile
 
     public static void WriteAllText(string path, string text) =>
         WriteAllBytes(path, new System.Text.UTF8Encoding(encoderShouldEmitUTF8Identifier: false).GetBytes(text));
+
+    /// <summary>
+    /// The full path of the file itself: a symbolic link (or a chain of them) is followed to the file it names, so the
+    /// writer lock and the write both act on the real file, and a project reached by two paths has one lock.
+    /// </summary>
+    public static string RealPath(string path)
+    {
+        var full = Path.GetFullPath(path);
+        try
+        {
+            return File.ResolveLinkTarget(full, returnFinalTarget: true) is { } target ? Path.GetFullPath(target.FullName) : full;
+        }
+        catch (IOException e)
+        {
+            throw new InputException(path, $"cannot follow this symbolic link ({e.Message}); give the path of the file itself.");
+        }
+    }
 
     /// <summary>Refuses (exit 2) to replace a file the user has made read-only.</summary>
     public static void EnsureReplaceable(string path)
