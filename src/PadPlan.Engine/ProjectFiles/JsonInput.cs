@@ -31,6 +31,10 @@ internal static class JsonInput
         {
             dto = JsonSerializer.Deserialize(bytes, type);
         }
+        catch (JsonException e) when (!NamesAPadPlanFormat(bytes))
+        {
+            throw new InputException(file, $"this is not a PadPlan file ({what} was expected): it does not name a PadPlan format (\"format\": \"{PadPlanFormatPrefix}...\"), and its JSON does not fit. Its content is not shown here.", inner: e);
+        }
         catch (JsonException e)
         {
             throw new InputException(file, Explain(e), (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1, e.Path, e);
@@ -40,6 +44,10 @@ internal static class JsonInput
         LimitCheck.Check(bytes, limits, file);
         return dto;
     }
+
+    // A cheap look for a PadPlan format tag, so a parse error in someone else's JSON file is reported without its key names.
+    private static bool NamesAPadPlanFormat(byte[] bytes) =>
+        bytes.AsSpan().IndexOf("\"format\""u8) >= 0 && bytes.AsSpan().IndexOf("\"padplan-"u8) >= 0;
 
     private static string Explain(JsonException e)
     {

@@ -90,7 +90,7 @@ public static class ProjectFile
         catch (InputException e)
         {
             throw new InputException(path,
-                $"the project to be written would be refused when read back, so nothing was written: {(e.JsonPath is null ? "" : e.JsonPath + ": ")}{e.Message} " +
+                $"the project to be written would be refused when read back, so nothing was written: {e.Message} " +
                 "Bring that value within its limit (in the netlist, parts map or options) and run again.",
                 jsonPath: e.JsonPath, inner: e);
         }

@@ -47,7 +47,7 @@ public readonly record struct ComponentValue(double Number, string Unit)
         }
         if (i == 0 || !double.TryParse(s[..i], NumberStyles.Float, CultureInfo.InvariantCulture, out var number) || !double.IsFinite(number))
         {
-            error = $"\"{text}\" is not a value: expected a number such as 4.7k, 100n, 4k7 or 2.2uH.";
+            error = $"\"{(s.Length <= 80 ? s : s[..77] + "...")}\" is not a value: expected a number such as 4.7k, 100n, 4k7 or 2.2uH.";
             return false;
         }
         var rest = s[i..];

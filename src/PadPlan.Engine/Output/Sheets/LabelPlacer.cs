@@ -41,6 +41,9 @@ internal sealed class LabelPlacer(Box bounds)
 
     public int Unresolved { get; private set; }
 
+    /// <summary>Grid entries held for obstacles and targets: bounded by what is drawn, not by the sizes in the file.</summary>
+    internal int FiledCells => _obstacleGrid.Values.Sum(l => l.Count) + _targets.Values.Sum(l => l.Count);
+
     /// <summary>Something labels must not cover; an owner's own labels may (a part's name on its own body). Soft obstacles are only avoided where possible (lead lines).</summary>
     public void Obstacle(Zone zone, string? owner = null, bool hard = true)
     {
