@@ -13,7 +13,7 @@ public sealed record FuzzSettings(int Cases, int Seed, TimeSpan CaseTimeout, lon
     public static FuzzSettings FromEnvironment() => new(
         Number("PADPLAN_FUZZ_CASES", DefaultCases),
         Number("PADPLAN_FUZZ_SEED", DefaultSeed),
-        TimeSpan.FromSeconds(Number("PADPLAN_FUZZ_TIMEOUT_S", 60)),
+        TimeSpan.FromSeconds(Number("PADPLAN_FUZZ_TIMEOUT_S", 300)),
         1L * 1024 * 1024 * 1024,
         TimeSpan.FromSeconds(60),
         Environment.GetEnvironmentVariable("PADPLAN_FUZZ_KEEP"));
