@@ -244,7 +244,12 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
         _elements.Add(new SpiceElement(e.Name, null, ValueList<SpiceNode>.Empty, e.TailFrom(0)));
     }
 
-    private void Add(NetlistPart part) => _parts.Add(part);
+    // Windings joined by K lines become one part later, so the exact count is checked after reading; this stops a runaway deck early.
+    private void Add(NetlistPart part)
+    {
+        NetlistLimits.CheckParts(_parts.Count + 1, file, part.Line, 2 * ProjectFiles.Limits.InputLimits.MaxParts);
+        _parts.Add(part);
+    }
 
     private void Fact(NetFacts facts) =>
         _facts[facts.Name] = _facts.TryGetValue(facts.Name, out var had) ? had.Merge(facts) : facts;

@@ -41,7 +41,7 @@ public readonly record struct ComponentValue(double Number, string Unit)
         var i = NumberPrefix(s, out var number);
         if (i == 0)
         {
-            error = $"\"{text}\" is not a value: expected a number such as 4.7k, 100n, 4k7 or 2.2uH.";
+            error = $"\"{(s.Length <= 80 ? s : s[..77] + "...")}\" is not a value: expected a number such as 4.7k, 100n, 4k7 or 2.2uH.";
             return false;
         }
         var rest = s[i..];
