@@ -191,7 +191,7 @@ public sealed class EditorBrowserTests(BrowserFixture browser) : IClassFixture<B
         "() => JSON.stringify([document.getElementById('board').getAttribute('viewBox'), [...document.querySelectorAll('g.part')].map(g => g.dataset.ref + '@' + g.dataset.x + ',' + g.dataset.y), [...document.querySelectorAll('.island')].map(i => i.outerHTML), document.getElementById('findings').textContent, document.getElementById('unsaved').hidden])");
 
     // The screenshot in README and docs/workflow.md comes from this run: PADPLAN_UPDATE_SCREENSHOTS=1 writes it into docs/.
-    private static async Task Shoot(BenchPage bench, string name)
+    internal static async Task Shoot(BenchPage bench, string name)
     {
         var bytes = await bench.Page.ScreenshotAsync();
         File.WriteAllBytes(Path.Combine(AppContext.BaseDirectory, name), bytes);

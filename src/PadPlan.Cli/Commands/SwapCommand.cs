@@ -49,7 +49,7 @@ public static class SwapCommand
             if (!outcome.Succeeded)
             {
                 context.Err.WriteLine($"error: {outcome.Failure}");
-                context.Err.WriteLine($"what to change: {outcome.Hint}");
+                context.Err.WriteLine($"what to change: give --widen {request.Widen + 1} to free the parts next to those too; or {outcome.Hint}");
                 context.Err.WriteLine($"{file.Name} was not changed.");
                 return ExitCodes.RuleViolations;
             }

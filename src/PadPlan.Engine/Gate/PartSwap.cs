@@ -92,7 +92,7 @@ public static class PartSwap
         if (!result.Succeeded)
             return new SwapOutcome(null, result, freedList, others, 0,
                 $"{request.Ref} on {swapped.FindPart(request.Ref)!.Footprint} does not fit without moving more: freeing {string.Join(", ", freedList)} was not enough ({result.Failure!.Message})",
-                $"Give --widen {request.Widen + 1} to free the parts next to those too, or choose a smaller footprint, or place the whole board again ('padplan place --force', which may also need a larger --board).");
+                "choose a smaller footprint, or place the whole board again ('padplan place --force', which may also need a larger --board).");
 
         // Back to the builder's own holds: what was held before stays held, everything else is free again.
         var padLocks = layout.Pads.ToDictionary(p => p.Id, p => p.Locked, StringComparer.Ordinal);
