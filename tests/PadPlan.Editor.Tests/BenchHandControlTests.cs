@@ -35,14 +35,7 @@ public sealed class BenchHandControlTests(BrowserFixture browser) : IClassFixtur
     {
         await using var run = await EditorRun.StartAsync();
         var bench = await BenchPage.OpenAsync(browser.Browser, run);
-        await bench.Page.SelectOptionAsync("#grid", "0.1");
-        var plan = await run.PlanAsync();
-        // J1's lead moved onto P2 (net BASE): a lead soldered into a pad joins its net, so IN is shorted to BASE.
-        var j1 = BenchPage.Part(plan, "J1");
-        var lead = BenchPage.Xy(BenchPage.Lead(j1, "1").GetProperty("landing"));
-        var p2 = BenchPage.Pad(plan, "P2");
-        var grab = Centre(j1);
-        await bench.DragAsync(grab, (grab.X + p2.GetProperty("x").GetDouble() - lead.X, grab.Y + p2.GetProperty("y").GetDouble() - lead.Y));
+        await EditorBrowserTests.ShortJ1ToBaseAsync(bench, run);
         await bench.Page.ClickAsync("#findings li[data-rule='lead-wrong-pad']");
         Assert.True(await bench.Page.Locator("#board .lit").CountAsync() > 0);
 
@@ -179,12 +172,6 @@ public sealed class BenchHandControlTests(BrowserFixture browser) : IClassFixtur
         using var body = JsonDocument.Parse(await far.Content.ReadAsStringAsync());
         Assert.Contains("2000", body.RootElement.GetProperty("message").GetString());
         Assert.Equal(0, await bench.RevisionAsync());
-    }
-
-    private static (double X, double Y) Centre(JsonElement part)
-    {
-        var points = part.GetProperty("body").EnumerateArray().Select(BenchPage.Xy).ToList();
-        return ((points.Min(p => p.X) + points.Max(p => p.X)) / 2, (points.Min(p => p.Y) + points.Max(p => p.Y)) / 2);
     }
 
     private static (double X, double Y) Mean(IEnumerable<(double X, double Y)> points)

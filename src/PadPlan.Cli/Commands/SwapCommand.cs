@@ -63,6 +63,7 @@ public static class SwapCommand
                     context.Out.WriteLine($"the check passed ({placed.Report!.Warnings} warning{(placed.Report.Warnings == 1 ? "" : "s")})");
                     foreach (var line in PlaceCommand.SideBySide(LayoutFigures.Of(input), LayoutFigures.Of(outcome.Project))) context.Out.WriteLine(line);
                 }
+                else if (input.Layout?.Placements.Any(p => p.Ref == request.Ref) == true) context.Out.WriteLine("same footprint and pin order: nothing on the board moves.");
                 else context.Out.WriteLine($"{request.Ref} is not placed yet, so nothing else changes; 'padplan place' places it.");
             }
             if (dry)

@@ -11,7 +11,7 @@ const state = {
   plan: null,        // the last view the server sent
   tool: "pick",      // pick | pad | link
   chosen: null,      // { kind: "part" | "pad" | "link", id }
-  linkFrom: null,    // first island of a wire link being made
+  linkFrom: null,    // first island of a jumper being made
   lit: new Set(),    // ids, refs, lead names and nets to highlight
   litFinding: null,  // rule and message of the finding whose items are lit, so a new view can tell whether it is still there
   view: null,        // { x, y, w, h } in board mm

@@ -67,7 +67,7 @@ public static class PlanViews
     };
 
     // Drawing help only: the check has already said which net is open and which leads it names; this draws the shortest
-    // lines that would join the pieces those leads land in (pieces by island, joined by wire links).
+    // lines that would join the pieces those leads land in (pieces by island, joined by jumpers).
     private static List<OpenThread> OpenThreads(Project project, Layout layout, CheckReport report)
     {
         var threads = new List<OpenThread>();

@@ -73,7 +73,10 @@ public static class PartSwap
         var swapped = Apply(project, request, footprint);
         var layout = project.Layout;
         var others = project.Parts.Count - 1;
-        if (layout is null || !layout.Placements.Any(p => p.Ref == request.Ref))
+        var (old, now) = (project.FindPart(request.Ref)!, swapped.FindPart(request.Ref)!);
+        var sameLeads = string.Equals(old.Footprint, now.Footprint, StringComparison.OrdinalIgnoreCase) && string.Equals(old.Variant, now.Variant, StringComparison.OrdinalIgnoreCase);
+        // Not placed yet, or only the value changes: nothing on the board moves.
+        if (layout is null || !layout.Placements.Any(p => p.Ref == request.Ref) || sameLeads)
             return new SwapOutcome(swapped, null, [], others, others, null, null);
 
         var freed = FreedParts(swapped, layout, request.Ref, request.Widen);

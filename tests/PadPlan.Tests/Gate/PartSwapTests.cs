@@ -94,6 +94,7 @@ public class PartSwapTests
         Assert.Equal(0, CliRunner.Run("swap", path, "R9", "--value", "47R", "--quiet").ExitCode);
         var after = ProjectFile.Read(path);
         Assert.Equal("47R", after.FindPart("R9")!.Value);
+        Assert.Equal(before.Layout, after.Layout); // same footprint and pin order: nothing on the board moves
         Assert.Contains("47 Ω", CliRunner.Run("bom", path).Out);
         Assert.Empty(CheckerVerdict.Check(after));
     }
