@@ -54,7 +54,7 @@ public static class EditCommand
         if (server.Session.Unsaved && server.Session.RecoveryKept)
             context.Err.WriteLine($"stopped with unsaved edits; they are kept in {Path.GetFileName(server.Session.RecoveryPath)} beside the project.");
         else if (server.Session.Unsaved)
-            context.Err.WriteLine("stopped; the last edits were not saved and no recovery copy could be written.");
+            context.Err.WriteLine("stopped with unsaved edits, and no recovery copy is on disk (it was removed, or could not be written): those edits are lost.");
         else context.Err.WriteLine("stopped.");
         return ExitCodes.Success;
     }

@@ -61,9 +61,13 @@ public class PartSwapTests
                          Math.Min(body.X1, b.X1) - Math.Max(body.X0, b.X0) > 0.5 && Math.Min(body.Y1, b.Y1) - Math.Max(body.Y0, b.Y0) > 0.5,
                 $"{reference} lies over {other}");
 
-        // The BOM follows the swap.
+        // The BOM and the geometry export follow the swap.
         var bom = CliRunner.Run("bom", path);
         Assert.Contains(footprint, bom.Out);
+        var geometry = Path.Combine(Path.GetDirectoryName(path)!, "g.json");
+        Assert.Equal(0, CliRunner.Run("export", path, "--geometry", geometry).ExitCode);
+        using var doc = System.Text.Json.JsonDocument.Parse(File.ReadAllBytes(geometry));
+        Assert.Equal(footprint, doc.RootElement.GetProperty("parts").EnumerateArray().First(p => p.GetProperty("ref").GetString() == reference).GetProperty("footprint").GetString());
     }
 
     // A 1 W carbon-film resistor body is about 10-12 mm long, 4-4.5 mm across (makers' data sheets, from memory).
