@@ -125,6 +125,7 @@ public sealed class BenchHandControlTests(BrowserFixture browser) : IClassFixtur
         Assert.Contains("res-axial-1w", offered);
         Assert.DoesNotContain("to92", offered); // three leads: not for a resistor
         await bench.Page.SelectOptionAsync("#swap-footprint", "res-axial-1w");
+        await EditorBrowserTests.Shoot(bench, "editor-swap.png");
         var revision = await bench.RevisionAsync();
         await bench.Page.ClickAsync("#swap-go");
         await bench.WaitForRevisionAsync(revision + 1);
