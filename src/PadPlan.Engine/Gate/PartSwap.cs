@@ -90,7 +90,13 @@ public static class PartSwap
             Parts = swapped.Parts.Select(p => freed.Contains(p.Ref) ? p with { Locked = false } : p with { Locked = true }).ToValueList(),
             Layout = held,
         };
-        var result = CheckedPlacer.Place(trial, settings with { KeepExisting = false }, progress);
+        // With most of the board held, one run can corner itself where another seed does not: a few seeds before saying no.
+        CheckedPlacement result = null!;
+        for (var t = 0; t < SeedsTried; t++)
+        {
+            result = CheckedPlacer.Place(trial, settings with { KeepExisting = false, Seed = settings.Seed + t * SeedStep }, progress);
+            if (result.Succeeded) break;
+        }
         var freedList = freed.Order(StringComparer.Ordinal).ToList();
         if (!result.Succeeded)
             return new SwapOutcome(null, result, freedList, others, 0,
@@ -119,6 +125,10 @@ public static class PartSwap
         if (part.Variant is { } old && target.Variants.Any(x => string.Equals(x.Name, old, StringComparison.OrdinalIgnoreCase))) return old;
         return null;
     }
+
+    /// <summary>Seeds tried (spaced by <see cref="SeedStep"/>, so they do not overlap the gate's own next seeds) before a swap is called impossible.</summary>
+    public const int SeedsTried = 3;
+    private const int SeedStep = 101;
 
     /// <summary>Room kept around a body when looking for the parts in its way (mm): a lead's bend and a pad's edge; common practice, no source.</summary>
     public const double Elbow = 3.0;

@@ -78,6 +78,29 @@ public class PartSwapTests
     [Fact]
     public void A_10_mm_electrolytic_fits_in_and_the_check_passes() => AssertSwapFits("C1", "cap-elec-10mm", 10);
 
+    // A transistor of another pinout: the same TO-92 with C-B-E in lead order instead of E-B-C (both orders are common
+    // in makers' data sheets for small-signal NPN parts). Every lead must now land on the net its new pin carries.
+    [Fact]
+    public void A_transistor_with_another_pinout_is_re_landed_and_the_check_passes()
+    {
+        var path = CopyOfPlaced();
+        var before = ProjectFile.Read(path);
+        var run = CliRunner.Run("swap", path, "Q1", "--variant", "CBE");
+        Assert.True(run.ExitCode == 0, run.Err + run.Out);
+        var after = ProjectFile.Read(path);
+        Assert.Equal("CBE", after.FindPart("Q1")!.Variant);
+        Assert.Empty(CheckerVerdict.Check(after)); // includes: every lead on a pad of its own net
+        var q1 = after.Layout!.Placements.First(p => p.Ref == "Q1");
+        var footprint = after.FootprintOf(after.FindPart("Q1")!);
+        // The lead that leaves the body first (lead 1) now carries C: its landing is on the collector's net C1N.
+        var lead1 = q1.Leads.First(l => footprint.LeadForPin(l.Pin, "CBE") == footprint.Leads[0]);
+        Assert.Equal("C", lead1.Pin);
+        var island = after.Layout.Islands().First(i => i.Id == lead1.Pad);
+        Assert.Equal("C1N", island.Net);
+        var old = before.Layout!.Placements.ToDictionary(p => p.Ref);
+        Assert.True(after.Layout.Placements.Count(p => p.Ref != "Q1" && old[p.Ref].Position == p.Position && old[p.Ref].Rotation == p.Rotation) >= 0.7 * (after.Parts.Count - 1));
+    }
+
     [Fact]
     public void Dry_run_shows_the_change_and_leaves_the_file_alone()
     {
