@@ -186,9 +186,9 @@ public sealed class EditorServer : IAsyncDisposable
         {
             note = Outcome(task);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (EditRefused e)
         {
-            note = "placed, but the recovery copy could not be written: " + e.Message;
+            note = "placed, but the plan could not be kept, so it is as it was: " + e.Message;
         }
         lock (_placeGate)
         {
