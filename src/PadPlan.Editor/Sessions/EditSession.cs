@@ -232,7 +232,7 @@ public sealed class EditSession : IDisposable
 
     private void WriteTo(string path)
     {
-        var bytes = ProjectFile.ToBytes(Current);
+        var bytes = ProjectFile.ToCheckedBytes(Current, path);
         using (ProjectFile.Claim(path)) AtomicFile.WriteAllBytes(path, bytes);
         _diskHash = SHA256.HashData(bytes);
         _saved = Current;
@@ -240,11 +240,14 @@ public sealed class EditSession : IDisposable
         if (File.Exists(RecoveryPath)) File.Delete(RecoveryPath);
     }
 
-    private static string FreeCopyPath(string path)
+    /// <summary>The first free "BASE-N.padplan.json" beside the project, N from 2; a copy of a copy numbers the same base ("p-3", never "p-2-2").</summary>
+    internal static string FreeCopyPath(string path)
     {
         var dir = System.IO.Path.GetDirectoryName(path) ?? ".";
         var name = System.IO.Path.GetFileName(path);
         var stem = name.EndsWith(ProjectFile.Extension, StringComparison.OrdinalIgnoreCase) ? name[..^ProjectFile.Extension.Length] : System.IO.Path.GetFileNameWithoutExtension(name);
+        var numbered = System.Text.RegularExpressions.Regex.Match(stem, @"^(?<base>.+)-[0-9]+$");
+        if (numbered.Success) stem = numbered.Groups["base"].Value;
         for (var n = 2; ; n++)
         {
             var candidate = System.IO.Path.Combine(dir, $"{stem}-{n}{ProjectFile.Extension}");
@@ -256,9 +259,9 @@ public sealed class EditSession : IDisposable
     {
         try
         {
-            return SHA256.HashData(File.ReadAllBytes(path));
+            return SHA256.HashData(InputFile.ReadAllBytes(path, ProjectFiles.Limits.InputLimits.MaxFileBytes, "project file"));
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (InputException)
         {
             return null;
         }

@@ -34,13 +34,14 @@ public sealed partial record SpiceScan(
         var models = new Dictionary<string, string>(StringComparer.OrdinalIgnoreCase);
         var parameters = new Dictionary<string, double>(StringComparer.OrdinalIgnoreCase);
         var deck = new List<CarriedLine>();
+        var deckLineNumbers = new List<int>();
         var top = new List<SpiceLine>();
         var open = new Stack<(string Name, int Line, System.Text.StringBuilder Letters)>();
         SpiceLine? control = null;
         void Carry(SpiceLine line)
         {
             if (SpiceText.Problem(line.Text) is { } problem) throw new InputException(file, $"this line {problem}", line.Line);
-            try { deck.Add(CarriedLine.Parse(line.Text)); }
+            try { deck.Add(CarriedLine.Parse(line.Text)); deckLineNumbers.Add(line.Line); }
             catch (ArgumentException e) { throw new InputException(file, e.Message, line.Line); }
         }
         void Skipped(SpiceLine line, string head, string where) =>
@@ -95,7 +96,7 @@ public sealed partial record SpiceScan(
             else if (Carried.Contains(head)) Carry(line);
             else if (NotCarried.Contains(head)) Skipped(line, words[0], "");
             if (head is ".include" or ".inc" or ".lib" && words.Count >= 2)
-                notes.Add(new ImportNote(file, line.Line, $"{words[0]} {NetlistText.Echo(string.Join(" ", words.Skip(1)))}: not followed. Parts and subcircuits in that file are not imported; the exported deck names it in a comment only (docs/netlist-format.md, \"Exported decks\")."));
+                notes.Add(new ImportNote(file, line.Line, $"{words[0]} {NetlistText.Echo(string.Join(" ", words.Skip(1)))}: not followed. Parts and subcircuits in that file are not imported; the exported deck names it in a comment only (docs/netlist-format.md, \"Exported decks are built from the parsed model\")."));
             else if (!head.StartsWith('.')) top.Add(line);
         }
         if (open.Count > 0)
@@ -105,6 +106,7 @@ public sealed partial record SpiceScan(
         }
         if (control is not null)
             throw new InputException(file, ".control is never closed: add .endc after the last command of the block.", control.Line);
+        if (CarriedLine.Problem(deck) is { } problem) throw new InputException(file, problem.Message, deckLineNumbers[problem.Index]);
         return new SpiceScan(subckts, models, parameters, deck, top);
     }
 

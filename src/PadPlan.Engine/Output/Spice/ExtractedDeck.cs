@@ -1,4 +1,3 @@
-using System.Globalization;
 using PadPlan.Model;
 using PadPlan.Model.Spice;
 using PadPlan.Model.Values;
@@ -119,8 +118,7 @@ public static class ExtractedDeck
 
     private static bool LooksLikeNumber(string w) => w.Length > 0 && (char.IsAsciiDigit(w[0]) || w[0] is '.' or '+' or '-' && w.Length > 1 && (char.IsAsciiDigit(w[1]) || w[1] == '.'));
 
-    /// <summary>A plain SPICE number: digits, point and exponent only, so every SPICE reads it the same.</summary>
-    public static string Plain(double number) => number.ToString("G15", CultureInfo.InvariantCulture);
+    private static string Plain(double number) => SpiceText.Number(number);
 
     private static string OffBoard(string net) => PadPlan.Import.NetNames.IsGround(net) ? LayoutNets.Plane : SimulationOnly + net;
 

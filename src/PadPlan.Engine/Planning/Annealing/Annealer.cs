@@ -53,6 +53,18 @@ internal sealed class Annealer
         PadsToLeads();
     }
 
+    /// <summary>
+    /// Starts from a finished layout (the best of the runs so far) to anneal it again cool and close by, as after the spring
+    /// start: at one standard deviation of the cost change of moves within half a cell, with a move range of two cells (a cell
+    /// being the spring start's share of area per part), so neighbours can trade places and the layout can leave its local minimum.
+    /// </summary>
+    public void Resume(AnnealState from)
+    {
+        _s.CopyFrom(from);
+        var p = _s.Problem;
+        _startCell = Math.Sqrt(PlacerLimits.SpringSpreadArea * p.RawArea / Math.Max(1, _parts.Length));
+    }
+
     /// <summary>Movable items scattered over the region; pads then sent to the middle of their nets' leads.</summary>
     public void Scatter()
     {
@@ -96,7 +108,8 @@ internal sealed class Annealer
         var start = _startCell > 0
             ? PlacerLimits.SpringStartSigmas * CostChangeSpread(perTemperature, PlacerLimits.SpringProbeCells * _startCell, softOnly: true)
             : PlacerLimits.StartTemperatureSigmas * CostChangeSpread(perTemperature, startRange, softOnly: false);
-        var schedule = new AnnealSchedule(start, maxRange, startRange);
+        var steady = _s.Problem.Project.Parts.Count <= PlacerSettings.SteadyCircuit;
+        var schedule = new AnnealSchedule(start, maxRange, startRange, steady ? PlacerLimits.SteadyCooling : PlacerLimits.MiddleCooling);
         var nets = Math.Max(1, _s.Problem.Nets.Length + _grounded.Length);
         while (!schedule.Done(_s.Cost, _s.Violation, nets))
         {
