@@ -45,6 +45,7 @@ internal sealed partial class AnnealState
             if (k >= 0) _use[k]++;
         }
         var free = net.FreeLeads;
+        var longest = 0.0;
         if (count == 1)
         {
             for (var a = 0; a < free.Length; a++)
@@ -52,6 +53,7 @@ internal sealed partial class AnnealState
                 var l = free[a];
                 var len = Land(l, isl[0], out _, out _, out var v);
                 cost += LeadCost(l, len);
+                longest = Math.Max(longest, len);
                 viol += v;
                 assign[l] = isl[0];
                 _use[0]++;
@@ -88,11 +90,13 @@ internal sealed partial class AnnealState
                 var l = free[a];
                 assign[l] = isl[k];
                 cost += LeadCost(l, _pairLen[id]);
+                longest = Math.Max(longest, _pairLen[id]);
                 viol += _pairViol[id];
             }
             viol += 5.0 * (free.Length - placed);
             cost += _w.Jumper * JumperLength(isl);
         }
+        if (net.Net.Class == NetClass.Rf) cost += _w.RfLongestLead * longest;
         for (var k = 0; k < count; k++)
         {
             var over = _use[k] - _islands[isl[k]].Capacity;

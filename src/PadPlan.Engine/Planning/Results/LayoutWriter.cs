@@ -109,7 +109,7 @@ internal static class LayoutWriter
                     }
                 }
                 inTree[best.To] = true;
-                yield return new Jumper(GeneratedIds.Strap(++count), p.Islands[isl[best.From]].Id, p.Islands[isl[best.To]].Id);
+                yield return new Jumper(GeneratedIds.Jumper(++count), p.Islands[isl[best.From]].Id, p.Islands[isl[best.To]].Id);
             }
         }
     }
