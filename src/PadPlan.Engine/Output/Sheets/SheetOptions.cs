@@ -5,6 +5,6 @@ public sealed record SheetOptions(Paper Paper, DateOnly Date)
 {
     /// <summary>Least overlap between neighbouring tiles of a board larger than the paper (mm); common practice, no source.</summary>
     public double TileOverlap { get; init; } = 12;
-    /// <summary>Largest enlargement of the assembly view for a small board.</summary>
-    public double MaxAssemblyScale { get; init; } = 6;
+    /// <summary>Largest enlargement of the assembly view for a small board (the largest of its standard scales, 5 : 1).</summary>
+    public double MaxAssemblyScale { get; init; } = 5;
 }
