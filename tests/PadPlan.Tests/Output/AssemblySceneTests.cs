@@ -46,6 +46,30 @@ public class AssemblySceneTests(ITestOutputHelper output)
         Assert.Equal(1 + plan.Details.Count, book.Sheets.Count(s => s.Kind == SheetKind.Assembly));
     }
 
+    [Theory]
+    [InlineData("xtal-osc-40m")]
+    [InlineData("cw-filter")]
+    public void The_parts_table_says_where_the_cathode_and_the_plus_lead_land(string name)
+    {
+        var project = ExampleProjects.Placed(name);
+        var plan = AssemblySheet.Choose(project, SheetFixtures.Options());
+        foreach (var placement in project.Layout!.Placements)
+        {
+            var part = project.FindPart(placement.Ref)!;
+            var footprint = project.FootprintOf(part);
+            var row = Assert.Single(plan.Key.Rows, r => r.Ref == part.Ref);
+            Assert.Equal(part.Value, row.Value);
+            foreach (var mark in footprint.Marks)
+            {
+                // the band marks the cathode end (JEDEC DO-35/DO-41 outlines); the + marks the positive lead of an electrolytic
+                var pin = footprint.PinNames(part.Variant)[footprint.Leads.ToList().FindIndex(l => l.Name == mark.Lead)];
+                var lands = placement.Leads.First(l => string.Equals(l.Pin, pin, StringComparison.OrdinalIgnoreCase)).Pad ?? "plane";
+                if (mark.Kind == MarkKind.Band) Assert.Contains($"band = {pin} end, on {lands}", row.Note);
+                if (mark.Kind == MarkKind.Plus) Assert.Contains($"+ on {lands}", row.Note);
+            }
+        }
+    }
+
     [Fact]
     public void A_reference_with_no_room_becomes_a_key_number_listed_in_the_parts_table()
     {

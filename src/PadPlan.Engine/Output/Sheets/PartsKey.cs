@@ -60,18 +60,24 @@ internal sealed record PartsKey(ValueList<PartsKey.Row> Rows, double KeyWidth, d
         var pins = footprint.PinNames(part.Variant);
         string Lands(string pin) => placement.Leads.FirstOrDefault(l => string.Equals(l.Pin, pin, StringComparison.OrdinalIgnoreCase)) is { } l
             ? (l.Pad ?? "plane") : "?";
+        var windings = new List<string>();
         foreach (var mark in footprint.Marks)
         {
             var pin = pins[Math.Max(0, footprint.Leads.ToList().FindIndex(l => string.Equals(l.Name, mark.Lead, StringComparison.Ordinal)))];
+            if (mark.Kind == MarkKind.Winding)
+            {
+                windings.Add(PinMarks.Display(pin));
+                continue;
+            }
             notes.Add(mark.Kind switch
             {
                 MarkKind.Band => $"band = {PinMarks.Display(pin)} end, on {Lands(pin)}",
                 MarkKind.Plus => $"+ on {Lands(pin)}",
                 MarkKind.Notch or MarkKind.Dot => "notch/dot = pin 1",
-                MarkKind.Winding => $"dot = start of {PinMarks.Display(pin)}",
                 _ => "",
             });
         }
+        if (windings.Count > 0) notes.Add($"dot = start of {string.Join(", ", windings)}");
         if (footprint.Marks.Count == 0 && footprint.Leads.Count == 2 && pins.Any(p => !p.All(char.IsAsciiDigit)))
             notes.Add($"{PinMarks.Display(pins[0])} on {Lands(pins[0])}");
         if (footprint.Leads.Count >= 3 && footprint.Leads.Count <= 4 && footprint.Marks.Count == 0)
