@@ -43,7 +43,8 @@ public static class ExtractedDeck
         var tail = e.Tail.Length == 0 ? "" : " " + e.Tail;
         // a K line couples windings the board builds as one transformer: it stays as written
         if (e.Ref is null && e.Nodes.Count == 0) return char.ToUpperInvariant(e.Name[0]) == 'K' ? $"{e.Name}{tail}" : $"* left off the board: {e.Name}{Line(tail)}";
-        if (e.Ref is null && char.ToUpperInvariant(e.Name[0]) is 'V' or 'I')
+        // a 0 V probe's two nodes were joined into one net; a source left off with its network keeps two
+        if (e.Ref is null && char.ToUpperInvariant(e.Name[0]) is 'V' or 'I' && e.Nodes.Select(n => n.Net).Distinct(StringComparer.Ordinal).Count() == 1)
             return $"* a wire on the board (nodes joined): {e.Name} {string.Join(" ", e.Nodes.Select(n => n.Net))}{Line(tail)}";
         var nodes = e.Nodes.Select(n => e.Ref is not null && n.Pin is not null ? nets.NodeOf(e.Ref, n.Pin) : OffBoard(n.Net));
         var comment = e.Ref is null ? $"* simulation only, not on the board:\n" : "";
