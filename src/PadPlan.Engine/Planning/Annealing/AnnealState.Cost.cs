@@ -259,7 +259,7 @@ internal sealed partial class AnnealState
     public double ViolationOf(int i)
     {
         EvalUnary(i, out _, out var v);
-        v += PairsOf(i, -1);
+        v += PairsOf(i, -1) + CrossingOf(i);
         foreach (var n in _items[i].Nets) v += _netViol[n];
         return v;
     }

@@ -97,6 +97,16 @@ internal sealed partial class AnnealState
         return v;
     }
 
+    /// <summary>The crossing violations an item's leads take part in, for the legaliser's choice of what to move.</summary>
+    private double CrossingOf(int i)
+    {
+        _stamp++;
+        var v = 0.0;
+        foreach (var l in _items[i].Leads)
+            if (_crosses[l]) v += CrossingNear(l, _lx, _ly);
+        return v;
+    }
+
     /// <summary>Collects the leads the open move can change: every lead of the moved items, and the free leads of their nets.</summary>
     private void CollectChanged()
     {
@@ -167,7 +177,7 @@ internal sealed partial class AnnealState
             var ey = _exY[p] - _exY[q];
             gap = Math.Min(gap, (Math.Sqrt(ex * ex + ey * ey) - radii) / 2);
         }
-        var need = radii + gap + _slack;
+        var need = radii + gap + PlacerLimits.Safety + _slack;
         var d = Geometry.SegmentGap(_exX[p], _exY[p], px, py, _exX[q], _exY[q], qx, qy, need);
         return d < need ? need - d : 0;
     }
