@@ -22,6 +22,7 @@ public static class PadPlanCli
             FootprintsCommand.Create(context),
             DemoCommand.Create(context),
             EditCommand.Create(context),
+            SwapCommand.Create(context),
         })
             root.Subcommands.Add(command);
         return root;

@@ -63,7 +63,7 @@ public static class DemoCommand
             return ExitCodes.RuleViolations;
         }
         var project = placed.Project!;
-        set.Add(projectFile, ProjectFile.ToBytes(project));
+        set.Add(projectFile, ProjectFile.ToCheckedBytes(project, projectFile));
         say.WriteLine($"2. place: board {project.Board.Width:0} x {project.Board.Height:0} mm, {project.Layout!.Pads.Count} pads");
 
         // 3. check

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text.RegularExpressions;
 using PadPlan.IO;
 using PadPlan.Model;
+using PadPlan.Model.Spice;
 using PadPlan.Model.Values;
 
 namespace PadPlan.Import;
@@ -24,6 +25,8 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
 
     public void Element(SpiceLine line)
     {
+        // every word of an element reaches the exported deck: only SPICE deck text gets in (Model/Spice/SpiceText)
+        if (SpiceText.Problem(line.Text) is { } problem) throw new InputException(file, $"this line {problem}", line.Line);
         var tokens = SpiceWords.Of(line, file);
         var text = SpiceWords.Normalised(line);
         var name = tokens[0].Text;
@@ -109,10 +112,37 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
         }
         else if (!SpiceValues.LooksLikeNumber(valueText))
             throw e.Bad($"bad value \"{NetlistText.Echo(valueText)}\": a SPICE value is a number that starts with a digit (4.7k, 100n, 1meg), or a {{parameter expression}}.");
-        else if (PartValues.TryRead(kind, valueText, ValueSyntax.Spice, out var v, out display, out var error)) number = v;
+        else if (PartValues.TryRead(kind, valueText, ValueSyntax.Spice, out var v, out display, out var error))
+        {
+            number = v;
+            SpiceReading(e, valueText, v);
+        }
         else throw e.Bad($"bad value. {error.Replace(valueText, NetlistText.Echo(valueText), StringComparison.Ordinal)}");
         Add(new NetlistPart(e.Name, kind, display, number, model, null, null, ValueList.Of(new NetlistPin("1", Net(args[0])), new NetlistPin("2", Net(args[1]))), Positional: true, e.Line));
         Record(e.Name, e.Name, [("1", args[0]), ("2", args[1])], e.TailFrom(2));
+    }
+
+    /// <summary>
+    /// A value that SPICE reads otherwise than a builder: an IEC 60062 code (4k7, 2R2), which simulators without these
+    /// codes read up to the scale factor (4k7 as 4k), or letters after the scale factor that SPICE ignores (4kk7x). The
+    /// builder's reading stands (the export writes it as a plain number); the note names the line and SPICE's reading.
+    /// </summary>
+    private void SpiceReading(ElementLine e, string text, ComponentValue builder)
+    {
+        if (!ComponentValue.TryReadAsSpice(text, out var spice, out var ignored)) return;
+        var asSpice = new ComponentValue(spice, builder.Unit).ToDisplay();
+        var name = NetlistText.Echo(e.Name);
+        var shown = NetlistText.Echo(text);
+        if (ComponentValue.IsIecCode(text) && Math.Abs(spice - builder.Number) > 1e-12 * Math.Abs(builder.Number))
+        {
+            notes.Add(new ImportNote(file, e.Line, $"{name}: value {shown} is an IEC 60062 code, read as {builder.ToDisplay()} as a builder means it. SPICE simulators without these codes (ngspice among them) read it as {asSpice}: they ignore the letters after the scale factor, so a simulation of this deck as written used {asSpice}. The exported deck writes {SpiceText.Number(builder.Number)}; write that in your deck too, so both agree."));
+            _summary.Add(new ImportSummaryLine("assumed", name, $"value {shown} read as {builder.ToDisplay()} (SPICE without IEC codes reads {asSpice})"));
+        }
+        else if (ignored.Length > 0 && !ComponentValue.IsUnitWord(ignored))
+        {
+            notes.Add(new ImportNote(file, e.Line, $"{name}: value {shown}: SPICE reads {asSpice} and ignores \"{NetlistText.Echo(ignored)}\" after the scale factor; PadPlan reads it the same. If another value was meant, write it as a plain number."));
+            _summary.Add(new ImportSummaryLine("assumed", name, $"value {shown} read as {asSpice} (letters after the scale factor ignored)"));
+        }
     }
 
     private static string? Parameter(List<string> words, string key) =>
@@ -226,7 +256,12 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
         _elements.Add(new SpiceElement(e.Name, null, ValueList<SpiceNode>.Empty, e.TailFrom(0)));
     }
 
-    private void Add(NetlistPart part) => _parts.Add(part);
+    // Windings joined by K lines become one part later, so the exact count is checked after reading; this stops a runaway deck early.
+    private void Add(NetlistPart part)
+    {
+        NetlistLimits.CheckParts(_parts.Count + 1, file, part.Line, 2 * ProjectFiles.Limits.InputLimits.MaxParts);
+        _parts.Add(part);
+    }
 
     private void Fact(NetFacts facts) =>
         _facts[facts.Name] = _facts.TryGetValue(facts.Name, out var had) ? had.Merge(facts) : facts;

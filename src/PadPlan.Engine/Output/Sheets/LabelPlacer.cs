@@ -33,14 +33,27 @@ internal sealed class LabelPlacer(Box bounds)
     private readonly List<(Zone Zone, string? Owner, bool Hard)> _obstacles = [];
     private readonly Dictionary<(int, int), List<int>> _obstacleGrid = [];
     private readonly Dictionary<(LabelTarget, int, int), List<(string Id, Zone Zone)>> _targets = [];
+    /// <summary>Obstacles and targets too large to file under cells (a huge body drawn enlarged): every search reads these lists whole, so the grid stays sized by the labels, not by the numbers in the file.</summary>
+    private readonly List<int> _wideObstacles = [];
+    private readonly List<(LabelTarget Kind, string Id, Zone Zone)> _wideTargets = [];
+    /// <summary>Most grid cells one zone is filed under.</summary>
+    private const int MaxCellsPerZone = 256;
 
     public int Unresolved { get; private set; }
+
+    /// <summary>Grid entries held for obstacles and targets: bounded by what is drawn, not by the sizes in the file.</summary>
+    internal int FiledCells => _obstacleGrid.Values.Sum(l => l.Count) + _targets.Values.Sum(l => l.Count);
 
     /// <summary>Something labels must not cover; an owner's own labels may (a part's name on its own body). Soft obstacles are only avoided where possible (lead lines).</summary>
     public void Obstacle(Zone zone, string? owner = null, bool hard = true)
     {
         var index = _obstacles.Count;
         _obstacles.Add((zone, owner, hard));
+        if (CellCount(zone.Bounds) > MaxCellsPerZone)
+        {
+            _wideObstacles.Add(index);
+            return;
+        }
         foreach (var key in Cells(zone.Bounds))
         {
             if (!_obstacleGrid.TryGetValue(key, out var list)) _obstacleGrid[key] = list = [];
@@ -53,6 +66,11 @@ internal sealed class LabelPlacer(Box bounds)
     /// <summary>An object labels of its kind must stay nearer to than to any other.</summary>
     public void Target(LabelTarget kind, string id, Zone zone)
     {
+        if (CellCount(zone.Bounds) > MaxCellsPerZone)
+        {
+            _wideTargets.Add((kind, id, zone));
+            return;
+        }
         foreach (var (x, y) in Cells(zone.Bounds))
         {
             if (!_targets.TryGetValue((kind, x, y), out var list)) _targets[(kind, x, y)] = list = [];
@@ -114,17 +132,16 @@ internal sealed class LabelPlacer(Box bounds)
     {
         var cost = bounds.Contains(box) ? 0.0 : Hard * 10;
         var seen = new HashSet<int>();
-        foreach (var key in Cells(box))
+        var near = CellCount(box) > MaxCellsPerZone
+            ? Enumerable.Range(0, _obstacles.Count)
+            : Cells(box).SelectMany(key => _obstacleGrid.TryGetValue(key, out var list) ? list : []).Concat(_wideObstacles);
+        foreach (var i in near)
         {
-            if (!_obstacleGrid.TryGetValue(key, out var list)) continue;
-            foreach (var i in list)
-            {
-                if (!seen.Add(i)) continue;
-                var (zone, owner, hard) = _obstacles[i];
-                if (r is not null && owner is not null && (owner == r.Owner || (r.AlsoOwns?.Contains(owner) ?? false))) continue;
-                if (!zone.Bounds.Overlaps(box) || !zone.Overlaps(box)) continue;
-                cost += hard ? Hard : 2 + zone.Bounds.OverlapArea(box);
-            }
+            if (!seen.Add(i)) continue;
+            var (zone, owner, hard) = _obstacles[i];
+            if (r is not null && owner is not null && (owner == r.Owner || (r.AlsoOwns?.Contains(owner) ?? false))) continue;
+            if (!zone.Bounds.Overlaps(box) || !zone.Overlaps(box)) continue;
+            cost += hard ? Hard : 2 + zone.Bounds.OverlapArea(box);
         }
         if (r is not null && !leader && NearerToAnother(r, box)) cost += Hard;
         return cost;
@@ -134,14 +151,17 @@ internal sealed class LabelPlacer(Box bounds)
     private bool NearerToAnother(Request r, Box box)
     {
         var own = r.Object.DistanceTo(box);
-        foreach (var (x, y) in Cells(box.Inflate(own)))
-        {
-            if (!_targets.TryGetValue((r.Kind, x, y), out var list)) continue;
-            foreach (var (id, zone) in list)
-                if (id != r.TargetId && zone.Bounds.DistanceTo(box) < own && zone.DistanceTo(box) < own - 1e-6) return true;
-        }
+        var search = box.Inflate(own);
+        var near = CellCount(search) > MaxCellsPerZone
+            ? _targets.Where(t => t.Key.Item1 == r.Kind).SelectMany(t => t.Value)
+            : Cells(search).SelectMany(c => _targets.TryGetValue((r.Kind, c.Item1, c.Item2), out var list) ? list : []);
+        foreach (var (id, zone) in near.Concat(_wideTargets.Where(t => t.Kind == r.Kind).Select(t => (t.Id, t.Zone))))
+            if (id != r.TargetId && zone.Bounds.DistanceTo(box) < own && zone.DistanceTo(box) < own - 1e-6) return true;
         return false;
     }
+
+    private static double CellCount(Box box) =>
+        (Math.Floor(box.Right / Cell) - Math.Floor(box.Left / Cell) + 1) * (Math.Floor(box.Bottom / Cell) - Math.Floor(box.Top / Cell) + 1);
 
     private static IEnumerable<(int, int)> Cells(Box box)
     {

@@ -44,9 +44,23 @@ public static class TableText
         return safe.IndexOfAny([',', '"', '\r', '\n']) >= 0 ? "\"" + safe.Replace("\"", "\"\"") + "\"" : safe;
     }
 
-    /// <summary>The cell with a leading single quote if a spreadsheet could take it for a formula (OWASP, CSV Injection).</summary>
-    public static string Neutralise(string cell) =>
-        cell.Length > 0 && cell[0] is '=' or '+' or '-' or '@' or '\t' or '\r' && !IsPlainNumber(cell) ? "'" + cell : cell;
+    /// <summary>
+    /// The cell with a leading single quote if a spreadsheet could take it for a formula (OWASP, CSV Injection): judged
+    /// by its first visible character, after any leading spaces and invisible format characters (zero-width space,
+    /// joiners, byte-order mark, soft hyphen), and counting the full-width forms of = + - @ that some spreadsheets fold
+    /// to the plain ones.
+    /// </summary>
+    public static string Neutralise(string cell)
+    {
+        var first = 0;
+        while (first < cell.Length && IsInvisible(cell[first])) first++;
+        if (first == cell.Length) return cell;
+        var formula = cell[first] is '=' or '+' or '-' or '@' or '\t' or '\r' or '\uFF1D' or '\uFF0B' or '\uFF0D' or '\uFF20';
+        return formula && (first > 0 || !IsPlainNumber(cell)) ? "'" + cell : cell;
+    }
+
+    private static bool IsInvisible(char c) =>
+        c is not ('\t' or '\r') && (char.IsWhiteSpace(c) || char.GetUnicodeCategory(c) == System.Globalization.UnicodeCategory.Format);
 
     private static bool IsPlainNumber(string cell) =>
         double.TryParse(cell, System.Globalization.NumberStyles.AllowLeadingSign | System.Globalization.NumberStyles.AllowDecimalPoint | System.Globalization.NumberStyles.AllowExponent,

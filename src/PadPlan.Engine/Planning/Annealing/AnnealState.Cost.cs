@@ -46,6 +46,7 @@ internal sealed partial class AnnealState
         }
         var free = net.FreeLeads;
         foreach (var l in free) lx[l] = ly[l] = double.NaN;
+        var longest = 0.0;
         if (count == 1)
         {
             for (var a = 0; a < free.Length; a++)
@@ -53,6 +54,7 @@ internal sealed partial class AnnealState
                 var l = free[a];
                 var len = Land(l, isl[0], out lx[l], out ly[l], out var v);
                 cost += LeadCost(l, len);
+                longest = Math.Max(longest, len);
                 viol += v;
                 assign[l] = isl[0];
                 _use[0]++;
@@ -90,11 +92,13 @@ internal sealed partial class AnnealState
                 assign[l] = isl[k];
                 (lx[l], ly[l]) = (_pairAx[id], _pairAy[id]);
                 cost += LeadCost(l, _pairLen[id]);
+                longest = Math.Max(longest, _pairLen[id]);
                 viol += _pairViol[id];
             }
             viol += 5.0 * (free.Length - placed);
             cost += _w.Jumper * JumperLength(isl);
         }
+        if (net.Net.Class == NetClass.Rf) cost += _w.RfLongestLead * longest;
         for (var k = 0; k < count; k++)
         {
             var over = _use[k] - _islands[isl[k]].Capacity;

@@ -142,7 +142,7 @@ internal static class LayoutWriter
                     }
                 }
                 inTree[best.To] = true;
-                yield return new Jumper(GeneratedIds.Strap(++count), ids[isl[best.From]], ids[isl[best.To]]);
+                yield return new Jumper(GeneratedIds.Jumper(++count), ids[isl[best.From]], ids[isl[best.To]]);
             }
         }
     }
