@@ -1,4 +1,3 @@
-using System.Globalization;
 using PadPlan.Model;
 using PadPlan.Model.Spice;
 using PadPlan.Model.Values;
@@ -56,7 +55,8 @@ public static class ExtractedDeck
             else yield return new DeckComment($"left off the board: {e.Name} {e.Tail}");
             yield break;
         }
-        if (e.Ref is null && letter is 'V' or 'I')
+        // a 0 V probe's two nodes were joined into one net; a source left off with its network keeps two
+        if (e.Ref is null && letter is 'V' or 'I' && e.Nodes.Select(n => n.Net).Distinct(StringComparer.Ordinal).Count() == 1)
         {
             yield return new DeckComment($"a wire on the board (nodes joined): {e.Name} {string.Join(" ", e.Nodes.Select(n => n.Net))} {e.Tail}");
             yield break;
@@ -119,8 +119,7 @@ public static class ExtractedDeck
 
     private static bool LooksLikeNumber(string w) => w.Length > 0 && (char.IsAsciiDigit(w[0]) || w[0] is '.' or '+' or '-' && w.Length > 1 && (char.IsAsciiDigit(w[1]) || w[1] == '.'));
 
-    /// <summary>A plain SPICE number: digits, point and exponent only, so every SPICE reads it the same.</summary>
-    public static string Plain(double number) => number.ToString("G15", CultureInfo.InvariantCulture);
+    private static string Plain(double number) => SpiceText.Number(number);
 
     private static string OffBoard(string net) => PadPlan.Import.NetNames.IsGround(net) ? LayoutNets.Plane : SimulationOnly + net;
 

@@ -36,6 +36,28 @@ public sealed record DeckElement : DeckEntry
 public sealed record DeckCarried(CarriedLine Line) : DeckEntry;
 
 /// <summary>
+/// A command that PadPlan itself adds to a deck it runs (never text from an input file): the operating point, or an
+/// option from a fixed list with a number. Nothing else, and never a .control block.
+/// </summary>
+public sealed record DeckCommand : DeckEntry
+{
+    /// <summary>Options a simulation may set (ngspice manual, "Simulator Variables" and ".options"): convergence and the shunt resistance that makes floating nodes solvable.</summary>
+    public static readonly IReadOnlySet<string> Options = new HashSet<string>(StringComparer.Ordinal) { "rshunt", "gmin", "reltol", "abstol", "vntol", "itl1", "itl2", "temp", "tnom" };
+
+    private DeckCommand(string text) => Text = text;
+
+    public string Text { get; }
+
+    /// <summary>.op: the DC operating point.</summary>
+    public static DeckCommand OperatingPoint { get; } = new(".op");
+
+    /// <summary>.options NAME=NUMBER, for a name in <see cref="Options"/> and a finite number.</summary>
+    public static DeckCommand Option(string name, double value) =>
+        Options.Contains(name) && double.IsFinite(value) ? new($".options {name}={SpiceText.Number(value)}")
+            : throw new ArgumentException($"a deck option must be one of {string.Join(", ", Options)} with a finite number.", nameof(name));
+}
+
+/// <summary>
 /// A SPICE deck as PadPlan writes it, built from the parsed model only: a title, then entries, then <c>.end</c>. No
 /// entry can hold a line break, a control character or a dot-command other than the carried ones, and the text never
 /// holds a <c>.control</c> block. <c>.include</c> and <c>.lib</c> lines are written as comments: PadPlan does not read
@@ -45,6 +67,9 @@ public sealed record SpiceDeck(string Title, ValueList<DeckEntry> Entries)
 {
     /// <summary>What the first line starts with. SPICE reads the first line as the title; a fixed start keeps any title from being read as something else (ngspice treats a first line of "*ng_script" as a command script).</summary>
     public const string TitlePrefix = "padplan deck: ";
+
+    /// <summary>The same deck with more entries at its end (before .end): e.g. <see cref="DeckCommand.OperatingPoint"/> for a simulation.</summary>
+    public SpiceDeck With(params DeckEntry[] more) => this with { Entries = Entries.Concat(more).ToValueList() };
 
     /// <summary>The deck as text, one entry a line, "\n" line ends.</summary>
     public string Text
@@ -65,6 +90,7 @@ public sealed record SpiceDeck(string Title, ValueList<DeckEntry> Entries)
         DeckCarried { Line.Kind: CarriedKind.Include or CarriedKind.Lib } c =>
             $"* not followed (PadPlan does not read this file; look it over, then remove the \"* \" to use it): {c.Line.Text}",
         DeckCarried c => c.Line.Text,
+        DeckCommand c => c.Text,
         _ => throw new ArgumentOutOfRangeException(nameof(entry)),
     };
 }
