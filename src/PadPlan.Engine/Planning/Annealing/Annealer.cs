@@ -18,7 +18,9 @@ internal sealed class Annealer
         var items = state.Problem.Items;
         _parts = [.. items.Where(i => !i.Fixed && i.IsPart).Select(i => i.Index)];
         _pads = [.. items.Where(i => !i.Fixed && !i.IsPart).Select(i => i.Index)];
-        _grounded = [.. _parts.Where(i => items[i].GroundLeads.Length > 0)];
+        // A held part keeps its place, but where its ground leads meet the plane may still change: the annealer keeps them off the
+        // new pads around it (a swap or --keep-existing). With nothing held this is the parts' own list, so layouts stay the same.
+        _grounded = [.. items.Where(i => i.IsPart && i.GroundLeads.Length > 0).Select(i => i.Index)];
         var table = new List<(MoveKind, double)>();
         if (_parts.Length > 0) table.AddRange([(MoveKind.ShiftPart, 0.3), (MoveKind.TurnPart, 0.08), (MoveKind.PartToPads, 0.1)]);
         if (_parts.Length > 1) table.Add((MoveKind.SwapParts, 0.07));

@@ -36,7 +36,7 @@ public sealed record PlacementSummary(
     {
         var c = CultureInfo.InvariantCulture;
         yield return string.Create(c, $"board: {BoardWidth:0.##} x {BoardHeight:0.##} mm{(BoardChosen ? " (chosen by the placer; written into the project)" : "")}");
-        yield return string.Create(c, $"area used: {UsedArea:0} mm^2 ({100 * UsedArea / (BoardWidth * BoardHeight):0}% of the board)");
+        yield return string.Create(c, $"area used: {UsedArea:0} mm² ({100 * UsedArea / (BoardWidth * BoardHeight):0}% of the board)");
         yield return $"pads: {Pads} cut or punched{(Strips > 0 ? $", {Strips} scored strips with {Segments} segments" : "")}";
         foreach (var line in PadsBySize) yield return "  " + line;
         yield return string.Create(c, $"leads: total {TotalLead:0.0} mm, longest {LongestLead:0.0} mm ({LongestLeadName}){(LongestRfLead > 0 ? $", longest on an RF net {LongestRfLead:0.0} mm ({LongestRfLeadName})" : "")}");
