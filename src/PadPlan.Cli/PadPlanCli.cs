@@ -28,9 +28,9 @@ public static class PadPlanCli
         return root;
     }
 
-    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool errIsTerminal = false)
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool errIsTerminal = false, int columns = TerminalWidth.Unknown)
     {
-        var context = new CommandContext(stdout, stderr, errIsTerminal);
+        var context = new CommandContext(stdout, stderr, errIsTerminal, columns);
         var root = BuildRoot(context);
         if (args.Length == 0)
         {

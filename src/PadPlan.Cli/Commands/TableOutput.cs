@@ -17,9 +17,9 @@ public static class TableOutput
         return project;
     }
 
-    /// <summary>Prints the tables as text to standard output, a blank line between them.</summary>
-    public static void Print(CommandContext context, IEnumerable<ReportTable> tables) =>
-        context.Out.Write(string.Join("\n", tables.Select(TableText.ToText)));
+    /// <summary>Prints the tables as text to standard output, a blank line between them, fitted to `width` characters when given.</summary>
+    public static void Print(CommandContext context, IEnumerable<ReportTable> tables, int? width) =>
+        context.Out.Write(string.Join("\n", tables.Select(t => TableText.ToText(t, width))));
 
     /// <summary>
     /// Writes each table as CSV: the first to the file named, the others beside it with the table's name added

@@ -40,6 +40,7 @@ public static class ProjectBuilder
         }
 
         var nets = Nets(parts, estimated, netlist, notes);
+        if (netlist.Elements is not null) ledger.RfNets(netlist, nets);
         var size = options.BoardSize ?? netlist.BoardSize;
         var project = new Project(
             ProjectName(file),

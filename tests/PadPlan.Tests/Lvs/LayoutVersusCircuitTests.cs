@@ -65,6 +65,26 @@ public class LayoutVersusCircuitTests
     }
 
     [NgspiceFact]
+    public void A_thermal_network_on_a_driven_ambient_stays_off_the_board_and_joined_in_the_export()
+    {
+        // MQ1's case node tc feeds a case-to-air network (R and C only) held at 40 (degrees C, as volts) by VTamb:
+        // neither the network nor the ambient source is built, and the extracted deck joins the network to MQ1's
+        // thermal nodes again, so ngspice finds the same junction temperature in both decks.
+        var path = SpiceCorpus.PathOf("dev-mos-thermal-ambient");
+        var placed = Placed(path);
+        Assert.DoesNotContain(placed.Parts, p => p.Ref.Contains("ca", StringComparison.OrdinalIgnoreCase) || p.Value.Contains("VTamb", StringComparison.Ordinal));
+        Assert.DoesNotContain(placed.Nets, n => n.Name is "tamb" or "tc" or "tj");
+        var original = Ngspice.OperatingPoint(File.ReadAllText(path));
+        var extracted = Ngspice.OperatingPoint(PadPlan.Output.Spice.ExtractedDeck.Write(placed));
+        var (deck, layout) = (original["tj"], extracted[PadPlan.Output.Spice.ExtractedDeck.SimulationOnly + "tj"]);
+        // the part heats well above the ambient, or the comparison would prove nothing
+        Assert.True(deck > 45, $"junction at {deck} C");
+        Assert.Equal(deck, layout, 6);
+        Assert.Equal(40, extracted[PadPlan.Output.Spice.ExtractedDeck.SimulationOnly + "tamb"], 9);
+        Assert.Empty(LayoutVersusCircuit.Compare(File.ReadAllText(path), placed));
+    }
+
+    [NgspiceFact]
     public void A_value_changed_in_the_placed_project_moves_the_extracted_operating_point()
     {
         // V1 vcc 0 12, R1 vcc mid 3.3k, R2 mid 0 6.8k; then R2 is changed to 1k in the placed project (as a builder

@@ -171,12 +171,15 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
                 recorded.Add((null, nodes[i]));
                 continue;
             }
-            // Discrete packages have no bulk or substrate lead: the bulk is tied to the source inside, the substrate is the case or nothing.
+            // Discrete packages have no bulk or substrate lead: a MOSFET's bulk is tied to the source inside, whatever net
+            // the deck puts it on, so the export ties it to lead S; a BJT's substrate is the case or nothing.
             var tiedTo = kind == PartKind.Mosfet ? Net(nodes[2]) : NetNames.Ground;
             var same = string.Equals(Net(nodes[i]), tiedTo, StringComparison.OrdinalIgnoreCase);
-            recorded.Add((same && kind == PartKind.Mosfet ? "S" : null, nodes[i]));
+            recorded.Add((kind == PartKind.Mosfet ? "S" : null, nodes[i]));
             if (!same)
-                notes.Add(new ImportNote(file, e.Line, $"{NetlistText.Echo(e.Name)}: the {(kind == PartKind.Mosfet ? "bulk" : "substrate")} node {NetlistText.Echo(nodes[i])} has no lead on a discrete part and is left out; it is not on {tiedTo} as usual, so check the circuit."));
+                notes.Add(new ImportNote(file, e.Line, kind == PartKind.Mosfet
+                    ? $"{NetlistText.Echo(e.Name)}: the bulk node {NetlistText.Echo(nodes[i])} is not on the source {NetlistText.Echo(nodes[2])}; a discrete MOSFET has no bulk lead and ties the bulk to its source inside the package, so the board and the exported deck tie it to lead S. Check the circuit: a deck that meant the bulk on {NetlistText.Echo(nodes[i])} simulates differently."
+                    : $"{NetlistText.Echo(e.Name)}: the substrate node {NetlistText.Echo(nodes[i])} has no lead on a discrete part and is left out; it is not on {tiedTo} as usual, so check the circuit."));
         }
         if (thermal < nodes.Count)
             notes.Add(new ImportNote(file, e.Line, $"{NetlistText.Echo(e.Name)}: nodes {NetlistText.Echo(string.Join(" ", nodes.Skip(thermal)))} are thermal nodes (junction and case temperature) of the model, not leads; they stay in the simulation only."));
@@ -221,7 +224,16 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
         }
         else pinNames = nodes.Select((_, i) => (i + 1).ToString(CultureInfo.InvariantCulture)).ToList();
         var pins = nodes.Select((n, i) => new NetlistPin(pinNames[i], Net(n))).ToValueList();
-        Add(new NetlistPart(e.Name, PartKind.Subcircuit, sub, null, sub, null, null, pins, Positional: true, e.Line));
+        var part = new NetlistPart(e.Name, PartKind.Subcircuit, sub, null, sub, null, null, pins, Positional: true, e.Line);
+        // A body that puts a node on global ground (0) reaches the ground plane though no port does: the part needs a
+        // ground lead. A recognised pinout (an op-amp macromodel's 0 is only its reference) already says where its leads are.
+        if (def is { UsesGround: true } && !nodes.Any(NetNames.IsGround) && StandardPinouts.Find(part) is null && OpAmpPinout.FromNames(pinNames) is null)
+        {
+            var ground = UniqueNames([.. pinNames, "GND"])[^1];
+            part = part with { Pins = pins.Add(new NetlistPin(ground, NetNames.Ground)) };
+            notes.Add(new ImportNote(file, e.Line, $"{NetlistText.Echo(e.Name)}: subcircuit {NetlistText.Echo(sub)} puts a node on ground (0) inside, so the part gets a ground lead ({ground}) after its ports. Check the data sheet; a parts map can say otherwise."));
+        }
+        Add(part);
         Record(e.Name, e.Name, nodes.Select((n, i) => ((string?)pinNames[i], n)), e.TailFrom(nodes.Count));
     }
 

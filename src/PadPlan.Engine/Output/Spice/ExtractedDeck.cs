@@ -55,7 +55,8 @@ public static class ExtractedDeck
             else yield return new DeckComment($"left off the board: {e.Name} {e.Tail}");
             yield break;
         }
-        if (e.Ref is null && letter is 'V' or 'I')
+        // a 0 V probe's two nodes were joined into one net; a source left off with its network keeps two
+        if (e.Ref is null && letter is 'V' or 'I' && e.Nodes.Select(n => n.Net).Distinct(StringComparer.Ordinal).Count() == 1)
         {
             yield return new DeckComment($"a wire on the board (nodes joined): {e.Name} {string.Join(" ", e.Nodes.Select(n => n.Net))} {e.Tail}");
             yield break;

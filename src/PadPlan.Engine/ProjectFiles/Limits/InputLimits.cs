@@ -67,7 +67,7 @@ public static class InputLimits
             .List("$.toolkit.leadCapacity", 20).Number("$.toolkit.leadCapacity[*].padSize", Size)
             .Number("$.toolkit.leadCapacity[*].leads", new NumberRange(1, 100, "leads", WholeNumber: true))
             .Number("$.toolkit.leadSpacing", Pitch).Number("$.toolkit.stripPitch", Pitch).Number("$.toolkit.scoreWidth", new NumberRange(0, 10, "mm", MinExclusive: true));
-        t.Number("$.rules.padGap", Gap).Number("$.rules.groundGap", Gap)
+        t.Number("$.rules.padGap", Gap).Number("$.rules.groundGap", Gap).Number("$.rules.leadGap", Gap)
             .Number("$.rules.maxLeadRf", Size).Number("$.rules.maxLeadAudio", Size).Number("$.rules.maxLeadGeneral", Size)
             .Number("$.rules.maxLeadPower", Size).Number("$.rules.maxLeadHv", Size)
             .Number("$.rules.tempRise", new NumberRange(0, 100, "°C")).Number("$.rules.copperThickness", new NumberRange(0, 1, "mm"));
