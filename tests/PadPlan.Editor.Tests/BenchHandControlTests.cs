@@ -142,7 +142,7 @@ public sealed class BenchHandControlTests(BrowserFixture browser) : IClassFixtur
         await bench.ChoosePartAsync("R8");
         await bench.Page.ClickAsync("#swap-open");
         await bench.Page.WaitForSelectorAsync("#swap-panel:not([hidden])");
-        await bench.Page.SelectOptionAsync("#swap-footprint", "res-axial-2w");
+        await bench.Page.SelectOptionAsync("#swap-footprint", "toroid-18mm-2"); // 19.5 mm across: no room among its neighbours
         var kept = run.Server.Session.Current;
         await bench.Page.ClickAsync("#swap-go");
         await bench.Page.WaitForFunctionAsync("() => document.getElementById('notice-text').textContent.includes('does not fit')");

@@ -3,7 +3,7 @@ namespace PadPlan.Editor.Edits;
 /// <summary>One small edit as the page sends it (JSON). Which fields matter depends on <see cref="Kind"/>; docs/editor.md lists them.</summary>
 public sealed class EditRequest
 {
-    /// <summary>move-part, turn-part, move-pad, hold, add-pad, remove-pad, land-lead, add-link, remove-link.</summary>
+    /// <summary>move-part, turn-part, move-pad, hold, add-pad, remove-pad, land-lead, add-link, remove-link, swap-part.</summary>
     public string? Kind { get; set; }
     /// <summary>A part reference (move-part, turn-part, land-lead, hold).</summary>
     public string? Ref { get; set; }
@@ -25,4 +25,9 @@ public sealed class EditRequest
     public string? To { get; set; }
     /// <summary>remove-link: the link's id.</summary>
     public string? Link { get; set; }
+    /// <summary>swap-part: the footprint, pin order and value of the part on hand (left out: kept), and how many rings of neighbours beyond the first may move.</summary>
+    public string? Footprint { get; set; }
+    public string? Variant { get; set; }
+    public string? Value { get; set; }
+    public int? Widen { get; set; }
 }

@@ -512,7 +512,7 @@ async function doSwap() {
   const ref = $("swap-panel").dataset.ref;
   $("swap-go").disabled = true;
   notice(`swapping ${ref} and placing it again among its neighbours ...`);
-  const r = await call("POST", "/api/swap", { ref, footprint: $("swap-footprint").value, variant: $("swap-variant").value || null, value: $("swap-value").value, widen: parseInt($("swap-widen").value, 10) });
+  const r = await call("POST", "/api/edit", { kind: "swap-part", ref, footprint: $("swap-footprint").value, variant: $("swap-variant").value || null, value: $("swap-value").value, widen: parseInt($("swap-widen").value, 10) });
   $("swap-go").disabled = false;
   if (!r.ok) { notice((r.data && r.data.message) || "the swap was refused"); return; }
   show(r.data);

@@ -91,18 +91,12 @@ public sealed class EditorServer : IAsyncDisposable
             var edit = await ReadJson<EditRequest>(request);
             if (edit is null) return Refused("the edit is not valid JSON.");
             if (Placing) return Refused("the placer is still working; wait for it or stop it first.");
-            return Changing(() => _session.Apply(edit));
+            // "Swap part" places again, so it needs the footprint library: here, not in the pure EditApplier.
+            return edit.Kind == "swap-part" ? Changing(() => _session.Replace(_swap.Apply(_session.Current, edit))) : Changing(() => _session.Apply(edit));
         });
         app.MapPost("/api/undo", () => Placing ? Refused("the placer is still working.") : Changing(() => _session.Undo(), "nothing to take back."));
         app.MapPost("/api/redo", () => Placing ? Refused("the placer is still working.") : Changing(() => _session.Redo(), "nothing to do again."));
         app.MapGet("/api/swap", (string? @ref) => Changing(() => Results.Json(_swap.Choices(_session.Current, @ref ?? ""), Json)));
-        app.MapPost("/api/swap", async (HttpRequest request) =>
-        {
-            var swap = await ReadJson<SwapEditRequest>(request);
-            if (swap is null) return Refused("the swap is not valid JSON.");
-            if (Placing) return Refused("the placer is still working; wait for it or stop it first.");
-            return Changing(() => _session.Replace(_swap.Apply(_session.Current, swap)));
-        });
         app.MapPost("/api/save", () => Saved(_session.Save()));
         app.MapPost("/api/keep-copy", () => Saved(_session.SaveCopy()));
         app.MapPost("/api/place", () => StartPlacing());

@@ -145,20 +145,40 @@ public class PartSwapTests
     }
 
     [Fact]
-    public void A_part_too_big_for_its_corner_says_so_and_widen_frees_enough()
+    public void A_part_too_big_for_its_corner_says_so_offers_widen_and_changes_nothing()
     {
         var path = CopyOfPlaced();
         var before = File.ReadAllBytes(path);
-        // A 2 W resistor (about 15-17 mm long, from memory) where a 1/4 W one stood, among the buffer's parts on the board the placer
-        // sized tightly: with R8's close neighbours alone there is no room (this layout is fixed by seed 1 of the example).
-        var run = CliRunner.Run("swap", path, "R8", "--footprint", "res-axial-2w");
+        // An 18 mm toroid (19.5 mm across its windings) where a 1/4 W resistor stood: on the board the placer sized for the
+        // circuit, no room among the nearest parts, nor one ring further.
+        var run = CliRunner.Run("swap", path, "R8", "--footprint", "toroid-18mm-2");
         Assert.Equal(1, run.ExitCode);
         Assert.Contains("does not fit without moving more", run.Err);
         Assert.Contains("--widen 1", run.Err);
         Assert.Equal(before, File.ReadAllBytes(path));
 
-        var wider = CliRunner.Run("swap", path, "R8", "--footprint", "res-axial-2w", "--widen", "1");
-        Assert.True(wider.ExitCode == 0, wider.Err);
+        // Each ring of widening frees every part the narrower one freed, and more.
+        var wider = CliRunner.Run("swap", path, "R8", "--footprint", "toroid-18mm-2", "--widen", "1");
+        Assert.True(Freed(wider.Err).IsProperSupersetOf(Freed(run.Err)), run.Err + wider.Err);
+        Assert.Equal(before, File.ReadAllBytes(path));
+    }
+
+    [Fact]
+    public void Widening_frees_more_parts_and_the_result_still_passes_the_check()
+    {
+        var path = CopyOfPlaced();
+        var narrow = CliRunner.Run("swap", path, "R8", "--footprint", "cap-film-15mm", "--dry-run");
+        var wide = CliRunner.Run("swap", path, "R8", "--footprint", "cap-film-15mm", "--widen", "1");
+        Assert.True(wide.ExitCode == 0, wide.Err);
+        Assert.True(Freed(wide.Out).IsProperSupersetOf(Freed(narrow.Out)), narrow.Out + wide.Out);
         Assert.Empty(CheckerVerdict.Check(ProjectFile.Read(path)));
+    }
+
+    /// <summary>The parts a swap's report names as freed ("freed and placed again: A, B" or "freeing A, B was not enough").</summary>
+    private static HashSet<string> Freed(string report)
+    {
+        var m = System.Text.RegularExpressions.Regex.Match(report, @"(?:freed and placed again: |freeing )([A-Z0-9, ]+?)(?: was not enough|\r?\n|$)");
+        Assert.True(m.Success, report);
+        return m.Groups[1].Value.Split(", ").ToHashSet();
     }
 }
