@@ -77,7 +77,7 @@ public sealed class DcPaths
                     foreach (var (a, b) in PinPairs(pins))
                         maybes.Add((a.Net, b.Net, part.Ref, $"reads about 0 Ω if {a.Pin} and {b.Pin} are on the same winding; check the part's data"));
                     break;
-                case PartKind.Potentiometer when pins.Count >= 2:
+                case PartKind.Trimmer when pins.Count >= 2:
                     foreach (var (a, b) in PinPairs(pins))
                         maybes.Add((a.Net, b.Net, part.Ref, "a potentiometer reads low at some settings"));
                     break;
@@ -85,7 +85,7 @@ public sealed class DcPaths
                     var anode = pins.FindIndex(p => p.Pin.Equals("A", StringComparison.OrdinalIgnoreCase) || p.Pin.Equals("anode", StringComparison.OrdinalIgnoreCase));
                     junctions.Add(anode >= 0 ? (pins[anode].Net, pins[1 - anode].Net, part.Ref, true) : (pins[0].Net, pins[1].Net, part.Ref, false));
                     break;
-                case PartKind.Transistor:
+                case PartKind.Bjt or PartKind.Jfet or PartKind.Mosfet:
                     junctions.AddRange(TransistorJunctions(part, pins));
                     break;
             }
