@@ -22,7 +22,8 @@ public static class Checker
             .Concat(SpacingCheck.Run(ctx))
             .Concat(LeadCheck.Run(ctx))
             .Concat(PlacementCheck.Run(ctx))
-            .Concat(ElectricalCheck.Run(ctx))));
+            .Concat(ElectricalCheck.Run(ctx))
+            .Concat(OperatingCheck.Run(project, options.Simulation))));
         return Report(findings, ParasiticEstimates.Run(ctx));
     }
 

@@ -1,6 +1,5 @@
-using PadPlan.Model;
 
-namespace PadPlan.Materials;
+namespace PadPlan.Model;
 
 /// <summary>
 /// Tells a part's kind from its reference letters (IEEE 315 / ASME Y14.44 class letters: R, C, L, T, D or CR, Q, U,
