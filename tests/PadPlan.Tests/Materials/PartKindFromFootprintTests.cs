@@ -1,5 +1,4 @@
 using PadPlan.Model;
-using PartKind = PadPlan.Materials.PartKind;
 using PadPlan.Materials;
 using PadPlan.Tests.Import;
 

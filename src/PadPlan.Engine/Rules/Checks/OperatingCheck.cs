@@ -29,7 +29,7 @@ internal static class OperatingCheck
         if (simulation.Point is not { } op)
         {
             yield return Findings.Info(RuleIds.OperatingPoint,
-                $"{simulation.Reason}: the polarity and rating checks did not run, and printed voltages are upper bounds from DC paths.",
+                $"{simulation.Label}: printed voltages are upper bounds, and the polarity and rating checks did not run.",
                 $"Install ngspice (Debian package ngspice) or name it with --ngspice or {SimulationOptions.EnvironmentVariable}; then check again.", null, project.Name);
             yield break;
         }
