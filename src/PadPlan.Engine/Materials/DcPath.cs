@@ -7,7 +7,8 @@ public sealed record DcPath(string NetA, string NetB, DcReading Reading, double?
 /// A semiconductor junction between two nets as a meter's diode mode sees it (about 1 mA): the net on the anode side
 /// (red probe, + for a forward reading), the cathode side, and the forward drop's usual range in volts.
 /// </summary>
-public sealed record DcJunction(string Anode, string Cathode, JunctionKind Kind)
+/// <remarks>BothWays: another junction the opposite way round joins the same pair, so it reads as a diode either way.</remarks>
+public sealed record DcJunction(string Anode, string Cathode, JunctionKind Kind, bool BothWays = false)
 {
     public (double Low, double High) Range => JunctionKinds.Range(Kind);
 }

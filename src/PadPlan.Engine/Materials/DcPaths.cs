@@ -60,6 +60,7 @@ public sealed class DcPaths
         var edges = new List<(int A, int B, double Ohms, string Part)>();
         var junctions = new List<(string Anode, string Cathode, string Part, bool Known, JunctionKind Kind, string What)>();
         var maybes = new List<(string A, string B, string Part, string Note)>();
+        var channels = new List<(string A, string B, string Part, string Note)>();
 
         foreach (var part in project.Parts.OrderBy(p => p.Ref, NaturalOrder.Comparer))
         {
@@ -90,7 +91,7 @@ public sealed class DcPaths
                 case PartKind.Bjt or PartKind.Jfet or PartKind.Mosfet:
                     junctions.AddRange(TransistorJunctions(part, kind, pins));
                     if (kind == PartKind.Jfet && Pin(pins, "D") is { Pin: not null } d && Pin(pins, "S") is { Pin: not null } src)
-                        maybes.Add((d.Net, src.Net, part.Ref, "the JFET's channel reads as a resistor, tens to hundreds of ohms, in both directions; a low-resistance part may beep"));
+                        channels.Add((d.Net, src.Net, part.Ref, "a JFET's channel conducts with no bias: it reads as a resistor, tens to hundreds of ohms, both ways (it hides any junction in parallel); a low-resistance part may beep"));
                     break;
             }
         }
@@ -102,16 +103,37 @@ public sealed class DcPaths
                     Set(nodes[i], nodes[j], DcReading.Low, r, Route(nodes, edges, i, j),
                         r < 1e-6 ? "about 0 Ω through windings, beads or fuses (their own few ohms at most)" : "through resistors");
 
-        // A junction between two nets also joins everything that reads low to either end.
+        // A JFET channel (a resistor of unknown value) joins everything that reads low to either end; it comes before the
+        // junctions, since a junction in parallel with it never shows its drop.
+        foreach (var (a0, b0, part, note) in channels)
+            foreach (var a in LowGroup(nodes, ohmsBetween, index[a0]))
+                foreach (var b in LowGroup(nodes, ohmsBetween, index[b0]))
+                    if (a != b && Between(nodes[a], nodes[b]).Reading == DcReading.Open) Set(nodes[a], nodes[b], DcReading.Maybe, null, part, note);
+
+        // A junction between two nets also joins everything that reads low to either end, or that a JFET channel joins
+        // to it (a channel of a few hundred ohms still lets a meter's diode test show the junction behind it).
+        var channelEnds = channels.SelectMany(c => new[] { (index[c.A], index[c.B]), (index[c.B], index[c.A]) }).ToLookup(x => x.Item1, x => x.Item2);
+        IEnumerable<int> Reached(int start)
+        {
+            var seen = new HashSet<int> { start };
+            var queue = new Queue<int>([start]);
+            while (queue.Count > 0)
+            {
+                var n = queue.Dequeue();
+                foreach (var m in LowGroup(nodes, ohmsBetween, n).Concat(channelEnds[n]))
+                    if (seen.Add(m)) queue.Enqueue(m);
+            }
+            return seen.Order();
+        }
         foreach (var (anode, cathode, part, known, junction, what) in junctions)
-            foreach (var a in LowGroup(nodes, ohmsBetween, index[anode]))
-                foreach (var c in LowGroup(nodes, ohmsBetween, index[cathode]))
+            foreach (var a in Reached(index[anode]))
+                foreach (var c in Reached(index[cathode]))
                 {
                     if (a == c || Between(nodes[a], nodes[c]).Reading == DcReading.Low) continue;
                     var (low, high) = JunctionKinds.Range(junction);
                     var range = string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{low:0.0#}-{high:0.0#} V");
                     var note = known
-                        ? $"{what}: diode mode reads {range} with red (+) on the {nodes[a]} side, open the other way; a beeper may sound one way only"
+                        ? $"{what}: diode mode reads {range} with + (red) on the {nodes[a]} side, open the other way; a beeper may sound one way only"
                         : $"{what}: diode mode reads {range} one way round and open the other";
                     Set(nodes[a], nodes[c], DcReading.OneWay, null, part, note, known ? new DcJunction(nodes[a], nodes[c], junction) : null);
                 }
@@ -124,8 +146,18 @@ public sealed class DcPaths
         var key = Key(a, b);
         if (_pairs.TryGetValue(key, out var old) && old.Reading != DcReading.Open)
         {
-            // Several junctions or windings between one pair: list them all on one line.
-            if (old.Reading == reading && !old.Through.Split(", ").Contains(through)) _pairs[key] = old with { Through = old.Through + ", " + through };
+            // Several junctions or windings between one pair: list them all on one line. Two junctions the opposite way
+            // round (a clamp diode across a gate junction) read as a diode both ways.
+            if (old.Reading == reading && !old.Through.Split(", ").Contains(through))
+            {
+                var both = old.Junction is { } j && junction is { } k && j.Anode == k.Cathode && !j.BothWays;
+                _pairs[key] = old with
+                {
+                    Through = old.Through + ", " + through,
+                    Junction = both ? old.Junction! with { BothWays = true } : old.Junction,
+                    Note = both ? $"junctions both ways round ({old.Through}, {through}): diode mode reads about {Range(old.Junction!)} either way" : old.Note,
+                };
+            }
             return;
         }
         _pairs[key] = new DcPath(key.Item1, key.Item2, reading, ohms, through, note, junction);
@@ -137,6 +169,8 @@ public sealed class DcPaths
             for (var j = i + 1; j < pins.Count; j++)
                 yield return (pins[i], pins[j]);
     }
+
+    private static string Range(DcJunction j) => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{j.Range.Low:0.0#}-{j.Range.High:0.0#} V");
 
     private static (string Pin, string Net) Pin(List<(string Pin, string Net)> pins, string name) =>
         pins.FirstOrDefault(p => p.Pin.Equals(name, StringComparison.OrdinalIgnoreCase));

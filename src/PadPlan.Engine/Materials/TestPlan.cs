@@ -65,6 +65,8 @@ public static class TestPlan
         return path.Reading switch
         {
             DcReading.Low => $"reads low via {path.Through}",
+            DcReading.OneWay when path.Junction is { BothWays: true } j => string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                $"diode {j.Range.Low:0.0#}-{j.Range.High:0.0#} V both ways; via {path.Through}"),
             DcReading.OneWay when path.Junction is { } j => string.Create(System.Globalization.CultureInfo.InvariantCulture,
                 $"diode {j.Range.Low:0.0#}-{j.Range.High:0.0#} V, red on {(Same(paths, j.Anode, a) ? probeA : probeB)}; reversed open; via {path.Through}"),
             DcReading.OneWay => $"diode one way only, via {path.Through}",

@@ -39,7 +39,8 @@ public sealed class CircuitDeck
     /// <summary>Parts that touch a net but have no model: the operating point would be wrong without them.</summary>
     public IReadOnlyList<string> Unmodelled { get; }
 
-    public static CircuitDeck Of(Project project)
+    /// <summary>The deck of the powered circuit; unpowered, every independent source is left off (the board on the bench with its supply and signal wires removed).</summary>
+    public static CircuitDeck Of(Project project, bool powered = true)
     {
         var kinds = project.Parts.ToDictionary(p => p.Ref, p => PartKinds.Of(p, project.FindFootprint(p.Footprint)), StringComparer.Ordinal);
         var nodes = NodeNames(project);
@@ -76,6 +77,7 @@ public sealed class CircuitDeck
                 continue;
             }
             if (e.Ref is null && letter is 'V' or 'I') continue; // a wire on the board: the importer joined its nets
+            if (!powered && letter is 'V' or 'I') continue;
             var part = e.Ref is null ? null : project.FindPart(e.Ref);
             if (part is not null) written.Add(part.Ref);
             var sensed = part is not null && Sensed(part.Ref);
@@ -98,7 +100,7 @@ public sealed class CircuitDeck
             foreach (var pin in landing.Pins)
             {
                 var net = project.FindNet(pin.Net);
-                if (net is null || net.Ground || net.Voltage is not { } volts || net.VoltageEstimated || net.Class is not (NetClass.Power or NetClass.Hv) || !fed.Add(net.Name)) continue;
+                if (!powered || net is null || net.Ground || net.Voltage is not { } volts || net.VoltageEstimated || net.Class is not (NetClass.Power or NetClass.Hv) || !fed.Add(net.Name)) continue;
                 var name = $"vpp_supply{supplies.Count + 1}";
                 body.Append(name).Append(' ').Append(NetNode(net.Name)).Append(" 0 DC ").Append(Num(volts)).Append('\n');
                 supplies.Add((name, net.Name, NetNames.Ground));
@@ -113,6 +115,18 @@ public sealed class CircuitDeck
         text.Append(".options rshunt=").Append(Num(Shunt)).Append('\n');
         text.Append(".op\n.end\n");
         return new CircuitDeck(text.ToString(), nodes, senses, supplies, unmodelled);
+    }
+
+    /// <summary>
+    /// This deck with a meter's diode-test source between two nets: 3 V open-circuit behind 2.4 kΩ (about 1.2 mA into a
+    /// short), + on the first net. The reading is V(first) - V(second). Common practice for handheld meters, no source.
+    /// </summary>
+    public string WithDiodeTest(string plusNet, string minusNet)
+    {
+        string Node(string net) => Nodes.TryGetValue(net, out var n) ? n : "0";
+        var probe = $"vpp_meter pp_meter {Node(minusNet)} DC 3\nrpp_meter pp_meter {Node(plusNet)} 2400\n";
+        var at = Text.LastIndexOf(".options", StringComparison.Ordinal);
+        return Text[..at] + probe + Text[at..];
     }
 
     // Parts that are open at DC (capacitors, crystals, trimmer capacitors) need no line; landings are wires off the board.

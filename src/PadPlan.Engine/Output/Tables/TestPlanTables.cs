@@ -41,6 +41,7 @@ public static class TestPlanTables
     private static string ReadingText(DcPath path) => path.Reading switch
     {
         DcReading.Low => path.Ohms is { } r && r >= 1e-6 ? $"low, about {r.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture)} Ω" : "low, about 0 Ω",
+        DcReading.OneWay when path.Junction is { BothWays: true } j => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"diode {j.Range.Low:0.0#}-{j.Range.High:0.0#} V both ways"),
         DcReading.OneWay when path.Junction is { } j => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"diode {j.Range.Low:0.0#}-{j.Range.High:0.0#} V, + on {j.Anode}"),
         DcReading.OneWay => "diode, one way only",
         _ => "may read low",
