@@ -35,7 +35,7 @@ internal sealed class ImportLedger
         var summary = (netlist.Summary ?? ValueList<ImportSummaryLine>.Empty).Concat(_summary)
             .OrderBy(l => Array.IndexOf(TopicOrder, l.Topic)).ToValueList();
         var elements = (netlist.Elements ?? ValueList<SpiceElement>.Empty).Select(OnLeads).ToValueList();
-        return new ImportRecord(summary, elements, netlist.DeckLines ?? ValueList<string>.Empty);
+        return new ImportRecord(summary, elements, netlist.DeckLines ?? ValueList<PadPlan.Model.Spice.CarriedLine>.Empty);
     }
 
     private SpiceElement OnLeads(SpiceElement element)

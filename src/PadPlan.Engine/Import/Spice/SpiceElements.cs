@@ -24,6 +24,8 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
 
     public void Element(SpiceLine line)
     {
+        // every word of an element reaches the exported deck: only SPICE deck text gets in (Model/Spice/SpiceText)
+        if (PadPlan.Model.Spice.SpiceText.Problem(line.Text) is { } problem) throw new InputException(file, $"this line {problem}", line.Line);
         var tokens = SpiceWords.Of(line, file);
         var text = SpiceWords.Normalised(line);
         var name = tokens[0].Text;

@@ -1,0 +1,70 @@
+using System.Text;
+using PadPlan.Model;
+using PadPlan.Model.Spice;
+
+namespace PadPlan.Output.Spice;
+
+/// <summary>One line of a deck that PadPlan writes: a comment, an element, or a line carried over from the imported deck.</summary>
+public abstract record DeckEntry;
+
+/// <summary>A comment line; anything that is not printable (line breaks, control characters) becomes a space, so it stays one comment line.</summary>
+public sealed record DeckComment : DeckEntry
+{
+    public DeckComment(string text) => Text = SpiceText.Comment(text);
+
+    public string Text { get; }
+}
+
+/// <summary>An element line: its name, its nodes, then its other words (value, model, options), each a checked SPICE word.</summary>
+public sealed record DeckElement : DeckEntry
+{
+    public DeckElement(string name, IEnumerable<string> nodes, IEnumerable<string> words)
+    {
+        Name = SpiceText.IsElementName(name) ? name : throw new ArgumentException("an element name must be one SPICE word that starts with a letter.", nameof(name));
+        Nodes = nodes.Select(n => SpiceText.Word(n, "a node")).ToValueList();
+        Words = words.Select(w => SpiceText.Word(w, "an element word")).ToValueList();
+    }
+
+    public string Name { get; }
+    public ValueList<string> Nodes { get; }
+    public ValueList<string> Words { get; }
+
+    public string Text => string.Join(' ', Nodes.Concat(Words).Prepend(Name));
+}
+
+/// <summary>A .model, .subckt ... .ends, .param, .include or .lib line of the imported deck, parsed (<see cref="CarriedLine"/>).</summary>
+public sealed record DeckCarried(CarriedLine Line) : DeckEntry;
+
+/// <summary>
+/// A SPICE deck as PadPlan writes it, built from the parsed model only: a title, then entries, then <c>.end</c>. No
+/// entry can hold a line break, a control character or a dot-command other than the carried ones, and the text never
+/// holds a <c>.control</c> block. <c>.include</c> and <c>.lib</c> lines are written as comments: PadPlan does not read
+/// the files they name, so it cannot vouch for them (docs/netlist-format.md, "Exported decks").
+/// </summary>
+public sealed record SpiceDeck(string Title, ValueList<DeckEntry> Entries)
+{
+    /// <summary>What the first line starts with. SPICE reads the first line as the title; a fixed start keeps any title from being read as something else (ngspice treats a first line of "*ng_script" as a command script).</summary>
+    public const string TitlePrefix = "padplan deck: ";
+
+    /// <summary>The deck as text, one entry a line, "\n" line ends.</summary>
+    public string Text
+    {
+        get
+        {
+            var text = new StringBuilder();
+            text.Append(TitlePrefix).Append(SpiceText.Comment(Title)).Append('\n');
+            foreach (var entry in Entries) text.Append(Line(entry)).Append('\n');
+            return text.Append(".end\n").ToString();
+        }
+    }
+
+    private static string Line(DeckEntry entry) => entry switch
+    {
+        DeckComment c => "* " + c.Text,
+        DeckElement e => e.Text,
+        DeckCarried { Line.Kind: CarriedKind.Include or CarriedKind.Lib } c =>
+            $"* not followed (PadPlan does not read this file; look it over, then remove the \"* \" to use it): {c.Line.Text}",
+        DeckCarried c => c.Line.Text,
+        _ => throw new ArgumentOutOfRangeException(nameof(entry)),
+    };
+}
