@@ -1,8 +1,5 @@
 using System.Text;
-using PadPlan.Model;
-using PadPlan.Model.Spice;
-
-namespace PadPlan.Output.Spice;
+namespace PadPlan.Model.Spice;
 
 /// <summary>One line of a deck that PadPlan writes: a comment, an element, or a line carried over from the imported deck.</summary>
 public abstract record DeckEntry;
@@ -36,6 +33,16 @@ public sealed record DeckElement : DeckEntry
 public sealed record DeckCarried(CarriedLine Line) : DeckEntry;
 
 /// <summary>
+/// The one analysis PadPlan ever runs: the DC operating point (<c>.op</c>), with every node tied to ground through
+/// <paramref name="Shunt"/> ohms (<c>.options rshunt</c>) so that a node only capacitors or an open lead reach still has a
+/// solution. Written from the number alone.
+/// </summary>
+public sealed record DeckOperatingPoint(double Shunt) : DeckEntry
+{
+    public double Shunt { get; } = Shunt > 0 && double.IsFinite(Shunt) ? Shunt : throw new ArgumentOutOfRangeException(nameof(Shunt), "the shunt resistance must be a positive number of ohms.");
+}
+
+/// <summary>
 /// A SPICE deck as PadPlan writes it, built from the parsed model only: a title, then entries, then <c>.end</c>. No
 /// entry can hold a line break, a control character or a dot-command other than the carried ones, and the text never
 /// holds a <c>.control</c> block. <c>.include</c> and <c>.lib</c> lines are written as comments: PadPlan does not read
@@ -65,6 +72,7 @@ public sealed record SpiceDeck(string Title, ValueList<DeckEntry> Entries)
         DeckCarried { Line.Kind: CarriedKind.Include or CarriedKind.Lib } c =>
             $"* not followed (PadPlan does not read this file; look it over, then remove the \"* \" to use it): {c.Line.Text}",
         DeckCarried c => c.Line.Text,
+        DeckOperatingPoint op => $".options rshunt={ElementWords.Plain(op.Shunt)}\n.op",
         _ => throw new ArgumentOutOfRangeException(nameof(entry)),
     };
 }
