@@ -11,7 +11,7 @@ public static class Cautions
     public const string Flux = "Solder flux fume is a known cause of occupational asthma: use extraction or good ventilation and do not overheat the iron.";
     public const string Glue = "Cyanoacrylate glue bonds skin at once and gives off irritant vapour: use little, ventilate, keep a solvent for skin at hand.";
     /// <summary>The cautions for working on a powered board (DOMAIN §8, common practice).</summary>
-    public const string PoweredBoard = "Power up the first time from a bench supply with its current limit set as below, never straight from a battery or mains unit; watch the current before measuring voltages. A reversed electrolytic can heat, vent or burst: switch off at once if the supply sits at its limit or a part gets hot. Measure with one probe clipped to the plane and one hand free.";
+    public const string PoweredBoard = "Power up the first time from a bench supply with its current limit set as in the power-up table, never straight from a battery or mains unit; watch the current before measuring voltages. A reversed electrolytic can heat, vent or burst: switch off at once if the supply sits at its limit or a part gets hot. Measure with one probe clipped to the plane and one hand free.";
     public const string Defer = "These notes do not replace local codes, the part makers' data or licensed practice.";
 
     /// <summary>Signal nets above the high-voltage threshold, or marked as high voltage.</summary>

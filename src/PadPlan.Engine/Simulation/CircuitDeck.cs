@@ -19,7 +19,7 @@ public sealed class CircuitDeck
     /// <summary>Resistance from every node to ground that makes floating nodes solvable (Ω). At 1 TΩ it moves a node fed through 1 MΩ by 1 µV per volt.</summary>
     public const double Shunt = 1e12;
 
-    private CircuitDeck(SpiceDeck deck, IReadOnlyDictionary<string, string> nodes, IReadOnlyList<Sense> senses, IReadOnlyList<(string Source, string Plus, string Minus)> supplies, IReadOnlyList<string> unmodelled)
+    private CircuitDeck(SpiceDeck deck, IReadOnlyDictionary<string, string> nodes, IReadOnlyList<Sense> senses, IReadOnlyList<(string Source, string Plus, string Minus, string Label)> supplies, IReadOnlyList<string> unmodelled)
     {
         Deck = deck;
         Text = deck.Text;
@@ -37,8 +37,8 @@ public sealed class CircuitDeck
     /// <summary>Project net name to deck node.</summary>
     public IReadOnlyDictionary<string, string> Nodes { get; }
     public IReadOnlyList<Sense> Senses { get; }
-    /// <summary>Voltage sources that feed the board: source name (lower case) and the nets of its + and - ends.</summary>
-    public IReadOnlyList<(string Source, string Plus, string Minus)> Supplies { get; }
+    /// <summary>Voltage sources that feed the board: source name (lower case), the nets of its + and - ends, and what a builder calls it.</summary>
+    public IReadOnlyList<(string Source, string Plus, string Minus, string Label)> Supplies { get; }
     /// <summary>Parts that touch a net but have no model: the operating point would be wrong without them.</summary>
     public IReadOnlyList<string> Unmodelled { get; }
 
@@ -51,7 +51,7 @@ public sealed class CircuitDeck
         var models = new SortedDictionary<string, DeviceModels.Model>(StringComparer.Ordinal);
         var senses = new List<Sense>();
         var senseLines = new List<DeckEntry>();
-        var supplies = new List<(string, string, string)>();
+        var supplies = new List<(string, string, string, string)>();
         var unmodelled = new List<string>();
         var record = project.Imported ?? ImportRecord.Empty;
 
@@ -85,7 +85,7 @@ public sealed class CircuitDeck
             var sensed = part is not null && Sensed(part.Ref);
             var list = e.Nodes.Select(n => part is not null && n.Pin is not null ? LeadNode(part, n.Pin, sensed) : NetNode(n.Net)).ToList();
             body.Add(new DeckElement(e.Name, list, ElementWords.Of(e, part)));
-            if (letter == 'V' && list.Count >= 2 && part is not null) supplies.Add((e.Name.ToLowerInvariant(), e.Nodes[0].Net, e.Nodes[1].Net));
+            if (letter == 'V' && list.Count >= 2 && part is not null) supplies.Add((e.Name.ToLowerInvariant(), e.Nodes[0].Net, e.Nodes[1].Net, $"{e.Name} (landing {part.Ref})"));
         }
 
         foreach (var part in project.Parts.Where(p => !written.Contains(p.Ref)).OrderBy(p => p.Ref, NaturalOrder.Comparer))
@@ -105,7 +105,7 @@ public sealed class CircuitDeck
                 if (!powered || net is null || net.Ground || net.Voltage is not { } volts || net.VoltageEstimated || net.Class is not (NetClass.Power or NetClass.Hv) || !fed.Add(net.Name)) continue;
                 var name = $"vpp_supply{supplies.Count + 1}";
                 body.Add(new DeckElement(name, [NetNode(net.Name), "0"], ["DC", Num(volts)]));
-                supplies.Add((name, net.Name, NetNames.Ground));
+                supplies.Add((name, net.Name, NetNames.Ground, $"landing {landing.Ref}"));
             }
 
         var entries = new List<DeckEntry> { new DeckComment("written by padplan from the parsed project: nodes n1.. are nets, 0 is ground; vpp_s sources sense lead currents") };

@@ -40,7 +40,7 @@ public static class Simulator
             var power = leads.Sum(l => l.Amps * nets.GetValueOrDefault(part.NetOf(l.Pin) ?? "", 0));
             parts[group.Key] = new PartFigures(group.Key, leads, power);
         }
-        var supplies = deck.Supplies.Select(s => new SupplyFigure(s.Source, s.Plus,
+        var supplies = deck.Supplies.Select(s => new SupplyFigure(s.Label, s.Plus,
             nets.GetValueOrDefault(s.Plus) - nets.GetValueOrDefault(s.Minus), -values.Branches.GetValueOrDefault(s.Source))).ToValueList();
         return new OperatingPoint(nets, supplies, parts);
     }

@@ -19,6 +19,9 @@ public static class PowerUpTable
     /// <summary>The tolerance band of a measured voltage, as a fraction of the simulated one (see the table's notes). Common practice, no source.</summary>
     public const double Band = 0.10;
 
+    /// <summary>The least band (V): a handheld meter's last digit and the probes' contact on a 2 V range. Common practice, no source.</summary>
+    public const double BandFloor = 0.05;
+
     /// <summary>Most nets listed for measuring: the first ones a builder checks.</summary>
     public const int MaxNets = 30;
 
@@ -51,11 +54,13 @@ public static class PowerUpTable
                 (simulation ?? SimulationResult.Without("not simulated")).Label));
         }
         var supplyNets = supplies.Select(s => s.Net).ToHashSet(StringComparer.Ordinal);
-        foreach (var net in project.Nets.Where(n => !n.Ground && !supplyNets.Contains(n.Name)).OrderBy(n => n.Name, NaturalOrder.Comparer).Take(MaxNets))
+        // highest voltages first: the rails, then what hangs from them
+        foreach (var net in project.Nets.Where(n => !n.Ground && !supplyNets.Contains(n.Name))
+            .OrderByDescending(n => Math.Abs(op?.Volts(n.Name) ?? n.Voltage ?? 0)).ThenBy(n => n.Name, NaturalOrder.Comparer).Take(MaxNets))
         {
             if (op?.Volts(net.Name) is { } v)
             {
-                var band = Math.Abs(v) * Band;
+                var band = Math.Max(Math.Abs(v) * Band, BandFloor);
                 rows.Add(Row(rows, $"Measure {net.Name} to the plane", PadOf(net.Name),
                     $"{NetVoltage.Simulated(v)} \u00b1 {NetVoltage.Simulated(band)} (sim.)", $"{NetVoltage.Simulated(v - band)} to {NetVoltage.Simulated(v + band)}"));
             }
@@ -70,7 +75,7 @@ public static class PowerUpTable
             NetVoltage.Summary(simulation),
             op is null
                 ? "Without a simulator the figures are upper bounds: a node fed through resistors sits at or below the supply it reaches; the real value can be much lower."
-                : $"Tolerance band: \u00b1{Band:P0} of the simulated voltage. A voltage set by the ratio of two 5 % resistors moves by up to the sum of their tolerances, and the generic transistor and zener models differ from the part in hand by about as much (common practice, no source). Measure each at its pad with the black probe on the plane.",
+                : $"Tolerance band: \u00b1{Band:P0} of the simulated voltage, at least \u00b1{BandFloor:0.00} V. A voltage set by the ratio of two 5 % resistors moves by up to the sum of their tolerances, and the generic transistor and zener models differ from the part in hand by about as much (common practice, no source). Measure each at its pad with the black probe on the plane.",
         };
         if (Cautions.HighVoltageWarning(project) is { } hv) notes.Insert(0, "Caution: " + hv);
         return ReportTable.Create(Title, ["#", "Step", "Where", "Expect", "How it is found", "Done"], rows, notes);
