@@ -41,7 +41,8 @@ public static class Simulator
             parts[group.Key] = new PartFigures(group.Key, leads, power);
         }
         var supplies = deck.Supplies.Select(s => new SupplyFigure(s.Label, s.Plus,
-            nets.GetValueOrDefault(s.Plus) - nets.GetValueOrDefault(s.Minus), -values.Branches.GetValueOrDefault(s.Source))).ToValueList();
+            nets.GetValueOrDefault(s.Plus) - nets.GetValueOrDefault(s.Minus), -values.Branches.GetValueOrDefault(s.Source)))
+            .Where(s => Math.Abs(s.Volts) > 1e-9).ToValueList(); // a 0 V source is a signal input at rest, not a supply
         return new OperatingPoint(nets, supplies, parts);
     }
 }
