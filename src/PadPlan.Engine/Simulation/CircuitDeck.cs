@@ -79,7 +79,8 @@ public sealed class CircuitDeck
                 continue;
             }
             if (e.Ref is null && letter is 'V' or 'I') continue; // a wire on the board: the importer joined its nets
-            if (!powered && letter is 'V' or 'I') continue;
+            // at power-up only the supplies are connected: a signal source (an antenna, a generator) or an output port is not
+            if (letter is 'V' or 'I' && (!powered || !Supply(project, e))) continue;
             var part = e.Ref is null ? null : project.FindPart(e.Ref);
             if (part is not null) written.Add(part.Ref);
             var sensed = part is not null && Sensed(part.Ref);
@@ -119,6 +120,13 @@ public sealed class CircuitDeck
         entries.Add(new DeckOperatingPoint(Shunt));
         var deck = new SpiceDeck($"operating point of {project.Name}", entries.ToValueList());
         return new CircuitDeck(deck, nodes, senses, supplies, unmodelled);
+    }
+
+    // A source that feeds the board: its + node's net is a power or high-voltage rail, or has a stated voltage and is no signal input.
+    private static bool Supply(Project project, SpiceElement e)
+    {
+        if (e.Nodes.Count < 2 || project.FindNet(e.Nodes[0].Net) is not { Ground: false } net || net.Role == SignalRole.Input) return false;
+        return net.Class is NetClass.Power or NetClass.Hv || net.Voltage is not null && !net.VoltageEstimated;
     }
 
     /// <summary>

@@ -30,18 +30,19 @@ public static partial class NgspiceOutput
             if (section == "node") nodes[name] = value;
             else if (name.EndsWith("#branch", StringComparison.Ordinal)) branches[name[..^"#branch".Length]] = value;
         }
-        if (nodes.Count > 0) return (new Values(nodes, branches), null);
+        // a singular matrix sends ngspice into gmin and source stepping, and what it prints then is no operating point
+        if (nodes.Count > 0 && !output.Contains("singular matrix", StringComparison.OrdinalIgnoreCase)) return (new Values(nodes, branches), null);
         return (null, Failure(output));
     }
 
     // What ngspice says when it cannot find an operating point, in the words a builder can act on.
     private static string Failure(string output)
     {
+        if (output.Contains("singular matrix", StringComparison.OrdinalIgnoreCase))
+            return "ngspice found the circuit unsolvable at DC (singular matrix: a supply across a winding, a loop of windings, or a node with no path to ground)";
         if (output.Contains("no convergence", StringComparison.OrdinalIgnoreCase) || output.Contains("iteration limit", StringComparison.OrdinalIgnoreCase)
             || output.Contains("Timestep too small", StringComparison.OrdinalIgnoreCase))
             return "the operating point did not converge in ngspice (check the circuit for a supply shorted by a junction, a loop of sources or windings, or a part value far out of range)";
-        if (output.Contains("singular matrix", StringComparison.OrdinalIgnoreCase))
-            return "ngspice found the circuit unsolvable (singular matrix: a loop of sources or windings, or a node with no path to ground)";
         var error = output.ReplaceLineEndings("\n").Split('\n').Select(l => l.Trim()).FirstOrDefault(l => l.StartsWith("Error", StringComparison.OrdinalIgnoreCase));
         return error is null ? "ngspice printed no operating point" : $"ngspice printed no operating point ({Short(error)})";
     }

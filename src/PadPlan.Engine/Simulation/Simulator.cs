@@ -15,7 +15,9 @@ public static class Simulator
         if (options.Off) return SimulationResult.Without("simulation switched off");
         var program = NgspiceProgram.Find(options);
         if (program is null) return SimulationResult.NotFound;
-        var deck = CircuitDeck.Of(project);
+        CircuitDeck deck;
+        try { deck = CircuitDeck.Of(project); }
+        catch (ArgumentException e) { return SimulationResult.Without($"the circuit could not be written as a deck ({e.Message})"); }
         if (deck.Unmodelled.Count > 0)
             return SimulationResult.Without($"no SPICE model for {string.Join(", ", deck.Unmodelled.Take(6))}{(deck.Unmodelled.Count > 6 ? $" and {deck.Unmodelled.Count - 6} more" : "")} (give the part a SPICE line in the netlist)");
         var (output, failure) = NgspiceProgram.Run(program, deck.Text, options.Limit);
