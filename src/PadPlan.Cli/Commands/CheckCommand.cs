@@ -17,9 +17,10 @@ public static class CheckCommand
         var parasitics = new Option<bool>("--parasitics") { Description = "Estimate pad capacitance and lead inductance for every net, not only rf nets." };
         var quiet = SharedOptions.Quiet();
         var ngspice = SharedOptions.Ngspice();
+        var wide = SharedOptions.Wide();
         var command = new Command("check", "Check a plan against its circuit: connectivity, spacing, reach, high voltage; polarity and ratings at the simulated operating point; estimate parasitics.")
         {
-            project, json, strict, parasitics, quiet, ngspice,
+            project, json, strict, parasitics, quiet, ngspice, wide,
         };
         command.SetAction(parse => context.Guarded(() =>
         {
@@ -37,7 +38,7 @@ public static class CheckCommand
             {
                 if (!report.Passed(isStrict)) context.Out.WriteLine(CheckReportTables.Summary(plan.Name, report, isStrict));
             }
-            else context.Out.Write(CheckReportTables.ToText(plan.Name, report, isStrict));
+            else context.Out.Write(CheckReportTables.ToText(plan.Name, report, isStrict, SharedOptions.TableWidth(context, parse, wide)));
             return report.Passed(isStrict) ? ExitCodes.Success : ExitCodes.RuleViolations;
         }));
         return command;

@@ -42,7 +42,8 @@ public static class SheetsCommand
             var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate, simulation), check, materials.All, materials.Cutting);
             context.Err.WriteLine(PadPlan.Simulation.NetVoltage.Summary(simulation));
             SheetOutput.Write(context, book, parse.GetValue(output)!.FullName, chosenFormats, resolution);
-            context.Err.WriteLine($"{book.Sheets.Count} sheet(s) on {chosenPaper.Name}, dated {printedDate:yyyy-MM-dd}. Print the template at actual size and measure its check bar before cutting.");
+            context.Err.WriteLine($"{book.Summary()}; on {chosenPaper.Name}, dated {printedDate:yyyy-MM-dd}.");
+            context.Err.WriteLine("Print the template at actual size and measure its check bar before cutting.");
             return ExitCodes.Success;
         }));
         return command;

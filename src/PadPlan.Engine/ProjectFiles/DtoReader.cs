@@ -101,6 +101,7 @@ internal sealed partial class DtoReader(string file, byte[] text)
         {
             PadGap = dto.PadGap ?? d.PadGap,
             GroundGap = dto.GroundGap ?? d.GroundGap,
+            LeadGap = dto.LeadGap ?? d.LeadGap,
             MaxLeadRf = dto.MaxLeadRf ?? d.MaxLeadRf,
             MaxLeadAudio = dto.MaxLeadAudio ?? d.MaxLeadAudio,
             MaxLeadGeneral = dto.MaxLeadGeneral ?? d.MaxLeadGeneral,
@@ -110,7 +111,7 @@ internal sealed partial class DtoReader(string file, byte[] text)
             TempRise = dto.TempRise ?? d.TempRise,
             CopperThickness = dto.CopperThickness ?? d.CopperThickness,
         };
-        foreach (var (name, value) in new[] { ("padGap", rules.PadGap), ("groundGap", rules.GroundGap), ("tempRise", rules.TempRise), ("copperThickness", rules.CopperThickness) })
+        foreach (var (name, value) in new[] { ("padGap", rules.PadGap), ("groundGap", rules.GroundGap), ("leadGap", rules.LeadGap), ("tempRise", rules.TempRise), ("copperThickness", rules.CopperThickness) })
             if (!(value >= 0) || !double.IsFinite(value)) throw Fail($"{path}.{name}", $"{name} must be zero or more (got {value}).");
         foreach (var (name, value) in new[] { ("maxLeadRf", rules.MaxLeadRf), ("maxLeadAudio", rules.MaxLeadAudio), ("maxLeadGeneral", rules.MaxLeadGeneral), ("maxLeadPower", rules.MaxLeadPower), ("maxLeadHv", rules.MaxLeadHv) })
             if (!(value > 0) || !double.IsFinite(value)) throw Fail($"{path}.{name}", $"{name} must be a positive length in mm (got {value}).");

@@ -52,6 +52,7 @@ internal static partial class DtoWriter
     {
         PadGap = r.PadGap,
         GroundGap = r.GroundGap,
+        LeadGap = r.LeadGap,
         MaxLeadRf = r.MaxLeadRf,
         MaxLeadAudio = r.MaxLeadAudio,
         MaxLeadGeneral = r.MaxLeadGeneral,

@@ -68,6 +68,7 @@ public sealed class RulesDto
 {
     public double? PadGap { get; set; }
     public double? GroundGap { get; set; }
+    public double? LeadGap { get; set; }
     public double? MaxLeadRf { get; set; }
     public double? MaxLeadAudio { get; set; }
     public double? MaxLeadGeneral { get; set; }

@@ -117,7 +117,8 @@ public sealed class CircuitDeck
         }
         entries.AddRange(body);
         entries.AddRange(senseLines);
-        entries.Add(new DeckOperatingPoint(Shunt));
+        entries.Add(DeckCommand.Option("rshunt", Shunt));
+        entries.Add(DeckCommand.OperatingPoint);
         var deck = new SpiceDeck($"operating point of {project.Name}", entries.ToValueList());
         return new CircuitDeck(deck, nodes, senses, supplies, unmodelled);
     }
@@ -137,7 +138,7 @@ public sealed class CircuitDeck
     {
         string Node(string net) => Nodes.TryGetValue(net, out var n) ? n : "0";
         var entries = Deck.Entries.ToList();
-        entries.InsertRange(entries.FindIndex(e => e is DeckOperatingPoint),
+        entries.InsertRange(entries.FindIndex(e => e is DeckCommand),
             [new DeckElement("vpp_meter", ["pp_meter", Node(minusNet)], ["DC", "3"]), new DeckElement("rpp_meter", ["pp_meter", Node(plusNet)], ["2400"])]);
         return (Deck with { Entries = entries.ToValueList() }).Text;
     }

@@ -7,7 +7,7 @@ namespace PadPlan.Tests.Regressions;
 /// Regression: the SPICE expression reader recursed once per parenthesis and per unary sign, so 7,418 nested
 /// parentheses in one {...} (a 15 KB line) or 47,732 unary minus signs overflowed the stack (SIGABRT, exit 134) and
 /// left the .lock file behind. Now a line past the depth limits (docs/limits.md) is refused with exit 2 naming the line,
-/// at import and in a project file's deck text (where the length limit on deck text, docs/limits.md, comes first for longer lines). The 100,000-deep cases must finish (exit 2), not crash; no timing is asserted.
+/// at import and in a project file's deck text (the line-length limits of docs/limits.md refuse lines over 2,000 characters first, so the depth checks are tested with lines under that). The 100,000-deep cases must finish (exit 2), not crash; no timing is asserted.
 /// </summary>
 public sealed class Regression_DeepExpression
 {
@@ -22,7 +22,16 @@ public sealed class Regression_DeepExpression
     [Fact]
     public void One_hundred_thousand_parentheses_in_a_value_exit_2_naming_the_line()
     {
+        // the netlist line-length limit (docs/limits.md) refuses this one first; the point is exit 2, not a crash
         var result = Import($"R1 a 0 {{{new string('(', 100_000)}1{new string(')', 100_000)}}}");
+        Assert.True(result.ExitCode == 2, $"exit {result.ExitCode}: {result.Err}");
+        Assert.Contains("deep.cir:3:", result.Err, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Parentheses_past_the_depth_limit_within_the_line_length_exit_2_naming_the_line()
+    {
+        var result = Import($"R1 a 0 {{{new string('(', 500)}1{new string(')', 500)}}}");
         Assert.True(result.ExitCode == 2, $"exit {result.ExitCode}: {result.Err}");
         Assert.Contains("deep.cir:3:", result.Err, StringComparison.Ordinal);
         Assert.Contains("64 deep", result.Err, StringComparison.Ordinal);
@@ -40,6 +49,14 @@ public sealed class Regression_DeepExpression
     public void Fifty_thousand_unary_minus_signs_exit_2_naming_the_line()
     {
         var result = Import($"R1 a 0 {{{new string('-', 50_000)}1}}");
+        Assert.True(result.ExitCode == 2, $"exit {result.ExitCode}: {result.Err}");
+        Assert.Contains("deep.cir:3:", result.Err, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Signs_past_the_limit_within_the_line_length_exit_2_naming_the_line()
+    {
+        var result = Import($"R1 a 0 {{{new string('-', 1_000)}1}}");
         Assert.True(result.ExitCode == 2, $"exit {result.ExitCode}: {result.Err}");
         Assert.Contains("deep.cir:3:", result.Err, StringComparison.Ordinal);
         Assert.Contains("signs", result.Err, StringComparison.Ordinal);

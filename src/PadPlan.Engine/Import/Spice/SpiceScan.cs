@@ -3,8 +3,8 @@ using PadPlan.Model.Spice;
 
 namespace PadPlan.Import;
 
-/// <summary>A subcircuit definition: its port names, the line it starts on and the element letters in its body.</summary>
-public sealed record SubcircuitDefinition(string Name, List<string> Ports, int Line, string BodyLetters)
+/// <summary>A subcircuit definition: its port names, the line it starts on, the element letters in its body, and whether the body puts a node on global ground (0).</summary>
+public sealed record SubcircuitDefinition(string Name, List<string> Ports, int Line, string BodyLetters, bool UsesGround = false)
 {
     /// <summary>Only behavioural sources and passive parts inside (a thermal network, an ideal model): nothing to solder unless its ports reach real parts.</summary>
     public bool SimulationOnly => BodyLetters.Length > 0 && BodyLetters.All(c => "BEFGHRCLVIK".Contains(c));
@@ -34,13 +34,14 @@ public sealed partial record SpiceScan(
         var models = new Dictionary<string, string>(StringComparer.OrdinalIgnoreCase);
         var parameters = new Dictionary<string, double>(StringComparer.OrdinalIgnoreCase);
         var deck = new List<CarriedLine>();
+        var deckLineNumbers = new List<int>();
         var top = new List<SpiceLine>();
-        var open = new Stack<(string Name, int Line, System.Text.StringBuilder Letters)>();
+        var open = new Stack<(string Name, int Line, System.Text.StringBuilder Letters, bool[] Ground)>();
         SpiceLine? control = null;
         void Carry(SpiceLine line)
         {
             if (SpiceText.Problem(line.Text) is { } problem) throw new InputException(file, $"this line {problem}", line.Line);
-            try { deck.Add(CarriedLine.Parse(line.Text)); }
+            try { deck.Add(CarriedLine.Parse(line.Text)); deckLineNumbers.Add(line.Line); }
             catch (ArgumentException e) { throw new InputException(file, e.Message, line.Line); }
         }
         void Skipped(SpiceLine line, string head, string where) =>
@@ -67,15 +68,15 @@ public sealed partial record SpiceScan(
                 if (open.Count == 0)
                     subckts[words[1]] = new SubcircuitDefinition(words[1], words.Skip(2).TakeWhile(w => !w.Contains('=') && !w.Equals("params:", StringComparison.OrdinalIgnoreCase)).ToList(), line.Line, "");
                 else open.Peek().Letters.Append('X'); // a nested definition: not simulation-only
-                open.Push((words[1], line.Line, new System.Text.StringBuilder()));
+                open.Push((words[1], line.Line, new System.Text.StringBuilder(), [false]));
                 Carry(line);
                 continue;
             }
             if (head == ".ends")
             {
                 if (open.Count == 0) throw new InputException(file, ".ends with no .subckt open. Remove it, or add the .subckt line it closes.", line.Line);
-                var (name, _, letters) = open.Pop();
-                if (open.Count == 0 && subckts.TryGetValue(name, out var def)) subckts[name] = def with { BodyLetters = letters.ToString() };
+                var (name, _, letters, ground) = open.Pop();
+                if (open.Count == 0 && subckts.TryGetValue(name, out var def)) subckts[name] = def with { BodyLetters = letters.ToString(), UsesGround = ground[0] };
                 Carry(line);
                 continue;
             }
@@ -83,7 +84,11 @@ public sealed partial record SpiceScan(
             {
                 if (head is ".model" or ".param" || !head.StartsWith('.')) Carry(line);
                 else Skipped(line, words[0], $" inside .subckt {NetlistText.Echo(open.Peek().Name)}");
-                if (!head.StartsWith('.')) open.Peek().Letters.Append(char.ToUpperInvariant(head[0]));
+                if (!head.StartsWith('.'))
+                {
+                    open.Peek().Letters.Append(char.ToUpperInvariant(head[0]));
+                    if (NodeWords(words).Any(NetNames.IsGround)) open.Peek().Ground[0] = true;
+                }
                 if (head == ".model" && words.Count >= 3) models.TryAdd(words[1], words[2].ToLowerInvariant());
                 continue;
             }
@@ -95,17 +100,34 @@ public sealed partial record SpiceScan(
             else if (Carried.Contains(head)) Carry(line);
             else if (NotCarried.Contains(head)) Skipped(line, words[0], "");
             if (head is ".include" or ".inc" or ".lib" && words.Count >= 2)
-                notes.Add(new ImportNote(file, line.Line, $"{words[0]} {NetlistText.Echo(string.Join(" ", words.Skip(1)))}: not followed. Parts and subcircuits in that file are not imported; the exported deck names it in a comment only (docs/netlist-format.md, \"Exported decks\")."));
+                notes.Add(new ImportNote(file, line.Line, $"{words[0]} {NetlistText.Echo(string.Join(" ", words.Skip(1)))}: not followed. Parts and subcircuits in that file are not imported; the exported deck names it in a comment only (docs/netlist-format.md, \"Exported decks are built from the parsed model\")."));
             else if (!head.StartsWith('.')) top.Add(line);
         }
         if (open.Count > 0)
         {
-            var (name, at, _) = open.Pop();
+            var (name, at, _, _) = open.Pop();
             throw new InputException(file, $".subckt {NetlistText.Echo(name)} is never closed: add .ends {NetlistText.Echo(name)} after its last line.", at);
         }
         if (control is not null)
             throw new InputException(file, ".control is never closed: add .endc after the last command of the block.", control.Line);
+        if (CarriedLine.Problem(deck) is { } problem) throw new InputException(file, problem.Message, deckLineNumbers[problem.Index]);
         return new SpiceScan(subckts, models, parameters, deck, top);
+    }
+
+    // The node words of an element line by its letter (ngspice manual, element syntax): a subcircuit call's are all its
+    // positional words but the last (the subcircuit name).
+    private static IEnumerable<string> NodeWords(List<string> words)
+    {
+        var positional = words.Skip(1).TakeWhile(w => !w.Contains('=') && !w.Equals("params:", StringComparison.OrdinalIgnoreCase)).ToList();
+        var count = char.ToUpperInvariant(words[0][0]) switch
+        {
+            'K' => 0,
+            'J' or 'Q' => 3,
+            'M' or 'E' or 'G' or 'S' or 'T' => 4,
+            'X' => positional.Count - 1,
+            _ => 2,
+        };
+        return positional.Take(Math.Max(0, count));
     }
 
     // ".param a=1k b={a*2} c=-(3+2)*2": each in turn, so later ones may use earlier ones; one that cannot be evaluated is

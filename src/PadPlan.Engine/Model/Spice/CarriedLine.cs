@@ -106,6 +106,68 @@ public sealed record CarriedLine
                     return (i, $"{lines[i].Words[0]} inside a .subckt block; put it before the block.");
             }
         }
-        return depth > 0 ? (opened, ".subckt is never closed: add .ends after its last line.") : null;
+        return depth > 0 ? (opened, ".subckt is never closed: add .ends after its last line.") : Calls(lines);
+    }
+
+    // The subcircuit calls (X lines) inside the carried definitions: none may call itself, directly or through others,
+    // chains are at most MaxSubcircuitNesting deep, and no definition expands to more than MaxSubcircuitElements elements,
+    // so that a simulator expanding them does bounded work. Calls to subcircuits not defined here are not followed.
+    private static (int Index, string Message)? Calls(IReadOnlyList<CarriedLine> lines)
+    {
+        var bodies = new Dictionary<string, (int Line, List<string> Calls, int Elements)>(StringComparer.OrdinalIgnoreCase);
+        var open = new Stack<string>();
+        for (var i = 0; i < lines.Count; i++)
+        {
+            var line = lines[i];
+            if (line.Kind == CarriedKind.Subcircuit)
+            {
+                open.Push(line.Words[1]);
+                bodies.TryAdd(line.Words[1], (i, [], 0));
+            }
+            else if (line.Kind == CarriedKind.Ends) open.Pop();
+            else if (line.Kind == CarriedKind.Element && open.Count > 0)
+            {
+                var body = bodies[open.Peek()];
+                if (char.ToUpperInvariant(line.Words[0][0]) == 'X' && CalledName(line.Words) is { } called) body.Calls.Add(called);
+                else bodies[open.Peek()] = body with { Elements = body.Elements + 1 };
+            }
+        }
+        var size = new Dictionary<string, long>(StringComparer.OrdinalIgnoreCase);
+        var visiting = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
+        (int, string)? problem = null;
+        long Size(string name, int depth)
+        {
+            if (problem is not null || !bodies.TryGetValue(name, out var body)) return 1;
+            if (size.TryGetValue(name, out var known)) return known;
+            if (depth > SpiceText.MaxSubcircuitNesting)
+            {
+                problem = (body.Line, $"subcircuit calls nest more than {SpiceText.MaxSubcircuitNesting} deep; flatten them.");
+                return 1;
+            }
+            if (!visiting.Add(name))
+            {
+                problem = (body.Line, "a subcircuit calls itself, directly or through others; SPICE cannot expand that. Remove the call.");
+                return 1;
+            }
+            long total = body.Elements;
+            foreach (var called in body.Calls) total = Math.Min(total + Size(called, depth + 1), long.MaxValue / 2);
+            visiting.Remove(name);
+            if (total > SpiceText.MaxSubcircuitElements && problem is null)
+                problem = (body.Line, $"this subcircuit expands to more than {SpiceText.MaxSubcircuitElements:N0} elements through its calls; a deck PadPlan writes stays below that.");
+            return size[name] = total;
+        }
+        foreach (var name in bodies.Keys.ToList())
+        {
+            Size(name, 1);
+            if (problem is not null) return problem;
+        }
+        return null;
+    }
+
+    // An X line: nodes, then the subcircuit name, then optional "params:" and name=value words.
+    private static string? CalledName(ValueList<string> words)
+    {
+        var positional = words.Skip(1).TakeWhile(w => !w.Contains('=') && !w.Equals("params:", StringComparison.OrdinalIgnoreCase)).ToList();
+        return positional.Count > 0 ? positional[^1] : null;
     }
 }

@@ -1,4 +1,3 @@
-using System.Globalization;
 using PadPlan.Model.Values;
 
 namespace PadPlan.Model.Spice;
@@ -62,6 +61,6 @@ public static class ElementWords
 
     private static bool LooksLikeNumber(string w) => w.Length > 0 && (char.IsAsciiDigit(w[0]) || w[0] is '.' or '+' or '-' && w.Length > 1 && (char.IsAsciiDigit(w[1]) || w[1] == '.'));
 
-    /// <summary>A plain SPICE number: digits, point and exponent only, so every SPICE reads it the same.</summary>
-    public static string Plain(double number) => number.ToString("G15", CultureInfo.InvariantCulture);
+    /// <summary>A plain SPICE number: digits, point and exponent only, so every SPICE reads it the same (<see cref="SpiceText.Number"/>).</summary>
+    public static string Plain(double number) => SpiceText.Number(number);
 }

@@ -1,4 +1,5 @@
 using System.Text;
+
 namespace PadPlan.Model.Spice;
 
 /// <summary>One line of a deck that PadPlan writes: a comment, an element, or a line carried over from the imported deck.</summary>
@@ -33,13 +34,25 @@ public sealed record DeckElement : DeckEntry
 public sealed record DeckCarried(CarriedLine Line) : DeckEntry;
 
 /// <summary>
-/// The one analysis PadPlan ever runs: the DC operating point (<c>.op</c>), with every node tied to ground through
-/// <paramref name="Shunt"/> ohms (<c>.options rshunt</c>) so that a node only capacitors or an open lead reach still has a
-/// solution. Written from the number alone.
+/// A command that PadPlan itself adds to a deck it runs (never text from an input file): the operating point, or an
+/// option from a fixed list with a number. Nothing else, and never a .control block.
 /// </summary>
-public sealed record DeckOperatingPoint(double Shunt) : DeckEntry
+public sealed record DeckCommand : DeckEntry
 {
-    public double Shunt { get; } = Shunt > 0 && double.IsFinite(Shunt) ? Shunt : throw new ArgumentOutOfRangeException(nameof(Shunt), "the shunt resistance must be a positive number of ohms.");
+    /// <summary>Options a simulation may set (ngspice manual, "Simulator Variables" and ".options"): convergence and the shunt resistance that makes floating nodes solvable.</summary>
+    public static readonly IReadOnlySet<string> Options = new HashSet<string>(StringComparer.Ordinal) { "rshunt", "gmin", "reltol", "abstol", "vntol", "itl1", "itl2", "temp", "tnom" };
+
+    private DeckCommand(string text) => Text = text;
+
+    public string Text { get; }
+
+    /// <summary>.op: the DC operating point.</summary>
+    public static DeckCommand OperatingPoint { get; } = new(".op");
+
+    /// <summary>.options NAME=NUMBER, for a name in <see cref="Options"/> and a finite number.</summary>
+    public static DeckCommand Option(string name, double value) =>
+        Options.Contains(name) && double.IsFinite(value) ? new($".options {name}={SpiceText.Number(value)}")
+            : throw new ArgumentException($"a deck option must be one of {string.Join(", ", Options)} with a finite number.", nameof(name));
 }
 
 /// <summary>
@@ -52,6 +65,9 @@ public sealed record SpiceDeck(string Title, ValueList<DeckEntry> Entries)
 {
     /// <summary>What the first line starts with. SPICE reads the first line as the title; a fixed start keeps any title from being read as something else (ngspice treats a first line of "*ng_script" as a command script).</summary>
     public const string TitlePrefix = "padplan deck: ";
+
+    /// <summary>The same deck with more entries at its end (before .end): e.g. <see cref="DeckCommand.OperatingPoint"/> for a simulation.</summary>
+    public SpiceDeck With(params DeckEntry[] more) => this with { Entries = Entries.Concat(more).ToValueList() };
 
     /// <summary>The deck as text, one entry a line, "\n" line ends.</summary>
     public string Text
@@ -72,7 +88,7 @@ public sealed record SpiceDeck(string Title, ValueList<DeckEntry> Entries)
         DeckCarried { Line.Kind: CarriedKind.Include or CarriedKind.Lib } c =>
             $"* not followed (PadPlan does not read this file; look it over, then remove the \"* \" to use it): {c.Line.Text}",
         DeckCarried c => c.Line.Text,
-        DeckOperatingPoint op => $".options rshunt={ElementWords.Plain(op.Shunt)}\n.op",
+        DeckCommand c => c.Text,
         _ => throw new ArgumentOutOfRangeException(nameof(entry)),
     };
 }

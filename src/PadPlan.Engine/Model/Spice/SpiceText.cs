@@ -19,6 +19,9 @@ public static class SpiceText
     /// <summary>The deepest nesting of .subckt definitions (docs/limits.md).</summary>
     public const int MaxSubcircuitNesting = 16;
 
+    /// <summary>The most elements one carried .subckt definition may expand to, counting the bodies of the subcircuits it calls (docs/limits.md).</summary>
+    public const int MaxSubcircuitElements = 100_000;
+
     /// <summary>True for a character a deck word may hold.</summary>
     public static bool IsWordChar(char c) => c is > ' ' and < '\u007f' and not (';' or '\\' or '`');
 
@@ -27,6 +30,9 @@ public static class SpiceText
 
     /// <summary>True for a word that may begin an element line: an ASCII letter, then allowed characters.</summary>
     public static bool IsElementName(string? word) => IsWord(word) && char.IsAsciiLetter(word![0]);
+
+    /// <summary>A plain SPICE number: digits, a point and an exponent only (4700, 1E-07), so every SPICE reads it the same.</summary>
+    public static string Number(double value) => value.ToString("G15", CultureInfo.InvariantCulture);
 
     /// <summary>The problem with a piece of deck text (words separated by spaces or tabs), or null when it is fine. Never echoes the text.</summary>
     public static string? Problem(string text)

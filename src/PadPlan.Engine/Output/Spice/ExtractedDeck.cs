@@ -55,7 +55,8 @@ public static class ExtractedDeck
             else yield return new DeckComment($"left off the board: {e.Name} {e.Tail}");
             yield break;
         }
-        if (e.Ref is null && letter is 'V' or 'I')
+        // a 0 V probe's two nodes were joined into one net; a source left off with its network keeps two
+        if (e.Ref is null && letter is 'V' or 'I' && e.Nodes.Select(n => n.Net).Distinct(StringComparer.Ordinal).Count() == 1)
         {
             yield return new DeckComment($"a wire on the board (nodes joined): {e.Name} {string.Join(" ", e.Nodes.Select(n => n.Net))} {e.Tail}");
             yield break;
@@ -65,8 +66,7 @@ public static class ExtractedDeck
         yield return new DeckElement(e.Name, nodes, ElementWords.Of(e, part));
     }
 
-    /// <summary>A plain SPICE number (<see cref="ElementWords.Plain"/>).</summary>
-    public static string Plain(double number) => ElementWords.Plain(number);
+    private static string Plain(double number) => SpiceText.Number(number);
 
     private static string OffBoard(string net) => PadPlan.Import.NetNames.IsGround(net) ? LayoutNets.Plane : SimulationOnly + net;
 

@@ -4,7 +4,7 @@ namespace PadPlan.Planning;
 
 internal sealed partial class AnnealState
 {
-    private readonly double[] _pairKey, _pairLen, _pairViol;
+    private readonly double[] _pairKey, _pairLen, _pairViol, _pairAx, _pairAy;
     private readonly int[] _pairId;
     private readonly int[] _use;
     private readonly bool[] _taken;
@@ -27,7 +27,7 @@ internal sealed partial class AnnealState
     }
 
     /// <summary>Cost of one net: weighted lead lengths to the islands they are given (nearest first, within capacity) and the jumpers joining its islands.</summary>
-    private void EvalNet(int n, int[] assign, out double cost, out double viol)
+    private void EvalNet(int n, int[] assign, double[] lx, double[] ly, out double cost, out double viol)
     {
         var net = _nets[n];
         var isl = net.Islands;
@@ -45,13 +45,16 @@ internal sealed partial class AnnealState
             if (k >= 0) _use[k]++;
         }
         var free = net.FreeLeads;
+        foreach (var l in free) lx[l] = ly[l] = double.NaN;
+        var longest = 0.0;
         if (count == 1)
         {
             for (var a = 0; a < free.Length; a++)
             {
                 var l = free[a];
-                var len = Land(l, isl[0], out _, out _, out var v);
+                var len = Land(l, isl[0], out lx[l], out ly[l], out var v);
                 cost += LeadCost(l, len);
+                longest = Math.Max(longest, len);
                 viol += v;
                 assign[l] = isl[0];
                 _use[0]++;
@@ -65,8 +68,8 @@ internal sealed partial class AnnealState
                 _taken[a] = false;
                 for (var k = 0; k < count; k++)
                 {
-                    var len = Land(free[a], isl[k], out _, out _, out var v);
                     var id = a * count + k;
+                    var len = Land(free[a], isl[k], out _pairAx[id], out _pairAy[id], out var v);
                     _pairLen[id] = len;
                     _pairViol[id] = v;
                     _pairKey[m] = len + 1000 * v; // an island within reach always beats one out of reach
@@ -87,12 +90,15 @@ internal sealed partial class AnnealState
                 placed++;
                 var l = free[a];
                 assign[l] = isl[k];
+                (lx[l], ly[l]) = (_pairAx[id], _pairAy[id]);
                 cost += LeadCost(l, _pairLen[id]);
+                longest = Math.Max(longest, _pairLen[id]);
                 viol += _pairViol[id];
             }
             viol += 5.0 * (free.Length - placed);
             cost += _w.Jumper * JumperLength(isl);
         }
+        if (net.Net.Class == NetClass.Rf) cost += _w.RfLongestLead * longest;
         for (var k = 0; k < count; k++)
         {
             var over = _use[k] - _islands[isl[k]].Capacity;
@@ -257,7 +263,7 @@ internal sealed partial class AnnealState
     public double ViolationOf(int i)
     {
         EvalUnary(i, out _, out var v);
-        v += PairsOf(i, -1);
+        v += PairsOf(i, -1) + CrossingOf(i);
         foreach (var n in _items[i].Nets) v += _netViol[n];
         return v;
     }

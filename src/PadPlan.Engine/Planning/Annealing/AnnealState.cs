@@ -87,12 +87,14 @@ internal sealed partial class AnnealState
         var maxPairs = 1;
         foreach (var net in _nets) maxPairs = Math.Max(maxPairs, net.FreeLeads.Length * Math.Max(1, net.Islands.Length));
         _pairKey = new double[maxPairs]; _pairId = new int[maxPairs]; _pairLen = new double[maxPairs]; _pairViol = new double[maxPairs];
+        _pairAx = new double[maxPairs]; _pairAy = new double[maxPairs];
         var maxIslands = _nets.Select(x => x.Islands.Length).DefaultIfEmpty(1).Max() + 1;
         _use = new int[maxIslands];
         _mstDist = new double[maxIslands];
         _mstIn = new bool[maxIslands];
         _taken = new bool[_nets.Select(x => x.FreeLeads.Length).DefaultIfEmpty(1).Max() + 1];
         BuildGrid();
+        BuildCrossing();
         for (var i = 0; i < n; i++)
         {
             var item = _items[i];
@@ -140,11 +142,12 @@ internal sealed partial class AnnealState
         _crowdedCount = 0;
         for (var n = 0; n < _nets.Length; n++)
         {
-            EvalNet(n, _leadIsland, out _netCost[n], out _netViol[n]);
+            EvalNet(n, _leadIsland, _lx, _ly, out _netCost[n], out _netViol[n]);
             MarkNet(n);
             cost += _netCost[n];
             viol += _netViol[n];
         }
+        viol += RecomputeCrossing();
         for (var i = 0; i < _items.Length; i++)
         {
             EvalUnary(i, out _unaryCost[i], out _unaryViol[i]);

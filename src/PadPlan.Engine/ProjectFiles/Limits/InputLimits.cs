@@ -9,6 +9,10 @@ public static class InputLimits
 {
     /// <summary>Largest JSON file read (bytes).</summary>
     public const int MaxFileBytes = 16 * 1024 * 1024;
+    /// <summary>Largest netlist read (bytes): a 500-part deck with its models is well under a megabyte.</summary>
+    public const int MaxNetlistBytes = 4 * 1024 * 1024;
+    /// <summary>Longest netlist line (characters), a SPICE line with its '+' continuations joined: what the project keeps of a line (<see cref="MaxNoteLength"/>) must hold it.</summary>
+    public const int MaxNetlistLineLength = MaxNoteLength;
 
     public const int MaxParts = 500;
     public const int MaxNets = 2000;
@@ -66,7 +70,7 @@ public static class InputLimits
             .List("$.toolkit.leadCapacity", 20).Number("$.toolkit.leadCapacity[*].padSize", Size)
             .Number("$.toolkit.leadCapacity[*].leads", new NumberRange(1, 100, "leads", WholeNumber: true))
             .Number("$.toolkit.leadSpacing", Pitch).Number("$.toolkit.stripPitch", Pitch).Number("$.toolkit.scoreWidth", new NumberRange(0, 10, "mm", MinExclusive: true));
-        t.Number("$.rules.padGap", Gap).Number("$.rules.groundGap", Gap)
+        t.Number("$.rules.padGap", Gap).Number("$.rules.groundGap", Gap).Number("$.rules.leadGap", Gap)
             .Number("$.rules.maxLeadRf", Size).Number("$.rules.maxLeadAudio", Size).Number("$.rules.maxLeadGeneral", Size)
             .Number("$.rules.maxLeadPower", Size).Number("$.rules.maxLeadHv", Size)
             .Number("$.rules.tempRise", new NumberRange(0, 100, "°C")).Number("$.rules.copperThickness", new NumberRange(0, 1, "mm"));
