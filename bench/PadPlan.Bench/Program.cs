@@ -14,6 +14,8 @@ using PadPlan.Rules;
 //          [--write docs/benchmarks.md]
 //        ... -- --profile N (stage timings and work per move of one run), --preview PROJECT OUT.png (rough picture of a placed project),
 //        ... -- --edit-recheck N (the editor's work after one change on an N-part plan: edit, check, view)
+//        ... -- --sim-deck PROJECT (print the deck the operating point runs for a project)
+//        ... -- --operating-point N (the operating point by ngspice of an N-part board, as a command runs it once)
 //        ... -- [--seed S] --synthetic N OUT.padplan.json (write an unplaced synthetic circuit for `padplan place`)
 var sizes = new[] { 20, 50, 100, 200, 500, 1000 };
 var effort = Effort.Normal;
@@ -54,6 +56,8 @@ for (var i = 0; i < args.Length; i++)
         case "--preview": Preview.Write(args[++i], args[++i]); return 0;
         case "--synthetic": ProjectFile.Write(SyntheticCircuit.Make(int.Parse(args[++i], CultureInfo.InvariantCulture), seed), args[++i]); return 0;
         case "--edit-recheck": EditRecheck.Run(int.Parse(args[++i], CultureInfo.InvariantCulture), 50); return 0;
+        case "--sim-deck": Console.Write(PadPlan.Simulation.CircuitDeck.Of(ProjectFile.Read(args[++i])).Text); return 0;
+        case "--operating-point": OperatingPointBench.Run(int.Parse(args[++i], CultureInfo.InvariantCulture), 20, Path.Combine(FindRoot(), "examples")); return 0;
         case "--profile": Profile.Run(int.Parse(args[++i], CultureInfo.InvariantCulture), new PlacerSettings(seed, effort) { Start = start }); return 0;
         default: Console.Error.WriteLine($"unknown argument {args[i]}"); return 2;
     }

@@ -16,17 +16,19 @@ public static class CheckCommand
         var strict = new Option<bool>("--strict") { Description = "Fail (exit 1) on warnings too, not only on errors." };
         var parasitics = new Option<bool>("--parasitics") { Description = "Estimate pad capacitance and lead inductance for every net, not only rf nets." };
         var quiet = SharedOptions.Quiet();
+        var ngspice = SharedOptions.Ngspice();
         var wide = SharedOptions.Wide();
-        var command = new Command("check", "Check a plan against its circuit: connectivity, spacing, reach, high voltage; estimate parasitics.")
+        var command = new Command("check", "Check a plan against its circuit: connectivity, spacing, reach, high voltage; polarity and ratings at the simulated operating point; estimate parasitics.")
         {
-            project, json, strict, parasitics, quiet, wide,
+            project, json, strict, parasitics, quiet, ngspice, wide,
         };
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
             var plan = ProjectFile.Read(file.FullName);
             var isStrict = parse.GetValue(strict);
-            var report = Checker.Check(plan, new CheckOptions(parse.GetValue(parasitics)));
+            var simulation = SharedOptions.Simulate(parse, ngspice, plan);
+            var report = Checker.Check(plan, new CheckOptions(parse.GetValue(parasitics), simulation));
             if (parse.GetValue(json) is { } jsonFile)
             {
                 AtomicFile.WriteAllBytes(jsonFile.FullName, CheckReportJson.ToBytes(plan.Name, report, isStrict));

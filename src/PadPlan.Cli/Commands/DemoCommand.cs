@@ -67,13 +67,14 @@ public static class DemoCommand
         say.WriteLine($"2. place: board {project.Board.Width:0} x {project.Board.Height:0} mm, {project.Layout!.Pads.Count} pads");
 
         // 3. check
-        var check = Checker.Check(project);
+        var simulation = Simulation.Simulator.Run(project);
+        var check = Checker.Check(project, new CheckOptions(Simulation: simulation));
         set.AddText("check.txt", CheckReportTables.ToText(project.Name, check, strict: false));
         set.Add("check.json", CheckReportJson.ToBytes(project.Name, check, strict: false));
         say.WriteLine($"3. check: {CheckReportTables.Summary(project.Name, check, strict: false)}");
 
         // 4. materials
-        var materials = MaterialsTables.Of(project);
+        var materials = MaterialsTables.Of(project, simulation: simulation);
         var (cut, bom, order, tests) = (materials.CutList, materials.Bom, materials.BuildOrder, materials.TestPlan);
         set.AddText("cutlist.txt", Text(cut));
         set.AddText("bom.txt", TableText.ToText(bom));
@@ -84,7 +85,7 @@ public static class DemoCommand
         say.WriteLine($"4. materials: cut list, BOM ({project.Parts.Count} parts), build order ({order.Rows.Count} steps), test plan ({tests[0].Rows.Count} tests)");
 
         // 5. sheets
-        var book = SheetBook.Build(project, new SheetOptions(Paper.A4, printedDate), check, materials.All, materials.Cutting);
+        var book = SheetBook.Build(project, new SheetOptions(Paper.A4, printedDate, simulation), check, materials.All, materials.Cutting);
         var sheets = SheetOutput.Add(set, book, SheetFormats.All, dpi: 150);
         set.Commit();
         say.WriteLine($"5. sheets: {book.Summary()} ({sheets} files)");

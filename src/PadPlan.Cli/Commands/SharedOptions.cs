@@ -1,5 +1,7 @@
 using System.CommandLine;
 using PadPlan.Import;
+using PadPlan.Model;
+using PadPlan.Simulation;
 
 namespace PadPlan.Cli.Commands;
 
@@ -21,6 +23,21 @@ public static class SharedOptions
     {
         Description = "Also write the table as CSV to this file.",
     };
+
+    public static Option<string?> Ngspice() => new("--ngspice")
+    {
+        Description = $"The ngspice program that finds the operating point (else the {SimulationOptions.EnvironmentVariable} environment variable, else ngspice on PATH); 'none' leaves the simulation out.",
+    };
+
+    /// <summary>The operating point for a command, run once: by the program --ngspice names, or found; a named program that does not exist is a usage error.</summary>
+    public static SimulationResult Simulate(ParseResult parse, Option<string?> option, Project project)
+    {
+        var given = parse.GetValue(option);
+        if (string.Equals(given, "none", StringComparison.OrdinalIgnoreCase)) return Simulator.Run(project, new SimulationOptions(Off: true));
+        if (given is not null && !File.Exists(given))
+            throw new UsageException($"--ngspice {given}: no such program; give the path of ngspice, 'none', or leave the option out to use {SimulationOptions.EnvironmentVariable} or PATH.");
+        return Simulator.Run(project, new SimulationOptions(given));
+    }
 
     public static Option<bool> Wide() => new("--wide")
     {

@@ -21,7 +21,8 @@ public static class SheetsCommand
         var formats = new Option<string>("--formats") { Description = "Comma-separated file kinds to write: pdf, svg, png.", DefaultValueFactory = _ => "pdf,svg,png" };
         var dpi = new Option<int>("--dpi") { Description = $"Resolution of the PNG previews, {PngWriter.MinDpi:0} to {PngWriter.MaxDpi:0} dots per inch.", DefaultValueFactory = _ => 150 };
         var date = new Option<string?>("--date") { Description = "Date printed on the sheets, YYYY-MM-DD. Default: from SOURCE_DATE_EPOCH if set, else today." };
-        var command = new Command("sheets", "Print 1:1 template, assembly view and report pages (PDF, SVG, PNG).") { project, output, paper, formats, dpi, date };
+        var ngspice = SharedOptions.Ngspice();
+        var command = new Command("sheets", "Print 1:1 template, assembly view and report pages (PDF, SVG, PNG).") { project, output, paper, formats, dpi, date, ngspice };
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
@@ -35,9 +36,11 @@ public static class SheetsCommand
 
             var plan = ProjectFile.Read(file.FullName);
             if (SheetBook.Problem(plan) is { } problem) throw new InputException(file.FullName, problem);
-            var check = Checker.Check(plan);
-            var materials = MaterialsTables.Of(plan);
-            var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate), check, materials.All, materials.Cutting);
+            var simulation = SharedOptions.Simulate(parse, ngspice, plan);
+            var check = Checker.Check(plan, new CheckOptions(Simulation: simulation));
+            var materials = MaterialsTables.Of(plan, simulation: simulation);
+            var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate, simulation), check, materials.All, materials.Cutting);
+            context.Err.WriteLine(PadPlan.Simulation.NetVoltage.Summary(simulation));
             SheetOutput.Write(context, book, parse.GetValue(output)!.FullName, chosenFormats, resolution);
             context.Err.WriteLine($"{book.Summary()}; on {chosenPaper.Name}, dated {printedDate:yyyy-MM-dd}.");
             context.Err.WriteLine("Print the template at actual size and measure its check bar before cutting.");

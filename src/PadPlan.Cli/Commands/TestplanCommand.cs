@@ -17,16 +17,18 @@ public static class TestplanCommand
             Description = "Resistance below which your continuity beeper sounds, in ohms.",
             DefaultValueFactory = _ => DcPaths.DefaultThreshold,
         };
-        var command = new Command("testplan", "Write a continuity test sheet for checking the finished board.") { project, csv, threshold, wide };
+        var ngspice = SharedOptions.Ngspice();
+        var command = new Command("testplan", "Write a continuity test sheet for checking the finished board, and the power-up steps.") { project, csv, threshold, ngspice, wide };
         command.SetAction(parse => context.Guarded(() =>
         {
             var placed = TableOutput.ReadPlaced(parse.GetValue(project)!);
             var ohms = parse.GetValue(threshold);
             if (!(ohms > 0) || !double.IsFinite(ohms)) throw new UsageException($"--beep-below {ohms}: give your beeper's threshold in ohms, more than 0 (often 30 to 50).");
-            var tables = TestPlanTables.Tables(placed, ohms);
+            var simulation = SharedOptions.Simulate(parse, ngspice, placed);
+            var tables = TestPlanTables.Tables(placed, ohms, simulation);
             TableOutput.Print(context, tables, SharedOptions.TableWidth(context, parse, wide));
             var csvFile = parse.GetValue(csv);
-            if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, [("tests", tables[0]), ("paths", tables[1])]);
+            if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, [("tests", tables[0]), ("paths", tables[1]), ("power-up", tables[2])]);
             return ExitCodes.Success;
         }));
         return command;

@@ -1,3 +1,4 @@
+using PadPlan.Model;
 using PadPlan.Model.Values;
 
 namespace PadPlan.Import;

@@ -118,7 +118,7 @@ public static class ProjectBuilder
             ledger.Assumed(part.Ref, $"pin order {mapped.Variant} on {footprint.Name}");
         if (mapped.Guessed && part.Kind is PartKind.Bjt or PartKind.Jfet or PartKind.Mosfet)
             notes.Add(new ImportNote(file, part.Line, $"{part.Ref}: pin order not given, so {footprint.Name} pin order {mapped.Variant} is assumed (lead 1 = {footprint.PinNames(mapped.Variant)[0]}). Pinouts differ between types: check the data sheet and set \"variant\" for {part.Ref} in a parts map, or write {footprint.Name}/ORDER in a .ppn file."));
-        return new Part(part.Ref, entry?.Value ?? part.Value, footprint.Name, mapped.Pins, mapped.Variant, FootprintAssumed: assumed);
+        return new Part(part.Ref, entry?.Value ?? part.Value, footprint.Name, mapped.Pins, mapped.Variant, FootprintAssumed: assumed, Rating: entry?.Rating);
     }
 
     private static string AssumedNote(NetlistPart part, string footprint) => part.Kind switch
@@ -191,7 +191,7 @@ public static class ProjectBuilder
             }
         }
         var ordered = pins.OrderBy(p => footprint.PinNames(variant).ToList().FindIndex(n => n == p.Pin)).ToValueList();
-        return new Part(package.Ref, entry?.Value ?? first.Value, footprint.Name, ordered, variant, FootprintAssumed: assumed);
+        return new Part(package.Ref, entry?.Value ?? first.Value, footprint.Name, ordered, variant, FootprintAssumed: assumed, Rating: entry?.Rating);
     }
 
     private static List<Net> Nets(List<Part> parts, IReadOnlyDictionary<string, NetFacts> facts, Netlist netlist, List<ImportNote> notes)

@@ -1,3 +1,4 @@
+using PadPlan.Model;
 using System.Globalization;
 
 namespace PadPlan.Import;

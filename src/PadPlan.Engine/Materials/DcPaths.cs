@@ -58,8 +58,9 @@ public sealed class DcPaths
         var nodes = project.Nets.Select(n => Node(n.Name)).Concat(project.Parts.SelectMany(p => p.Pins.Select(x => Node(x.Net)))).Distinct().Order(StringComparer.Ordinal).ToList();
         var index = nodes.Select((n, i) => (n, i)).ToDictionary(x => x.n, x => x.i, StringComparer.Ordinal);
         var edges = new List<(int A, int B, double Ohms, string Part)>();
-        var junctions = new List<(string Anode, string Cathode, string Part, bool Known)>();
+        var junctions = new List<(string Anode, string Cathode, string Part, bool Known, JunctionKind Kind, string What)>();
         var maybes = new List<(string A, string B, string Part, string Note)>();
+        var channels = new List<(string A, string B, string Part, string Note)>();
 
         foreach (var part in project.Parts.OrderBy(p => p.Ref, NaturalOrder.Comparer))
         {
@@ -77,16 +78,20 @@ public sealed class DcPaths
                     foreach (var (a, b) in PinPairs(pins))
                         maybes.Add((a.Net, b.Net, part.Ref, $"reads about 0 Ω if {a.Pin} and {b.Pin} are on the same winding; check the part's data"));
                     break;
-                case PartKind.Potentiometer when pins.Count >= 2:
+                case PartKind.Trimmer when pins.Count >= 2:
                     foreach (var (a, b) in PinPairs(pins))
                         maybes.Add((a.Net, b.Net, part.Ref, "a potentiometer reads low at some settings"));
                     break;
-                case PartKind.Diode when pins.Count == 2:
+                case PartKind.Diode or PartKind.Led when pins.Count == 2:
                     var anode = pins.FindIndex(p => p.Pin.Equals("A", StringComparison.OrdinalIgnoreCase) || p.Pin.Equals("anode", StringComparison.OrdinalIgnoreCase));
-                    junctions.Add(anode >= 0 ? (pins[anode].Net, pins[1 - anode].Net, part.Ref, true) : (pins[0].Net, pins[1].Net, part.Ref, false));
+                    var diode = DiodeKind(part, kind);
+                    var what = kind == PartKind.Led ? "LED" : $"{JunctionKinds.Name(diode)} diode";
+                    junctions.Add(anode >= 0 ? (pins[anode].Net, pins[1 - anode].Net, part.Ref, true, diode, what) : (pins[0].Net, pins[1].Net, part.Ref, false, diode, what));
                     break;
-                case PartKind.Transistor:
-                    junctions.AddRange(TransistorJunctions(part, pins));
+                case PartKind.Bjt or PartKind.Jfet or PartKind.Mosfet:
+                    junctions.AddRange(TransistorJunctions(part, kind, pins));
+                    if (kind == PartKind.Jfet && Pin(pins, "D") is { Pin: not null } d && Pin(pins, "S") is { Pin: not null } src)
+                        channels.Add((d.Net, src.Net, part.Ref, "a JFET's channel conducts with no bias: it reads as a resistor, tens to hundreds of ohms, both ways (it hides any junction in parallel); a low-resistance part may beep"));
                     break;
             }
         }
@@ -98,29 +103,64 @@ public sealed class DcPaths
                     Set(nodes[i], nodes[j], DcReading.Low, r, Route(nodes, edges, i, j),
                         r < 1e-6 ? "about 0 Ω through windings, beads or fuses (their own few ohms at most)" : "through resistors");
 
-        // A junction between two nets also joins everything that reads low to either end.
-        foreach (var (anode, cathode, part, known) in junctions)
-            foreach (var a in LowGroup(nodes, ohmsBetween, index[anode]))
-                foreach (var c in LowGroup(nodes, ohmsBetween, index[cathode]))
+        // A JFET channel (a resistor of unknown value) joins everything that reads low to either end; it comes before the
+        // junctions, since a junction in parallel with it never shows its drop.
+        foreach (var (a0, b0, part, note) in channels)
+            foreach (var a in LowGroup(nodes, ohmsBetween, index[a0]))
+                foreach (var b in LowGroup(nodes, ohmsBetween, index[b0]))
+                    if (a != b && Between(nodes[a], nodes[b]).Reading == DcReading.Open) Set(nodes[a], nodes[b], DcReading.Maybe, null, part, note);
+
+        // A junction between two nets also joins everything that reads low to either end, or that a JFET channel joins
+        // to it (a channel of a few hundred ohms still lets a meter's diode test show the junction behind it).
+        var channelEnds = channels.SelectMany(c => new[] { (index[c.A], index[c.B]), (index[c.B], index[c.A]) }).ToLookup(x => x.Item1, x => x.Item2);
+        IEnumerable<int> Reached(int start)
+        {
+            var seen = new HashSet<int> { start };
+            var queue = new Queue<int>([start]);
+            while (queue.Count > 0)
+            {
+                var n = queue.Dequeue();
+                foreach (var m in LowGroup(nodes, ohmsBetween, n).Concat(channelEnds[n]))
+                    if (seen.Add(m)) queue.Enqueue(m);
+            }
+            return seen.Order();
+        }
+        foreach (var (anode, cathode, part, known, junction, what) in junctions)
+            foreach (var a in Reached(index[anode]))
+                foreach (var c in Reached(index[cathode]))
                 {
                     if (a == c || Between(nodes[a], nodes[c]).Reading == DcReading.Low) continue;
-                    var note = known ? $"may beep with + on the {nodes[a]} side only (forward junction); reverse the probes: that way must be silent" : "may beep one way round only (forward junction); reverse the probes: one way must be silent";
-                    Set(nodes[a], nodes[c], DcReading.OneWay, null, part, note);
+                    var (low, high) = JunctionKinds.Range(junction);
+                    var range = string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{low:0.0#}-{high:0.0#} V");
+                    var note = known
+                        ? $"{what}: diode mode reads {range} with + (red) on the {nodes[a]} side, open the other way; a beeper may sound one way only"
+                        : $"{what}: diode mode reads {range} one way round and open the other";
+                    Set(nodes[a], nodes[c], DcReading.OneWay, null, part, note, known ? new DcJunction(nodes[a], nodes[c], junction) : null);
                 }
         foreach (var (a, b, part, note) in maybes)
             if (a != b && Between(a, b).Reading == DcReading.Open) Set(a, b, DcReading.Maybe, null, part, note);
     }
 
-    private void Set(string a, string b, DcReading reading, double? ohms, string through, string note)
+    private void Set(string a, string b, DcReading reading, double? ohms, string through, string note, DcJunction? junction = null)
     {
         var key = Key(a, b);
         if (_pairs.TryGetValue(key, out var old) && old.Reading != DcReading.Open)
         {
-            // Several junctions or windings between one pair: list them all on one line.
-            if (old.Reading == reading && !old.Through.Split(", ").Contains(through)) _pairs[key] = old with { Through = old.Through + ", " + through };
+            // Several junctions or windings between one pair: list them all on one line. Two junctions the opposite way
+            // round (a clamp diode across a gate junction) read as a diode both ways.
+            if (old.Reading == reading && !old.Through.Split(", ").Contains(through))
+            {
+                var both = old.Junction is { } j && junction is { } k && j.Anode == k.Cathode && !j.BothWays;
+                _pairs[key] = old with
+                {
+                    Through = old.Through + ", " + through,
+                    Junction = both ? old.Junction! with { BothWays = true } : old.Junction,
+                    Note = both ? $"junctions both ways round ({old.Through}, {through}): diode mode reads about {Range(old.Junction!)} either way" : old.Note,
+                };
+            }
             return;
         }
-        _pairs[key] = new DcPath(key.Item1, key.Item2, reading, ohms, through, note);
+        _pairs[key] = new DcPath(key.Item1, key.Item2, reading, ohms, through, note, junction);
     }
 
     private static IEnumerable<((string Pin, string Net) A, (string Pin, string Net) B)> PinPairs(List<(string Pin, string Net)> pins)
@@ -130,15 +170,56 @@ public sealed class DcPaths
                 yield return (pins[i], pins[j]);
     }
 
-    // A bipolar transistor's base-emitter and base-collector junctions are diodes: NPN has the base as anode, PNP as cathode.
-    private static IEnumerable<(string Anode, string Cathode, string Part, bool Known)> TransistorJunctions(Part part, List<(string Pin, string Net)> pins)
+    private static string Range(DcJunction j) => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{j.Range.Low:0.0#}-{j.Range.High:0.0#} V");
+
+    private static (string Pin, string Net) Pin(List<(string Pin, string Net)> pins, string name) =>
+        pins.FirstOrDefault(p => p.Pin.Equals(name, StringComparison.OrdinalIgnoreCase));
+
+    private static JunctionKind DiodeKind(Part part, PartKind kind)
     {
-        var b = pins.FirstOrDefault(p => p.Pin.Equals("B", StringComparison.OrdinalIgnoreCase));
-        if (b.Pin is null) yield break;
-        var pnp = part.Value.Contains("PNP", StringComparison.OrdinalIgnoreCase);
-        var known = pnp || part.Value.Contains("NPN", StringComparison.OrdinalIgnoreCase);
-        foreach (var other in pins.Where(p => p.Pin.Equals("E", StringComparison.OrdinalIgnoreCase) || p.Pin.Equals("C", StringComparison.OrdinalIgnoreCase)))
-            yield return pnp ? (other.Net, b.Net, part.Ref, known) : (b.Net, other.Net, part.Ref, known);
+        bool Says(string w) => part.Value.Contains(w, StringComparison.OrdinalIgnoreCase);
+        if (kind == PartKind.Led) return Says("blue") || Says("white") || Says("UV") ? JunctionKind.BlueLed : JunctionKind.RedLed;
+        if (Says("schottky") || Says("BAT") || Says("1N58")) return JunctionKind.Schottky;
+        if (Says("germanium") || Says("OA9") || Says("1N34")) return JunctionKind.Germanium;
+        return JunctionKind.Silicon;
+    }
+
+    // The junctions a meter finds in a transistor: a BJT reads as two diodes from the base (B-E, B-C; NPN with the base
+    // as anode, PNP as cathode); a JFET's gate as a diode to both source and drain (N-channel: gate as anode); a
+    // MOSFET's gate is insulated and its body diode runs source to drain (N-channel: source as anode). Common practice, no source.
+    private static IEnumerable<(string Anode, string Cathode, string Part, bool Known, JunctionKind Kind, string What)> TransistorJunctions(Part part, PartKind kind, List<(string Pin, string Net)> pins)
+    {
+        bool Says(string w) => part.Value.Contains(w, StringComparison.OrdinalIgnoreCase);
+        var material = Says("germanium") || Says("AC12") || Says("OC7") ? JunctionKind.Germanium : JunctionKind.Silicon;
+        if (kind == PartKind.Bjt)
+        {
+            var b = Pin(pins, "B");
+            if (b.Pin is null) yield break;
+            var pnp = Says("PNP");
+            var known = pnp || Says("NPN");
+            foreach (var other in pins.Where(p => p.Pin.Equals("E", StringComparison.OrdinalIgnoreCase) || p.Pin.Equals("C", StringComparison.OrdinalIgnoreCase)))
+            {
+                var what = $"{part.Ref} base-{(other.Pin.Equals("E", StringComparison.OrdinalIgnoreCase) ? "emitter" : "collector")} junction";
+                yield return pnp ? (other.Net, b.Net, part.Ref, known, material, what) : (b.Net, other.Net, part.Ref, known, material, what);
+            }
+            yield break;
+        }
+        var pChannel = Says("P-") || Says("PJF") || Says("PMOS") || Says("P channel") || Says("P-channel");
+        if (kind == PartKind.Jfet)
+        {
+            var g = Pin(pins, "G");
+            if (g.Pin is null) yield break;
+            foreach (var other in pins.Where(p => p.Pin.Equals("S", StringComparison.OrdinalIgnoreCase) || p.Pin.Equals("D", StringComparison.OrdinalIgnoreCase)))
+            {
+                var what = $"{part.Ref} gate-{(other.Pin.Equals("S", StringComparison.OrdinalIgnoreCase) ? "source" : "drain")} junction";
+                yield return pChannel ? (other.Net, g.Net, part.Ref, true, JunctionKind.Silicon, what) : (g.Net, other.Net, part.Ref, true, JunctionKind.Silicon, what);
+            }
+            yield break;
+        }
+        var s = Pin(pins, "S");
+        var d = Pin(pins, "D");
+        if (s.Pin is null || d.Pin is null) yield break;
+        yield return pChannel ? (d.Net, s.Net, part.Ref, true, JunctionKind.Silicon, $"{part.Ref} body diode") : (s.Net, d.Net, part.Ref, true, JunctionKind.Silicon, $"{part.Ref} body diode");
     }
 
     private IEnumerable<int> LowGroup(List<string> nodes, Func<int, int, double?> ohms, int node) =>

@@ -33,7 +33,7 @@ public static class TestPlan
             Row("joined", DcPaths.Plane, string.Join(" ", grounded), "each beeps", "probe each ground lead at its joint: silence means it is not soldered to the plane");
 
         foreach (var island in islands)
-            Row("apart", island.Id, DcPaths.Plane, Expect(paths, island.Net, DcPaths.Plane), $"{island.Net ?? "no net"} to ground: a burr at the pad edge or glue-through shorts it");
+            Row("apart", island.Id, DcPaths.Plane, Expect(paths, island.Net, island.Id, DcPaths.Plane, DcPaths.Plane), $"{island.Net ?? "no net"} to ground: a burr at the pad edge or glue-through shorts it");
 
         var seen = new HashSet<(string, string)>();
         foreach (var island in islands.Where(i => i.Net is not null))
@@ -49,14 +49,15 @@ public static class TestPlan
                 var why = SameStrip(layout, island.Id, other.Id)
                     ? $"{netA} / {netB}: neighbouring segments; silence shows the score is cut through"
                     : $"{netA} / {netB}, {Mm.Of(gap)} mm apart: finds a solder bridge or burr";
-                Row("apart", key.Item1, key.Item2, Expect(paths, island.Net!, other.Net!), why);
+                Row("apart", key.Item1, key.Item2, Expect(paths, netA, key.Item1, netB!, key.Item2), why);
             }
         }
 
         return rows;
     }
 
-    private static string Expect(DcPaths paths, string? a, string b)
+    /// <summary>What the meter must show between two probe points: the beeper's verdict, or for a junction the diode-mode reading with the probe that goes red (+).</summary>
+    public static string Expect(DcPaths paths, string? a, string probeA, string b, string probeB)
     {
         if (a is null) return "silent";
         var path = paths.Between(a, b);
@@ -64,11 +65,17 @@ public static class TestPlan
         return path.Reading switch
         {
             DcReading.Low => $"reads low via {path.Through}",
-            DcReading.OneWay => $"one way only, via {path.Through}",
+            DcReading.OneWay when path.Junction is { BothWays: true } j => string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                $"diode {j.Range.Low:0.0#}-{j.Range.High:0.0#} V both ways; via {path.Through}"),
+            DcReading.OneWay when path.Junction is { } j => string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                $"diode {j.Range.Low:0.0#}-{j.Range.High:0.0#} V, red on {(Same(paths, j.Anode, a) ? probeA : probeB)}; reversed open; via {path.Through}"),
+            DcReading.OneWay => $"diode one way only, via {path.Through}",
             DcReading.Maybe => $"may read low via {path.Through}",
             _ => "silent",
         };
     }
+
+    private static bool Same(DcPaths paths, string junctionNet, string net) => paths.Between(junctionNet, net).NetA == paths.Between(junctionNet, net).NetB;
 
     private static string LinkText(Layout layout, string a, string b)
     {

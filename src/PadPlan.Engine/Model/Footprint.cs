@@ -51,6 +51,25 @@ public sealed record FootprintMark(MarkKind Kind, string Lead)
     public string Lead { get; } = Guard.Name(Lead, "mark lead");
 }
 
+/// <summary>
+/// What a part may take: the largest DC voltage across it (V), the power it may turn into heat (W) and the largest
+/// forward current (A), each null when not known. Footprint figures are typical for the package, not for the part in hand.
+/// </summary>
+public sealed record Rating(double? Volts = null, double? Watts = null, double? Amps = null)
+{
+    public static Rating None { get; } = new();
+
+    /// <summary>What builders are told wherever a footprint's typical rating is used.</summary>
+    public const string TypicalWarning = "typical, check your part";
+
+    public double? Volts { get; } = Guard.PositiveOrNull(Volts, "rated voltage");
+    public double? Watts { get; } = Guard.PositiveOrNull(Watts, "rated power");
+    public double? Amps { get; } = Guard.PositiveOrNull(Amps, "rated current");
+
+    /// <summary>This rating with the other's figures where the other gives them.</summary>
+    public Rating Over(Rating? under) => under is null ? this : new(Volts ?? under.Volts, Watts ?? under.Watts, Amps ?? under.Amps);
+}
+
 /// <summary>A physical package: plan-view body, height, leads and pin orders.</summary>
 public sealed record Footprint
 {
@@ -91,6 +110,8 @@ public sealed record Footprint
     public ValueList<PinVariant> Variants { get; init; }
     /// <summary>Polarity and orientation marks printed on the assembly view, each at a lead (by lead name).</summary>
     public ValueList<FootprintMark> Marks { get; init; }
+    /// <summary>The package's typical rating (voltage, power, forward current); a part's own rating overrides it.</summary>
+    public Rating Rating { get; init; } = Rating.None;
 
     /// <summary>What builders are told wherever a footprint's figures are nominal.</summary>
     public const string NominalWarning = "typical size, check your part";

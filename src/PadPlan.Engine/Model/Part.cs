@@ -8,7 +8,8 @@ public sealed record PinNet(string Pin, string Net)
 }
 
 /// <summary>A component of the circuit: reference, value, footprint and the net of each pin.</summary>
-public sealed record Part(string Ref, string Value, string Footprint, ValueList<PinNet> Pins, string? Variant = null, bool Locked = false, bool FootprintAssumed = false)
+/// <remarks>Rating, when given, is the part's own (from a parts map) and overrides its footprint's typical rating.</remarks>
+public sealed record Part(string Ref, string Value, string Footprint, ValueList<PinNet> Pins, string? Variant = null, bool Locked = false, bool FootprintAssumed = false, Rating? Rating = null)
 {
     public string Ref { get; } = Guard.Name(Ref, "part reference");
     public string Value { get; } = Value ?? "";

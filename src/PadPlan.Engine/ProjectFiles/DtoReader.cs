@@ -134,8 +134,12 @@ internal sealed partial class DtoReader(string file, byte[] text)
         var reference = Need(p.Ref, $"{path}.ref", "part reference (e.g. \"R1\")");
         var pins = Need(p.Pins?.ToList(), $"{path}.pins", "pin map (an object of pin name to net name)")
             .Select(kv => Build($"{path}.pins.{kv.Key}", () => new PinNet(kv.Key, kv.Value))).ToValueList();
-        return Build(path, () => new Part(reference, p.Value ?? "", Need(p.Footprint, $"{path}.footprint", "footprint name"), pins, p.Variant, p.Locked ?? false, p.FootprintAssumed ?? false));
+        var rating = p.RatedVoltage is null && p.RatedPower is null && p.RatedCurrent is null ? null : Rating(p.RatedVoltage, p.RatedPower, p.RatedCurrent, path);
+        return Build(path, () => new Part(reference, p.Value ?? "", Need(p.Footprint, $"{path}.footprint", "footprint name"), pins, p.Variant, p.Locked ?? false, p.FootprintAssumed ?? false, rating));
     }
+
+    /// <summary>A rating from its three optional figures (V, W, A), each checked to be above zero.</summary>
+    public Rating Rating(double? volts, double? watts, double? amps, string path) => Build(path, () => new Rating(volts, watts, amps));
 
     public Footprint Footprint(FootprintDto f, string path, string? family = null)
     {
@@ -160,7 +164,8 @@ internal sealed partial class DtoReader(string file, byte[] text)
             return Build(mp, () => new FootprintMark(kind, Need(m.Lead, $"{mp}.lead", "lead name the mark sits at")));
         }).ToValueList();
         var mount = Enum(Need(f.Mount, $"{path}.mount", "mount style"), $"{path}.mount", "mount style", MountStyle.Axial);
-        return Build(path, () => new Footprint(name, f.Family ?? family ?? "", f.Description ?? "", body, Need(f.Height, $"{path}.height", "body height"), leads, mount, f.Source ?? "", variants, marks));
+        var rating = Rating(f.RatedVoltage, f.RatedPower, f.RatedCurrent, path);
+        return Build(path, () => new Footprint(name, f.Family ?? family ?? "", f.Description ?? "", body, Need(f.Height, $"{path}.height", "body height"), leads, mount, f.Source ?? "", variants, marks) { Rating = rating });
     }
 
     public Layout Layout(LayoutDto l, string path)

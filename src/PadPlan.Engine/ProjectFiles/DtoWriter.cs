@@ -89,6 +89,9 @@ internal static partial class DtoWriter
             Pins = pins,
             Locked = p.Locked ? true : null,
             FootprintAssumed = p.FootprintAssumed ? true : null,
+            RatedVoltage = p.Rating?.Volts,
+            RatedPower = p.Rating?.Watts,
+            RatedCurrent = p.Rating?.Amps,
         };
     }
 
@@ -97,6 +100,9 @@ internal static partial class DtoWriter
         Name = f.Name,
         Family = includeFamily && f.Family.Length > 0 ? f.Family : null,
         Description = f.Description,
+        RatedVoltage = f.Rating.Volts,
+        RatedPower = f.Rating.Watts,
+        RatedCurrent = f.Rating.Amps,
         Mount = f.Mount.ToString().ToLowerInvariant(),
         Height = f.Height,
         Source = f.Source,

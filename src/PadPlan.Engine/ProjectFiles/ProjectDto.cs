@@ -102,6 +102,10 @@ public sealed class PartDto
     public Dictionary<string, string>? Pins { get; set; }
     public bool? Locked { get; set; }
     public bool? FootprintAssumed { get; set; }
+    /// <summary>The part's own rating, over its footprint's typical one.</summary>
+    public double? RatedVoltage { get; set; }
+    public double? RatedPower { get; set; }
+    public double? RatedCurrent { get; set; }
 }
 
 /// <summary>A footprint, as held in a project file and in the library files under footprints/.</summary>
@@ -109,6 +113,12 @@ public sealed class FootprintDto
 {
     public string? Name { get; set; }
     public string? Description { get; set; }
+    /// <summary>Typical largest DC voltage across the part (V).</summary>
+    public double? RatedVoltage { get; set; }
+    /// <summary>Typical power the part may dissipate (W).</summary>
+    public double? RatedPower { get; set; }
+    /// <summary>Typical largest forward current (A).</summary>
+    public double? RatedCurrent { get; set; }
     public string? Mount { get; set; }
     public double? Height { get; set; }
     public string? Source { get; set; }

@@ -43,6 +43,14 @@ public static class RuleIds
     public const string HvCaution = "hv-caution";
     public const string StripCurrent = "strip-current";
 
+    // At the operating point (ngspice)
+    public const string OperatingPoint = "operating-point";
+    public const string CapReversed = "cap-reversed";
+    public const string CapVoltage = "cap-voltage";
+    public const string ResistorPower = "resistor-power";
+    public const string DevicePower = "device-power";
+    public const string ForwardCurrent = "forward-current";
+
     /// <summary>Every rule id, in the order docs/rules.md lists them.</summary>
     public static IReadOnlyList<string> All { get; } =
     [
@@ -51,5 +59,6 @@ public static class RuleIds
         PadGap, GroundGap, LeadEdge, LeadReach, LeadLength, PadCapacity, LeadCrossing,
         BodyOverlap, BodyOverPad, BoardMargin, Keepout,
         HvSpacing, HvCreepage, HvCaution, StripCurrent,
+        OperatingPoint, CapReversed, CapVoltage, ResistorPower, DevicePower, ForwardCurrent,
     ];
 }

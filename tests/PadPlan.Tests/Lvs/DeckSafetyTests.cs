@@ -155,25 +155,25 @@ public class SpiceDeckModelTests
     public void An_element_word_with_a_line_break_is_refused_by_the_model()
     {
         // the model is the last line of defence: whatever builds it, no word can carry a line of its own
-        Assert.Throws<ArgumentException>(() => new PadPlan.Output.Spice.DeckElement("R1", ["a", "0"], ["1k\n.control"]));
-        Assert.Throws<ArgumentException>(() => new PadPlan.Output.Spice.DeckElement(".control", ["a", "0"], ["1k"]));
-        Assert.Throws<ArgumentException>(() => new PadPlan.Output.Spice.DeckElement("R1", ["a\rb", "0"], ["1k"]));
+        Assert.Throws<ArgumentException>(() => new PadPlan.Model.Spice.DeckElement("R1", ["a", "0"], ["1k\n.control"]));
+        Assert.Throws<ArgumentException>(() => new PadPlan.Model.Spice.DeckElement(".control", ["a", "0"], ["1k"]));
+        Assert.Throws<ArgumentException>(() => new PadPlan.Model.Spice.DeckElement("R1", ["a\rb", "0"], ["1k"]));
     }
 
     [Fact]
     public void Commands_are_the_operating_point_and_listed_options_only()
     {
-        var deck = new PadPlan.Output.Spice.SpiceDeck("t", PadPlan.Model.ValueList<PadPlan.Output.Spice.DeckEntry>.Empty)
-            .With(PadPlan.Output.Spice.DeckCommand.Option("rshunt", 1e12), PadPlan.Output.Spice.DeckCommand.OperatingPoint);
+        var deck = new PadPlan.Model.Spice.SpiceDeck("t", PadPlan.Model.ValueList<PadPlan.Model.Spice.DeckEntry>.Empty)
+            .With(PadPlan.Model.Spice.DeckCommand.Option("rshunt", 1e12), PadPlan.Model.Spice.DeckCommand.OperatingPoint);
         Assert.Equal("padplan deck: t\n.options rshunt=1000000000000\n.op\n.end\n", deck.Text);
-        Assert.Throws<ArgumentException>(() => PadPlan.Output.Spice.DeckCommand.Option("noacct\n.control", 1));
-        Assert.Throws<ArgumentException>(() => PadPlan.Output.Spice.DeckCommand.Option("rshunt", double.NaN));
+        Assert.Throws<ArgumentException>(() => PadPlan.Model.Spice.DeckCommand.Option("noacct\n.control", 1));
+        Assert.Throws<ArgumentException>(() => PadPlan.Model.Spice.DeckCommand.Option("rshunt", double.NaN));
     }
 
     [Fact]
     public void A_comment_stays_one_line()
     {
-        var deck = new PadPlan.Output.Spice.SpiceDeck("a\nb\u2028c", PadPlan.Model.ValueList.Of<PadPlan.Output.Spice.DeckEntry>(new PadPlan.Output.Spice.DeckComment("x\r\n.endc\u0085y")));
+        var deck = new PadPlan.Model.Spice.SpiceDeck("a\nb\u2028c", PadPlan.Model.ValueList.Of<PadPlan.Model.Spice.DeckEntry>(new PadPlan.Model.Spice.DeckComment("x\r\n.endc\u0085y")));
         Assert.Equal("padplan deck: a b c\n* x  .endc y\n.end\n", deck.Text);
     }
 }

@@ -46,7 +46,7 @@ public sealed class DcPathsTests
         Assert.Equal(DcReading.OneWay, paths.Between("BASE", "EMIT").Reading);
         Assert.Equal(DcReading.OneWay, paths.Between("BASE", "COLL").Reading);
         Assert.Equal(DcReading.OneWay, paths.Between("BASE", "GND").Reading);
-        Assert.Contains("+ on the BASE side", paths.Between("BASE", "EMIT").Note);
+        Assert.Contains("+ (red) on the BASE side", paths.Between("BASE", "EMIT").Note);
         Assert.Equal(DcReading.Open, paths.Between("VCC", "GND").Reading);
         Assert.Equal(DcReading.Open, paths.Between("COLL", "EMIT").Reading); // two junctions back to back
         Assert.Equal(DcReading.Open, paths.Between("VCC", "BASE").Reading);
@@ -70,7 +70,7 @@ public sealed class DcPathsTests
         Assert.Equal((DcReading.Low, "L1"), (paths.Between("RAW", "VOUT").Reading, paths.Between("RAW", "VOUT").Through));
         Assert.Equal((DcReading.OneWay, "D1"), (paths.Between("AC", "RAW").Reading, paths.Between("AC", "RAW").Through));
         Assert.Equal(DcReading.OneWay, paths.Between("AC", "VOUT").Reading);
-        Assert.Contains("+ on the AC side", paths.Between("AC", "VOUT").Note);
+        Assert.Contains("+ (red) on the AC side", paths.Between("AC", "VOUT").Note);
         Assert.Equal(DcReading.Open, paths.Between("VOUT", "GND").Reading);
         Assert.Equal(DcReading.Open, paths.Between("RAW", "GND").Reading);
         Assert.Equal(DcReading.Open, paths.Between("AC", "GND").Reading);

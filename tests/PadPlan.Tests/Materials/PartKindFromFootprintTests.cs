@@ -1,4 +1,4 @@
-using PartKind = PadPlan.Materials.PartKind;
+using PadPlan.Model;
 using PadPlan.Materials;
 using PadPlan.Tests.Import;
 
@@ -34,11 +34,11 @@ public class PartKindFromFootprintTests
             R2 b 0 1k
             """, partsMapJson: """{"format": "padplan-parts/1", "parts": {"C1": {"footprint": "trimmer-cap"}, "X1": {"footprint": "hc49-u"}}}""").Project;
         Assert.Equal(PartKind.Crystal, KindOf(p, "X1"));
-        Assert.Equal(PartKind.IntegratedCircuit, KindOf(p, "X2"));
-        Assert.Equal(PartKind.TrimmerCapacitor, KindOf(p, "C1"));
+        Assert.Equal(PartKind.Subcircuit, KindOf(p, "X2"));
+        Assert.Equal(PartKind.TrimmerCap, KindOf(p, "C1"));
         Assert.Equal("trimmer capacitor", PartKinds.Name(KindOf(p, "C1")));
-        Assert.Equal(PartKind.Transistor, KindOf(p, "J1")); // J is a JFET in SPICE, a connector in a schematic: the footprint decides
-        var landings = p.Parts.Where(x => KindOf(p, x.Ref) == PartKind.Wire).ToList();
+        Assert.Equal(PartKind.Jfet, KindOf(p, "J1")); // J is a JFET in SPICE, a connector in a schematic: the footprint says transistor, the D/G/S pins say field-effect
+        var landings = p.Parts.Where(x => KindOf(p, x.Ref) == PartKind.Landing).ToList();
         Assert.All(landings, x => Assert.StartsWith("landing", x.Footprint));
         Assert.Single(landings);
     }

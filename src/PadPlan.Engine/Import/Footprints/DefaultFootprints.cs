@@ -1,3 +1,4 @@
+using PadPlan.Model;
 namespace PadPlan.Import;
 
 /// <summary>The footprint a part gets when neither the netlist nor a parts map names one. The value bands are common practice, no source.</summary>

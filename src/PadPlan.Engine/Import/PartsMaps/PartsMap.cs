@@ -50,7 +50,9 @@ public sealed class PartsMap
             if (e.Footprint is not null && library.Find(e.Footprint) is null)
                 throw reader.Fail($"{path}.footprint", library.UnknownMessage(e.Footprint));
             var sections = (e.Sections ?? []).ToDictionary(s => s.Key, s => (IReadOnlyDictionary<string, string>)s.Value, StringComparer.OrdinalIgnoreCase);
-            return new PartsMapEntry(key, e.Footprint, e.Variant, e.Pins ?? [], sections, e.Value, JsonLineLocator.LineOf(bytes, path));
+            var rating = e.RatedVoltage is null && e.RatedPower is null && e.RatedCurrent is null ? null
+                : reader.Rating(e.RatedVoltage, e.RatedPower, e.RatedCurrent, path);
+            return new PartsMapEntry(key, e.Footprint, e.Variant, e.Pins ?? [], sections, e.Value, JsonLineLocator.LineOf(bytes, path), rating);
         }
         List<PartsMapEntry> Entries(Dictionary<string, PartsMapEntryDto>? entries, string group)
         {

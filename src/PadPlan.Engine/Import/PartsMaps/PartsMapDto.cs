@@ -24,6 +24,10 @@ public sealed class PartsMapEntryDto
     /// <summary>Per section letter ("A", "B"): symbol pin to footprint pin.</summary>
     public Dictionary<string, Dictionary<string, string>>? Sections { get; set; }
     public string? Value { get; set; }
+    /// <summary>The part's own rating, over the footprint's typical one: largest DC voltage (V), power (W), forward current (A).</summary>
+    public double? RatedVoltage { get; set; }
+    public double? RatedPower { get; set; }
+    public double? RatedCurrent { get; set; }
 }
 
 /// <summary>Source-generated JSON metadata for the import's own files.</summary>

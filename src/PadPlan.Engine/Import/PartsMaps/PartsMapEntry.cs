@@ -6,6 +6,7 @@ namespace PadPlan.Import;
 /// <param name="Sections">Section letter to that section's pin mapping, for multi-section packages.</param>
 /// <param name="Value">BOM text to use instead of the netlist's, when given.</param>
 /// <param name="Line">Line of the entry in the parts-map file.</param>
+/// <param name="Rating">The part's own rating, which overrides the footprint's typical one; null when the entry gives none.</param>
 public sealed record PartsMapEntry(
     string Key,
     string? Footprint,
@@ -13,4 +14,5 @@ public sealed record PartsMapEntry(
     IReadOnlyDictionary<string, string> Pins,
     IReadOnlyDictionary<string, IReadOnlyDictionary<string, string>> Sections,
     string? Value,
-    int? Line);
+    int? Line,
+    PadPlan.Model.Rating? Rating = null);

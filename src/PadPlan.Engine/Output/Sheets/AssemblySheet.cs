@@ -1,5 +1,6 @@
 using System.Globalization;
 using PadPlan.Model;
+using PadPlan.Simulation;
 using PadPlan.Output.Drawing;
 
 namespace PadPlan.Output.Sheets;
@@ -48,7 +49,7 @@ internal static class AssemblySheet
         DrawScene(inner, project, plan.Scene, palette, new Point(0, 0));
         page.Clipped(plan.Drawing, inner);
         PartsKey.Draw(page, plan.Key, plan.TableColumns);
-        DrawLegend(page, plan.Legend, project, plan.Scene, palette, plan.Key.Keyed > 0, plan.Scene.Labels.Count(l => l.Role is LabelRole.PadId) < plan.Scene.Pads.Count);
+        DrawLegend(page, plan.Legend, project, plan.Scene, palette, plan.Key.Keyed > 0, plan.Scene.Labels.Count(l => l.Role is LabelRole.PadId) < plan.Scene.Pads.Count, options.Simulation);
         var caption = $"Assembly view, scale {ScaleText(plan.Scale)} (not for measuring)";
         drafts.Add(new SheetDraft(SheetKind.Assembly, plan.Frame, caption, page.Shapes(), plan.Scene.View));
         for (var i = 0; i < plan.Details.Count; i++)
@@ -58,7 +59,7 @@ internal static class AssemblySheet
             var detailInner = new PageBuilder();
             DrawScene(detailInner, project, detail.Scene, palette, new Point(0, 0), detail.Area);
             detailPage.Clipped(detail.Area, detailInner);
-            DrawLegend(detailPage, plan.Legend, project, detail.Scene, palette, false, false);
+            DrawLegend(detailPage, plan.Legend, project, detail.Scene, palette, false, false, options.Simulation);
             var detailCaption = $"Assembly detail {i + 1} of {plan.Details.Count}, scale {ScaleText(detail.Scale)} (not for measuring)";
             drafts.Add(new SheetDraft(SheetKind.Assembly, plan.Frame, detailCaption, detailPage.Shapes(), detail.Scene.View));
         }
@@ -263,10 +264,11 @@ internal static class AssemblySheet
     private static int NetsListed(NetPalette palette) => palette.Nets.Count <= MaxLegendNets ? palette.Nets.Count : 1;
 
     /// <summary>Every symbol the view can show, then each net with its colour, line pattern and voltage (estimates marked as such).</summary>
-    private static void DrawLegend(PageBuilder page, Box area, Project project, BoardScene scene, NetPalette palette, bool keyed, bool padsUnnamed)
+    private static void DrawLegend(PageBuilder page, Box area, Project project, BoardScene scene, NetPalette palette, bool keyed, bool padsUnnamed, SimulationResult? simulation)
     {
         page.Line(new Point(area.Left, area.Top), new Point(area.Right, area.Top), SheetStyle.Rule);
         page.Text("Legend", new Point(area.Left, area.Top + 4), SheetStyle.TextNormal, weight: FontWeight.Bold);
+        page.Text(TextMetrics.Fit(NetVoltage.Summary(simulation), SheetStyle.TextSmall, area.Width - 20), new Point(area.Left + 18, area.Top + 4), SheetStyle.TextSmall);
         var columns = Math.Max(1, (int)Math.Floor(area.Width / LegendColumn));
         var kinds = scene.Marks.Select(m => m.Kind).ToHashSet();
         var entries = new List<(Action<Point> Symbol, string Text)>
@@ -292,7 +294,7 @@ internal static class AssemblySheet
             {
                 page.Line(p - new Point(3.5, 0), p + new Point(1, 0), palette.StrokeOf(name, 0.5));
                 page.Circle(p + new Point(2.4, 0), 1.3, Stroke.Solid(palette.InkOf(name), 0.45), palette.InkOf(name).Tint(0.82));
-            }, name + VoltageText(facts)));
+            }, name + VoltageText(facts, simulation)));
         }
         var top = area.Top + 6;
         for (var i = 0; i < entries.Count; i++)
@@ -304,8 +306,6 @@ internal static class AssemblySheet
         }
     }
 
-    /// <summary>" (12 V)" for a stated voltage, " (≈ 8.2 V est.)" for one the importer estimated, "" when none is known.</summary>
-    internal static string VoltageText(Net? net) => net?.Voltage is not { } v ? ""
-        : net.VoltageEstimated ? string.Create(CultureInfo.InvariantCulture, $" (\u2248 {v:0.#} V est.)")
-        : string.Create(CultureInfo.InvariantCulture, $" ({v:0.#} V)");
+    /// <summary>The simulated voltage, or the stated one or an upper bound, each marked as what it is (<see cref="NetVoltage"/>).</summary>
+    internal static string VoltageText(Net? net, SimulationResult? simulation) => NetVoltage.Short(net, simulation);
 }

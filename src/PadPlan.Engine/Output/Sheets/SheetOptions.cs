@@ -1,7 +1,8 @@
 namespace PadPlan.Output.Sheets;
 
 /// <summary>What the sheets are printed on and the date they carry (fixed by the caller so that output repeats byte for byte).</summary>
-public sealed record SheetOptions(Paper Paper, DateOnly Date)
+/// <remarks>Simulation is the operating point (or why there is none) that voltages on the sheets come from.</remarks>
+public sealed record SheetOptions(Paper Paper, DateOnly Date, PadPlan.Simulation.SimulationResult? Simulation = null)
 {
     /// <summary>Least overlap between neighbouring tiles of a board larger than the paper (mm); common practice, no source.</summary>
     public double TileOverlap { get; init; } = 12;

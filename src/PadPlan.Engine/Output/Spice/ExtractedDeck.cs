@@ -46,7 +46,7 @@ public static class ExtractedDeck
 
     private static IEnumerable<DeckEntry> ElementEntries(SpiceElement e, LayoutNets nets, Part? part)
     {
-        var words = Words(e.Tail);
+        var words = ElementWords.Words(e.Tail);
         var letter = char.ToUpperInvariant(e.Name[0]);
         if (e.Ref is null && e.Nodes.Count == 0)
         {
@@ -63,61 +63,8 @@ public static class ExtractedDeck
         }
         var nodes = e.Nodes.Select(n => e.Ref is not null && n.Pin is not null ? nets.NodeOf(e.Ref, n.Pin) : OffBoard(n.Net));
         if (e.Ref is null) yield return new DeckComment("simulation only, not on the board:");
-        yield return new DeckElement(e.Name, nodes, OwnValue(e, part) ? WithValue(words, part!.Value) : words);
+        yield return new DeckElement(e.Name, nodes, ElementWords.Of(e, part));
     }
-
-    // A resistor, capacitor or inductor that is its own two-lead part (not a winding of a merged transformer) carries the part's value.
-    private static bool OwnValue(SpiceElement e, Part? part) =>
-        char.ToUpperInvariant(e.Name[0]) is 'R' or 'C' or 'L' && part is { Pins.Count: 2 } && string.Equals(part.Ref, e.Name, StringComparison.OrdinalIgnoreCase);
-
-    // The tail's words, with an expression in braces or quotes kept as one group ("{a * 2}" is three words but one value).
-    private static List<string> Words(string tail)
-    {
-        var groups = new List<string>();
-        var (depth, quoted) = (0, false);
-        foreach (var word in tail.Split(' ', StringSplitOptions.RemoveEmptyEntries))
-        {
-            if (depth > 0 || quoted) groups[^1] += " " + word;
-            else groups.Add(word);
-            foreach (var c in word)
-            {
-                if (c == '\'') quoted = !quoted;
-                else if (!quoted && c == '{') depth++;
-                else if (!quoted && c == '}') depth = Math.Max(0, depth - 1);
-            }
-        }
-        return groups;
-    }
-
-    /// <summary>
-    /// A resistor's, capacitor's or inductor's words with the project's current value in place of the imported one,
-    /// written as a plain SPICE number (4700, not 4k7, which SPICE reads as 4k), so the deck, the sheets and the BOM
-    /// agree. The value is the first positional word that is a number or an expression, or the r=/c=/l= word.
-    /// </summary>
-    private static List<string> WithValue(List<string> words, string value)
-    {
-        if (!ComponentValue.TryParse(value, ValueSyntax.SI, out var current, out _) || !(current.Number > 0)) return words;
-        var number = Plain(current.Number);
-        var result = new List<string>(words);
-        for (var i = 0; i < result.Count; i++)
-        {
-            var w = result[i];
-            var eq = w.IndexOf('=');
-            if (eq < 0 && (LooksLikeNumber(w) || w.StartsWith('{') || w.StartsWith('\'')))
-            {
-                result[i] = number;
-                return result;
-            }
-            if (eq > 0 && w[..eq].ToLowerInvariant() is "r" or "c" or "l" or "resistance" or "capacitance" or "inductance")
-            {
-                result[i] = w[..(eq + 1)] + number;
-                return result;
-            }
-        }
-        return words;
-    }
-
-    private static bool LooksLikeNumber(string w) => w.Length > 0 && (char.IsAsciiDigit(w[0]) || w[0] is '.' or '+' or '-' && w.Length > 1 && (char.IsAsciiDigit(w[1]) || w[1] == '.'));
 
     private static string Plain(double number) => SpiceText.Number(number);
 

@@ -11,7 +11,7 @@ public sealed record MaterialsTables(IReadOnlyList<ReportTable> CutList, ReportT
 {
     public IReadOnlyList<ReportTable> All => [.. CutList, Bom, BuildOrder, .. TestPlan];
 
-    public static MaterialsTables Of(Project project, CutOptions? cut = null)
+    public static MaterialsTables Of(Project project, CutOptions? cut = null, PadPlan.Simulation.SimulationResult? simulation = null)
     {
         var layout = project.Layout ?? throw new ArgumentException($"project {project.Name} has no layout yet; run 'padplan place' first.", nameof(project));
         var cutting = CutListBuilder.Build(layout, cut ?? CutOptions.Default);
@@ -19,7 +19,7 @@ public sealed record MaterialsTables(IReadOnlyList<ReportTable> CutList, ReportT
             CutListTables.From(cutting),
             BomTable.From(project),
             BuildOrderTable.Table(project),
-            TestPlanTables.Tables(project),
+            TestPlanTables.Tables(project, simulation: simulation),
             cutting);
     }
 }

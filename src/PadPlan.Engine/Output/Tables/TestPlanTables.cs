@@ -6,10 +6,11 @@ namespace PadPlan.Output.Tables;
 /// <summary>The continuity test plan as report tables: the test sheet with a Done column, and the paths through parts.</summary>
 public static class TestPlanTables
 {
-    public static IReadOnlyList<ReportTable> Tables(Project project, double threshold = DcPaths.DefaultThreshold)
+    /// <summary>The continuity sheet, the paths through parts, and the power-up section (from the operating point, or upper bounds when there is none).</summary>
+    public static IReadOnlyList<ReportTable> Tables(Project project, double threshold = DcPaths.DefaultThreshold, PadPlan.Simulation.SimulationResult? simulation = null)
     {
         var paths = DcPaths.Find(project, threshold);
-        return [Sheet(project, paths), PathTable(project, paths)];
+        return [Sheet(project, paths), PathTable(project, paths), PowerUpTable.For(project, simulation)];
     }
 
     public static ReportTable Sheet(Project project, DcPaths paths)
@@ -18,6 +19,7 @@ public static class TestPlanTables
         var notes = new List<string>
         {
             "Test the board unpowered, with a continuity beeper. 'beeps' = must sound; 'silent' = must not; other entries are readings the parts make on purpose.",
+            "'diode ... V, red on P..': in the meter's diode mode (about 1 mA), red probe on that pad, black on the other, the meter reads in that range; reversed it reads open. Ranges are the usual ones for silicon, germanium, Schottky and LED junctions (common practice, no source).",
             $"A beeper sounds below roughly 30-50 Ω (meters differ; common practice, no source): paths below {Mm.Of(paths.Threshold)} Ω through parts are listed as reading low.",
             "Electrolytic capacitors may beep briefly while they charge from the meter; the sound should stop.",
             "ICs: internal protection diodes may make a pin read low one way round to a supply or ground pin.",
@@ -39,7 +41,9 @@ public static class TestPlanTables
     private static string ReadingText(DcPath path) => path.Reading switch
     {
         DcReading.Low => path.Ohms is { } r && r >= 1e-6 ? $"low, about {r.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture)} Ω" : "low, about 0 Ω",
-        DcReading.OneWay => "low one way only",
+        DcReading.OneWay when path.Junction is { BothWays: true } j => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"diode {j.Range.Low:0.0#}-{j.Range.High:0.0#} V both ways"),
+        DcReading.OneWay when path.Junction is { } j => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"diode {j.Range.Low:0.0#}-{j.Range.High:0.0#} V, + on {j.Anode}"),
+        DcReading.OneWay => "diode, one way only",
         _ => "may read low",
     };
 }

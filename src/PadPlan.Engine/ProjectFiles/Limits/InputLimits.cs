@@ -47,6 +47,9 @@ public static class InputLimits
     public static NumberRange Margin { get; } = new(0, 100, "mm");
     public static NumberRange Voltage { get; } = new(-100_000, 100_000, "V");
     public static NumberRange Current { get; } = new(0, 1000, "A");
+    public static NumberRange RatedVoltage { get; } = new(0, 100_000, "V", MinExclusive: true);
+    public static NumberRange RatedPower { get; } = new(0, 10_000, "W", MinExclusive: true);
+    public static NumberRange RatedCurrent { get; } = new(0, 1000, "A", MinExclusive: true);
 
     public static LimitTable Project { get; } = BuildProject();
     public static LimitTable FootprintFile { get; } = BuildFootprintFile();
@@ -76,7 +79,8 @@ public static class InputLimits
         Net(t, "$.nets[*]");
         t.List("$.parts", MaxParts).Text("$.parts[*].ref", MaxNameLength).Text("$.parts[*].value", MaxValueLength)
             .Text("$.parts[*].footprint", MaxNameLength).Text("$.parts[*].variant", MaxNameLength)
-            .Map("$.parts[*].pins", MaxLeadsPerPart).Text("$.parts[*].pins.*", MaxNameLength);
+            .Map("$.parts[*].pins", MaxLeadsPerPart).Text("$.parts[*].pins.*", MaxNameLength)
+            .Number("$.parts[*].ratedVoltage", RatedVoltage).Number("$.parts[*].ratedPower", RatedPower).Number("$.parts[*].ratedCurrent", RatedCurrent);
         t.List("$.footprints", MaxFootprints);
         Footprint(t, "$.footprints[*]");
         const string pads = "$.layout.pads";
@@ -121,7 +125,8 @@ public static class InputLimits
         {
             t.Map(group, MaxParts).Text($"{group}.*.footprint", MaxNameLength).Text($"{group}.*.variant", MaxNameLength).Text($"{group}.*.value", MaxValueLength)
                 .Map($"{group}.*.pins", MaxLeadsPerPart).Text($"{group}.*.pins.*", MaxNameLength)
-                .Map($"{group}.*.sections", 26).Map($"{group}.*.sections.*", MaxLeadsPerPart).Text($"{group}.*.sections.*.*", MaxNameLength);
+                .Map($"{group}.*.sections", 26).Map($"{group}.*.sections.*", MaxLeadsPerPart).Text($"{group}.*.sections.*.*", MaxNameLength)
+                .Number($"{group}.*.ratedVoltage", RatedVoltage).Number($"{group}.*.ratedPower", RatedPower).Number($"{group}.*.ratedCurrent", RatedCurrent);
         }
         t.Map("$.nets", MaxNets);
         Net(t, "$.nets.*");
@@ -136,6 +141,7 @@ public static class InputLimits
         t.Text($"{f}.name", MaxNameLength).Text($"{f}.family", MaxNameLength).Text($"{f}.mount", MaxNameLength)
             .Text($"{f}.description", MaxNoteLength).Text($"{f}.source", MaxNoteLength)
             .Number($"{f}.height", Size)
+            .Number($"{f}.ratedVoltage", RatedVoltage).Number($"{f}.ratedPower", RatedPower).Number($"{f}.ratedCurrent", RatedCurrent)
             .List($"{f}.body", 200).List($"{f}.body[*]", 2).Number($"{f}.body[*][*]", PartCoordinate)
             .List($"{f}.leads", MaxLeadsPerPart).Text($"{f}.leads[*].name", MaxNameLength)
             .List($"{f}.leads[*].exit", 2).Number($"{f}.leads[*].exit[*]", PartCoordinate)

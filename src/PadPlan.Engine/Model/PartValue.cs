@@ -1,7 +1,6 @@
-using PadPlan.Model;
 using PadPlan.Model.Values;
 
-namespace PadPlan.Materials;
+namespace PadPlan.Model;
 
 /// <summary>A part's value read as a number where it is one (IEC 60062 code or SI prefix), with the unit its kind implies.</summary>
 public static class PartValue

@@ -1,8 +1,6 @@
 using System.Text;
-using PadPlan.Model;
-using PadPlan.Model.Spice;
 
-namespace PadPlan.Output.Spice;
+namespace PadPlan.Model.Spice;
 
 /// <summary>One line of a deck that PadPlan writes: a comment, an element, or a line carried over from the imported deck.</summary>
 public abstract record DeckEntry;

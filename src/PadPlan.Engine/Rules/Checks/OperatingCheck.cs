@@ -1,0 +1,118 @@
+using PadPlan.Model;
+using PadPlan.Simulation;
+
+namespace PadPlan.Rules.Checks;
+
+/// <summary>
+/// Polarity and ratings at the DC operating point that ngspice finds: polarised capacitors the right way round and
+/// inside their voltage, resistor, diode and transistor dissipation inside the rating, diode and LED forward current.
+/// Ratings are the part's own (a parts map) or else its footprint's typical figure. These rules are about the circuit,
+/// not the layout: they read the simulation's result and never the reverse.
+/// </summary>
+internal static class OperatingCheck
+{
+    /// <summary>A polarised capacitor reversed by more than this (V) is an error. Common practice, no source: aluminium electrolytics take well under 1 V reverse (from memory).</summary>
+    public const double ReverseVolts = 0.1;
+
+    /// <summary>Derating for capacitor voltage: at most 80 % of the rating. Common practice, no source.</summary>
+    public const double CapDerating = 0.8;
+
+    /// <summary>Derating for dissipation: at most half the rated power. Common practice, no source.</summary>
+    public const double PowerDerating = 0.5;
+
+    /// <summary>Derating for forward current: at most 80 % of the rating. Common practice, no source.</summary>
+    public const double CurrentDerating = 0.8;
+
+    public static IEnumerable<Finding> Run(Project project, SimulationResult? simulation)
+    {
+        if (simulation is null) yield break;
+        if (simulation.Point is not { } op)
+        {
+            yield return Findings.Info(RuleIds.OperatingPoint,
+                $"{simulation.Label}: printed voltages are upper bounds, and the polarity and rating checks did not run.",
+                $"Install ngspice (Debian package ngspice) or name it with --ngspice or {SimulationOptions.EnvironmentVariable}; then check again.", null, project.Name);
+            yield break;
+        }
+        yield return Findings.Info(RuleIds.OperatingPoint,
+            $"operating point by ngspice: {SupplyText(op)}.",
+            "Set the bench supply's current limit a little above this before the first power-up (see the test plan).", null, project.Name);
+
+        foreach (var part in project.Parts.OrderBy(p => p.Ref, NaturalOrder.Comparer))
+        {
+            var footprint = project.FindFootprint(part.Footprint);
+            if (footprint is null) continue;
+            var kind = PartKinds.Of(part, footprint);
+            var rating = (part.Rating ?? Rating.None).Over(footprint.Rating);
+            string Whose(Func<Rating, double?> figure) => part.Rating is { } own && figure(own) is not null ? "its own rating" : $"the {footprint.Name} footprint's rating ({Rating.TypicalWarning})";
+
+            if (PolarisedLeads(part, footprint) is var (plus, minus) && op.LeadVolts(part, plus) is { } vp && op.LeadVolts(part, minus) is { } vm)
+            {
+                var across = vp - vm;
+                if (across < -ReverseVolts)
+                    yield return Findings.Error(RuleIds.CapReversed,
+                        $"{part.Ref} ({part.Value}) is reversed: its + lead (net {part.NetOf(plus)}) sits at {V(vp)} and its - lead (net {part.NetOf(minus)}) at {V(vm)}, {V(-across)} the wrong way. A reversed electrolytic can heat, vent or burst at power-up.",
+                        $"Turn {part.Ref} round in the netlist (+ to net {part.NetOf(minus)}), or use a non-polarised capacitor.", null, part.Ref);
+                else if (rating.Volts is { } rated && Math.Abs(across) > rated)
+                    yield return Findings.Error(RuleIds.CapVoltage,
+                        $"{part.Ref} ({part.Value}) has {V(Math.Abs(across))} across it; {Whose(r => r.Volts)} is {V(rated)}.",
+                        $"Use a capacitor rated at least {V(Math.Abs(across) / CapDerating)} and give it in the parts map (\"ratedVoltage\").", null, part.Ref);
+                else if (rating.Volts is { } r2 && Math.Abs(across) > CapDerating * r2)
+                    yield return Findings.Warning(RuleIds.CapVoltage,
+                        $"{part.Ref} ({part.Value}) has {V(Math.Abs(across))} across it, over {CapDerating:P0} of {Whose(r => r.Volts)}, {V(r2)} (derating, common practice).",
+                        $"Use a capacitor rated at least {V(Math.Abs(across) / CapDerating)}, or state the part's own rating in the parts map.", null, part.Ref);
+            }
+
+            if (op.Of(part.Ref) is not { } figures) continue;
+            var watts = Math.Max(0, figures.Power);
+            if (rating.Watts is { } ratedWatts)
+            {
+                var rule = kind is PartKind.Resistor or PartKind.Trimmer ? RuleIds.ResistorPower : RuleIds.DevicePower;
+                if (watts > ratedWatts)
+                    yield return Findings.Error(rule,
+                        $"{part.Ref} ({part.Value}) dissipates {W(watts)}; {Whose(r => r.Watts)} is {W(ratedWatts)}.",
+                        $"Use a part rated at least {W(watts / PowerDerating)} (a larger footprint), or change the circuit so it dissipates less.", null, part.Ref);
+                else if (watts > PowerDerating * ratedWatts)
+                    yield return Findings.Warning(rule,
+                        $"{part.Ref} ({part.Value}) dissipates {W(watts)}, over half of {Whose(r => r.Watts)}, {W(ratedWatts)} (derating, common practice).",
+                        $"Use a part rated at least {W(watts / PowerDerating)}, or state the part's own rating in the parts map.", null, part.Ref);
+            }
+            if (kind is PartKind.Diode or PartKind.Led && rating.Amps is { } ratedAmps && ForwardAmps(part, footprint, figures) is { } amps)
+            {
+                if (amps > ratedAmps)
+                    yield return Findings.Error(RuleIds.ForwardCurrent,
+                        $"{part.Ref} ({part.Value}) carries {A(amps)} forward; {Whose(r => r.Amps)} is {A(ratedAmps)}.",
+                        $"Raise the series resistance so {part.Ref} carries at most {A(CurrentDerating * ratedAmps)}, or use a part rated for the current.", null, part.Ref);
+                else if (amps > CurrentDerating * ratedAmps)
+                    yield return Findings.Warning(RuleIds.ForwardCurrent,
+                        $"{part.Ref} ({part.Value}) carries {A(amps)} forward, over {CurrentDerating:P0} of {Whose(r => r.Amps)}, {A(ratedAmps)} (derating, common practice).",
+                        $"Raise the series resistance a little, or state the part's own rating in the parts map.", null, part.Ref);
+            }
+        }
+    }
+
+    /// <summary>The symbol pins on a polarised capacitor's + and - leads (the footprint marks the + lead), or null.</summary>
+    public static (string Plus, string Minus)? PolarisedLeads(Part part, Footprint footprint)
+    {
+        var mark = footprint.Marks.FirstOrDefault(m => m.Kind == MarkKind.Plus);
+        if (mark is null || footprint.Leads.Count != 2 || part.Pins.Count != 2) return null;
+        var names = footprint.PinNames(part.Variant);
+        var index = footprint.Leads.ToList().FindIndex(l => l.Name == mark.Lead);
+        var plus = names[index];
+        var minus = names[1 - index];
+        return part.NetOf(plus) is null || part.NetOf(minus) is null ? null : (plus, minus);
+    }
+
+    // The current from anode to cathode: into the anode lead (the lead the footprint does not band), else the larger lead current.
+    private static double? ForwardAmps(Part part, Footprint footprint, PartFigures figures)
+    {
+        var anode = part.Pins.Select(p => p.Pin).FirstOrDefault(p => p.Equals("A", StringComparison.OrdinalIgnoreCase) || p.Equals("anode", StringComparison.OrdinalIgnoreCase));
+        return anode is not null && figures.CurrentInto(anode) is { } a ? a : figures.LargestCurrent;
+    }
+
+    private static string SupplyText(OperatingPoint op) => op.Supplies.Count == 0 ? "no supply found on a wire landing"
+        : string.Join("; ", op.Supplies.Select(s => $"supply {s.Source} on {s.Net} at {V(s.Volts)} delivers {A(s.Amps)}"));
+
+    public static string V(double volts) => Text.Num(volts, "0.00") + " V";
+    public static string W(double watts) => Text.Num(watts, "0.###") + " W";
+    public static string A(double amps) => Math.Abs(amps) < 1 ? Text.Num(amps * 1000, "0.##") + " mA" : Text.Num(amps, "0.###") + " A";
+}
