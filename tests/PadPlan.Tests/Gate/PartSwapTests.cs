@@ -149,15 +149,16 @@ public class PartSwapTests
     {
         var path = CopyOfPlaced();
         var before = File.ReadAllBytes(path);
-        // A 2 W resistor (about 15-17 mm long, from memory) where a 1/4 W one stood, among the buffer's parts on the board the placer
-        // sized tightly: with R8's close neighbours alone there is no room (this layout is fixed by seed 1 of the example).
-        var run = CliRunner.Run("swap", path, "R8", "--footprint", "res-axial-2w");
+        // A 15 mm film capacitor (leads 15 mm apart) where a 5 mm disc stood, among the parts on the board the placer sized
+        // tightly: with C4's close neighbours alone there is no room (this layout is fixed by seed 1 of the example; the
+        // lead-crossing term changed which part has no room, so C4 stands where R8 with a 2 W body stood before).
+        var run = CliRunner.Run("swap", path, "C4", "--footprint", "cap-film-15mm");
         Assert.Equal(1, run.ExitCode);
         Assert.Contains("does not fit without moving more", run.Err);
         Assert.Contains("--widen 1", run.Err);
         Assert.Equal(before, File.ReadAllBytes(path));
 
-        var wider = CliRunner.Run("swap", path, "R8", "--footprint", "res-axial-2w", "--widen", "1");
+        var wider = CliRunner.Run("swap", path, "C4", "--footprint", "cap-film-15mm", "--widen", "1");
         Assert.True(wider.ExitCode == 0, wider.Err);
         Assert.Empty(CheckerVerdict.Check(ProjectFile.Read(path)));
     }
