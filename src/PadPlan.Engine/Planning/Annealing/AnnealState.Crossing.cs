@@ -47,12 +47,12 @@ internal sealed partial class AnnealState
     private int LeadCol(double x) => Math.Clamp((int)Math.Floor((x - _gridX0) / LeadCellSize), 0, _leadCols - 1);
     private int LeadRow(double y) => Math.Clamp((int)Math.Floor((y - _gridY0) / LeadCellSize), 0, _leadRows - 1);
 
-    /// <summary>The landing of a lead that is fixed by its own item: its ground landing or the strip segment beneath it.</summary>
+    /// <summary>The landing of a lead that is fixed by its own item: its ground landing, or its exit over the strip segment beneath it.</summary>
     private void OwnLanding(int l, double[] lx, double[] ly)
     {
         var lead = _leads[l];
         if (lead.Ground) (lx[l], ly[l]) = (_gX[l], _gY[l]);
-        else if (lead.OwnIsland >= 0) { Land(l, lead.OwnIsland, out var ax, out var ay, out _); (lx[l], ly[l]) = (ax, ay); }
+        else if (lead.OwnIsland >= 0) (lx[l], ly[l]) = (_exX[l], _exY[l]); // a pin over its strip segment lands where it leaves the body, as written
     }
 
     /// <summary>Files a lead's committed path under the lead cells it touches.</summary>
