@@ -101,6 +101,7 @@ internal sealed partial class DtoReader(string file, byte[] text)
         {
             PadGap = dto.PadGap ?? d.PadGap,
             GroundGap = dto.GroundGap ?? d.GroundGap,
+            LeadGap = dto.LeadGap ?? d.LeadGap,
             MaxLeadRf = dto.MaxLeadRf ?? d.MaxLeadRf,
             MaxLeadAudio = dto.MaxLeadAudio ?? d.MaxLeadAudio,
             MaxLeadGeneral = dto.MaxLeadGeneral ?? d.MaxLeadGeneral,
@@ -110,7 +111,7 @@ internal sealed partial class DtoReader(string file, byte[] text)
             TempRise = dto.TempRise ?? d.TempRise,
             CopperThickness = dto.CopperThickness ?? d.CopperThickness,
         };
-        foreach (var (name, value) in new[] { ("padGap", rules.PadGap), ("groundGap", rules.GroundGap), ("tempRise", rules.TempRise), ("copperThickness", rules.CopperThickness) })
+        foreach (var (name, value) in new[] { ("padGap", rules.PadGap), ("groundGap", rules.GroundGap), ("leadGap", rules.LeadGap), ("tempRise", rules.TempRise), ("copperThickness", rules.CopperThickness) })
             if (!(value >= 0) || !double.IsFinite(value)) throw Fail($"{path}.{name}", $"{name} must be zero or more (got {value}).");
         foreach (var (name, value) in new[] { ("maxLeadRf", rules.MaxLeadRf), ("maxLeadAudio", rules.MaxLeadAudio), ("maxLeadGeneral", rules.MaxLeadGeneral), ("maxLeadPower", rules.MaxLeadPower), ("maxLeadHv", rules.MaxLeadHv) })
             if (!(value > 0) || !double.IsFinite(value)) throw Fail($"{path}.{name}", $"{name} must be a positive length in mm (got {value}).");
@@ -159,7 +160,9 @@ internal sealed partial class DtoReader(string file, byte[] text)
             return Build(mp, () => new FootprintMark(kind, Need(m.Lead, $"{mp}.lead", "lead name the mark sits at")));
         }).ToValueList();
         var mount = Enum(Need(f.Mount, $"{path}.mount", "mount style"), $"{path}.mount", "mount style", MountStyle.Axial);
-        return Build(path, () => new Footprint(name, f.Family ?? family ?? "", f.Description ?? "", body, Need(f.Height, $"{path}.height", "body height"), leads, mount, f.Source ?? "", variants, marks));
+        BodyShape? shape = f.Shape is null ? null : Enum(f.Shape, $"{path}.shape", "body shape", BodyShape.Box);
+        return Build(path, () => new Footprint(name, f.Family ?? family ?? "", f.Description ?? "", body, Need(f.Height, $"{path}.height", "body height"), leads, mount, f.Source ?? "", variants, marks,
+            shape, f.LeadBend, f.OutsideLead));
     }
 
     public Layout Layout(LayoutDto l, string path)

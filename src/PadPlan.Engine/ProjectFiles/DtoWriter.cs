@@ -52,6 +52,7 @@ internal static partial class DtoWriter
     {
         PadGap = r.PadGap,
         GroundGap = r.GroundGap,
+        LeadGap = r.LeadGap,
         MaxLeadRf = r.MaxLeadRf,
         MaxLeadAudio = r.MaxLeadAudio,
         MaxLeadGeneral = r.MaxLeadGeneral,
@@ -98,6 +99,9 @@ internal static partial class DtoWriter
         Description = f.Description,
         Mount = f.Mount.ToString().ToLowerInvariant(),
         Height = f.Height,
+        Shape = f.Shape.ToString().ToLowerInvariant(),
+        LeadBend = f.LeadBend,
+        OutsideLead = f.OutsideLead,
         Source = f.Source,
         Body = [.. f.Body.Select(XY)],
         Leads = [.. f.Leads.Select(l => new FootprintLeadDto { Name = l.Name, Exit = XY(l.Exit), Diameter = l.Diameter, MinReach = l.MinReach, MaxReach = l.MaxReach })],

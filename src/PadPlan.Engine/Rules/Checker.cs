@@ -22,6 +22,7 @@ public static class Checker
             .Concat(SpacingCheck.Run(ctx))
             .Concat(LeadCheck.Run(ctx))
             .Concat(PlacementCheck.Run(ctx))
+            .Concat(HeightCheck.Run(ctx))
             .Concat(ElectricalCheck.Run(ctx))));
         return Report(findings, ParasiticEstimates.Run(ctx));
     }

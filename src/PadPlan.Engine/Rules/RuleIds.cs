@@ -33,6 +33,7 @@ public static class RuleIds
     // Parts and board
     public const string BodyOverlap = "body-overlap";
     public const string BodyOverPad = "body-over-pad";
+    public const string LeadMeetsBody = "lead-meets-body";
     public const string BoardMargin = "board-margin";
     public const string Keepout = "keepout";
 
@@ -48,7 +49,7 @@ public static class RuleIds
         LayoutMissing, BoardSize, PartUnplaced, LeadUnplaced, SingleConnection,
         Open, Short, LeadWrongPad, LeadOffPad, GroundOnPad, PadShort, JumperShort, JumperEnd, LandingMismatch, PadUnused,
         PadGap, GroundGap, LeadEdge, LeadReach, LeadLength, PadCapacity,
-        BodyOverlap, BodyOverPad, BoardMargin, Keepout,
+        BodyOverlap, BodyOverPad, LeadMeetsBody, BoardMargin, Keepout,
         HvSpacing, HvCreepage, HvCaution, StripCurrent,
     ];
 }

@@ -63,7 +63,7 @@ public static class InputLimits
             .List("$.toolkit.leadCapacity", 20).Number("$.toolkit.leadCapacity[*].padSize", Size)
             .Number("$.toolkit.leadCapacity[*].leads", new NumberRange(1, 100, "leads", WholeNumber: true))
             .Number("$.toolkit.leadSpacing", Pitch).Number("$.toolkit.stripPitch", Pitch).Number("$.toolkit.scoreWidth", new NumberRange(0, 10, "mm", MinExclusive: true));
-        t.Number("$.rules.padGap", Gap).Number("$.rules.groundGap", Gap)
+        t.Number("$.rules.padGap", Gap).Number("$.rules.groundGap", Gap).Number("$.rules.leadGap", Gap)
             .Number("$.rules.maxLeadRf", Size).Number("$.rules.maxLeadAudio", Size).Number("$.rules.maxLeadGeneral", Size)
             .Number("$.rules.maxLeadPower", Size).Number("$.rules.maxLeadHv", Size)
             .Number("$.rules.tempRise", new NumberRange(0, 100, "°C")).Number("$.rules.copperThickness", new NumberRange(0, 1, "mm"));
@@ -131,7 +131,8 @@ public static class InputLimits
     private static void Footprint(Builder t, string f) =>
         t.Text($"{f}.name", MaxNameLength).Text($"{f}.family", MaxNameLength).Text($"{f}.mount", MaxNameLength)
             .Text($"{f}.description", MaxNoteLength).Text($"{f}.source", MaxNoteLength)
-            .Number($"{f}.height", Size)
+            .Number($"{f}.height", Size).Text($"{f}.shape", MaxNameLength).Number($"{f}.leadBend", new NumberRange(0, 1000, "mm"))
+            .Text($"{f}.outsideLead", MaxNameLength)
             .List($"{f}.body", 200).List($"{f}.body[*]", 2).Number($"{f}.body[*][*]", PartCoordinate)
             .List($"{f}.leads", MaxLeadsPerPart).Text($"{f}.leads[*].name", MaxNameLength)
             .List($"{f}.leads[*].exit", 2).Number($"{f}.leads[*].exit[*]", PartCoordinate)

@@ -42,6 +42,10 @@ internal sealed class CheckContext
         Pairs = NearPairs(plan.Copper);
     }
 
+    /// <summary>Every placed part raised into 3D (in plan order): body heights and lead paths, for the height rules.</summary>
+    public IReadOnlyList<PartSolid> Solids => _solids ??= Shapes.Solids.Of(Plan, lead => Under(lead) is { Count: > 0 } u ? u[0] : null);
+    private IReadOnlyList<PartSolid>? _solids;
+
     public ResolvedPlan Plan { get; }
     public CheckOptions Options { get; }
     public RuleSettings Rules => Plan.Rules;
