@@ -105,10 +105,11 @@ internal static class ProblemBuilder
         }
 
         // A body over an island must clear the highest lead that may land there (the placer's own form of lead-meets-body).
+        foreach (var island in islands) island.Clearance = items[island.Item].LeadLevel + rules.LeadGap;
         foreach (var net in nets)
         {
             var level = net.Leads.Select(l => items[leads[l].Item].LeadLevel).DefaultIfEmpty(0).Max();
-            foreach (var s in net.Islands) islands[s].Clearance = level + rules.LeadGap;
+            foreach (var s in net.Islands) islands[s].Clearance = Math.Max(islands[s].Clearance, level + rules.LeadGap);
         }
 
         foreach (var item in items)

@@ -29,12 +29,7 @@ internal sealed class CheckContext
         foreach (var lead in plan.Leads)
         {
             if (lead.Landing is null) continue;
-            var under = plan.Copper
-                .Select(c => (Copper: c, Distance: CopperGeometry.SignedDistance(c.Island, lead.Landing.At)))
-                .Where(x => x.Distance <= Eps)
-                .OrderBy(x => x.Distance)
-                .Select(x => x.Copper)
-                .ToList();
+            var under = plan.CopperAt(lead.Landing.At, Eps);
             _under[lead] = under;
             foreach (var c in under) _leadsOn[c].Add(lead);
         }

@@ -15,7 +15,7 @@ internal static class HeightCheck
                 for (var k = 0; k < solids.Count; k++)
                 {
                     var body = solids[k];
-                    if (ReferenceEquals(body, solid) || !body.HasBody) continue;
+                    if (ReferenceEquals(body, solid)) continue;
                     var worst = Closest(lead, body, boxes[k], gap);
                     if (worst is not { } found) continue;
                     var (at, under) = found;

@@ -17,7 +17,7 @@ internal static class PlacementCheck
             for (var q = p + 1; q < order.Length && boxes[order[q]].Left < boxes[order[p]].Right; q++)
             {
                 var (i, k) = (Math.Min(order[p], order[q]), Math.Max(order[p], order[q]));
-                if (boxes[i].Overlaps(boxes[k]) && ctx.Solids[i].HasBody && ctx.Solids[k].HasBody && ctx.Solids[i].SharesHeight(ctx.Solids[k])
+                if (boxes[i].Overlaps(boxes[k]) && ctx.Solids[i].SharesHeight(ctx.Solids[k])
                     && Polygons.Overlap(parts[i].Body, parts[k].Body)) overlaps.Add((i, k));
             }
         overlaps.Sort();
@@ -30,7 +30,6 @@ internal static class PlacementCheck
         for (var i = 0; i < parts.Count; i++)
         {
             var part = parts[i];
-            if (!ctx.Solids[i].HasBody) continue;
             var own = part.Nets.Select(ctx.Plan.Canonical).ToHashSet(StringComparer.Ordinal);
             for (var k = 0; k < copperBoxes.Length; k++)
             {

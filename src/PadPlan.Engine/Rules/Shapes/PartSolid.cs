@@ -8,7 +8,6 @@ public sealed record PartSolid(PlacedPart Part, double Seat, double Bottom, doub
 {
     public string Ref => Part.Ref;
     public Footprint Footprint => Part.Footprint;
-    public bool HasBody => Footprint.Shape != BodyShape.Wires;
 
     /// <summary>Whether two bodies share some height: the first condition for meeting in 3D (the plan outlines must overlap too).</summary>
     public bool SharesHeight(PartSolid other) =>

@@ -12,6 +12,10 @@ public static class Solids
     public static IReadOnlyList<PartSolid> Of(ResolvedPlan plan, Func<PlacedLead, PadCopper?> under) =>
         plan.Parts.Select(p => Of(p, under)).ToList();
 
+    /// <summary>The solid of every placed part, each lead standing on the copper its landing point lies in.</summary>
+    public static IReadOnlyList<PartSolid> Of(ResolvedPlan plan) =>
+        Of(plan, lead => plan.CopperAt(lead.Landing!.At, Polygons.Tolerance) is { Count: > 0 } u ? u[0] : null);
+
     public static PartSolid Of(PlacedPart part, Func<PlacedLead, PadCopper?> under)
     {
         var f = part.Footprint;
