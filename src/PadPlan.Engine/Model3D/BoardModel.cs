@@ -51,7 +51,7 @@ public sealed class BoardModel
     private static ModelNode Board(BoardArea area, double thickness)
     {
         var b = new MeshBuilder();
-        b.Prism(area.Outline(), -thickness, 0, Finish.Laminate, Finish.Copper, Finish.Laminate);
+        b.Prism(area.Outline(), -thickness, 0, Finish.Laminate, Finish.Plane, Finish.Laminate);
         return new ModelNode("board", ModelNodeKind.Board, b.Build(), []);
     }
 

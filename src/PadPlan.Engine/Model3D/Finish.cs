@@ -5,7 +5,9 @@ public enum Finish
 {
     /// <summary>Glass-epoxy board material: the sides of the board and of every pad.</summary>
     Laminate,
-    /// <summary>Bare copper: the plane's face and every pad's top.</summary>
+    /// <summary>The plane's copper face (drawn a shade darker than the pads, which are freshly cut).</summary>
+    Plane,
+    /// <summary>Bare copper: every pad's top.</summary>
     Copper,
     /// <summary>Tinned lead wire.</summary>
     Lead,
@@ -37,7 +39,8 @@ public static class Finishes
     public static (double R, double G, double B) Colour(Finish finish) => finish switch
     {
         Finish.Laminate => (0.55, 0.50, 0.16),
-        Finish.Copper => (0.80, 0.38, 0.20),
+        Finish.Plane => (0.56, 0.25, 0.13),
+        Finish.Copper => (0.85, 0.42, 0.22),
         Finish.Lead => (0.75, 0.75, 0.78),
         Finish.Solder => (0.62, 0.63, 0.66),
         Finish.BlackPlastic => (0.06, 0.06, 0.07),
@@ -53,5 +56,5 @@ public static class Finishes
     };
 
     /// <summary>Whether the finish is metal (for the glTF metallic factor).</summary>
-    public static bool IsMetal(Finish finish) => finish is Finish.Copper or Finish.Lead or Finish.Solder or Finish.Metal;
+    public static bool IsMetal(Finish finish) => finish is Finish.Plane or Finish.Copper or Finish.Lead or Finish.Solder or Finish.Metal;
 }

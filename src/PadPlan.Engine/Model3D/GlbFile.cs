@@ -84,8 +84,9 @@ public static class GlbFile
         var colour = material.FindChannel("BaseColor")!.Value;
         colour.Color = new Vector4((float)r, (float)g, (float)b, 1);
         var metal = material.FindChannel("MetallicRoughness")!.Value;
-        metal.SetFactor("MetallicFactor", Finishes.IsMetal(finish) ? 0.8f : 0f);
-        metal.SetFactor("RoughnessFactor", Finishes.IsMetal(finish) ? 0.4f : 0.7f);
+        // Only half metallic: a viewer without an environment map shows fully metallic surfaces nearly black.
+        metal.SetFactor("MetallicFactor", Finishes.IsMetal(finish) ? 0.45f : 0f);
+        metal.SetFactor("RoughnessFactor", Finishes.IsMetal(finish) ? 0.45f : 0.7f);
         materials[finish] = material;
         return material;
     }

@@ -36,7 +36,7 @@ internal static class ModelPicture
         foreach (var face in faces)
         {
             var corners = face.Corners.Select(c => new Point(left + (c.X - minU) * scale, top + (c.Y - minV) * scale)).ToList();
-            page.Poly(corners, true, Stroke.Solid(face.Ink, 0.03), face.Ink);
+            page.Poly(corners, true, Stroke.Solid(face.Ink, 0.08), face.Ink);
         }
         flow.Space(2);
     }
