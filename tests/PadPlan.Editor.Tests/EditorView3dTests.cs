@@ -1,37 +1,15 @@
-using Microsoft.Playwright;
 using SkiaSharp;
 
 namespace PadPlan.Editor.Tests;
 
 /// <summary>Chromium with WebGL drawn in software (SwiftShader through ANGLE: headless Debian chromium has no GPU).</summary>
-public sealed class WebGlBrowserFixture : IAsyncLifetime
+public sealed class WebGlBrowserFixture : BrowserFixture
 {
-    private IPlaywright? _playwright;
-    private IBrowser? _browser;
-
-    public IBrowser Browser => _browser ?? throw new InvalidOperationException($"chromium did not start ({ChromiumFactAttribute.ChromiumPath}).");
-
-    public async Task InitializeAsync()
-    {
-        if (!File.Exists(ChromiumFactAttribute.ChromiumPath)) return;
-        _playwright = await Playwright.CreateAsync();
-        _browser = await _playwright.Chromium.LaunchAsync(new BrowserTypeLaunchOptions
-        {
-            ExecutablePath = ChromiumFactAttribute.ChromiumPath,
-            Headless = true,
-            Args =
-            [
-                "--no-sandbox", "--use-angle=swiftshader", "--enable-unsafe-swiftshader", "--disable-quic", "--no-first-run",
-                "--disable-background-networking", "--disable-component-update", "--disable-sync",
-            ],
-        });
-    }
-
-    public async Task DisposeAsync()
-    {
-        if (_browser is not null) await _browser.DisposeAsync();
-        _playwright?.Dispose();
-    }
+    protected override string[] Args =>
+    [
+        "--no-sandbox", "--use-angle=swiftshader", "--enable-unsafe-swiftshader", "--disable-quic", "--no-first-run",
+        "--disable-background-networking", "--disable-component-update", "--disable-sync",
+    ];
 }
 
 /// <summary>The 3D view of the bench in a real Chromium (WebGL by SwiftShader): it draws the board, and a choice made in either view shows in the other.</summary>
