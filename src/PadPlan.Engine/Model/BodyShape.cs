@@ -22,6 +22,6 @@ public enum BodyShape
     Can,
     /// <summary>A trimmer: a low block with an adjusting screw on top.</summary>
     Trimmer,
-    /// <summary>Off-board wire ends (landings): no body is drawn, but the checks keep other parts out of the landing's outline up to its height, the room the wires take.</summary>
+    /// <summary>Off-board wire ends (landings): no body is drawn and leads may pass, but body-overlap keeps other bodies out of the landing's outline up to its height, the room the wires take.</summary>
     Wires,
 }

@@ -1,3 +1,4 @@
+using PadPlan.Model;
 using PadPlan.Rules.Shapes;
 
 namespace PadPlan.Rules.Checks;
@@ -15,7 +16,8 @@ internal static class HeightCheck
                 for (var k = 0; k < solids.Count; k++)
                 {
                     var body = solids[k];
-                    if (ReferenceEquals(body, solid)) continue;
+                    // An off-board wire landing has no body a lead could pass through: its wires are leads themselves.
+                    if (ReferenceEquals(body, solid) || body.Footprint.Shape == BodyShape.Wires) continue;
                     var worst = Closest(lead, body, boxes[k], gap);
                     if (worst is not { } found) continue;
                     var (at, under) = found;
