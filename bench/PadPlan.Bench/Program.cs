@@ -10,7 +10,8 @@ using PadPlan.Rules;
 // Placement benchmark: synthetic circuits of several sizes plus every example, placed at one effort, each beside the row
 // baseline; then both starts side by side, and the seed-to-seed spread on the examples.
 // Usage: dotnet run -c Release --project bench/PadPlan.Bench -- [--sizes 20,50,100,200,500,1000] [--effort normal] [--seed 1]
-//          [--repeat 3] [--seeds 10] [--start mixed|spring|scatter] [--skip-compare] [--skip-steady] [--write docs/benchmarks.md]
+//          [--repeat 3] [--seeds 10] [--best-known 50] [--start mixed|spring|scatter] [--skip-compare] [--skip-steady] [--steady-only]
+//          [--write docs/benchmarks.md]
 //        ... -- --profile N (stage timings and work per move of one run), --preview PROJECT OUT.png (rough picture of a placed project),
 //        ... -- --edit-recheck N (the editor's work after one change on an N-part plan: edit, check, view)
 //        ... -- [--seed S] --synthetic N OUT.padplan.json (write an unplaced synthetic circuit for `padplan place`)
@@ -22,6 +23,9 @@ var seeds = 10;
 var start = StartKind.Mixed;
 var compare = true;
 var steady = true;
+var main = true;
+var bestKnown = 0;
+string? only = null;
 string? write = null;
 for (var i = 0; i < args.Length; i++)
 {
@@ -35,6 +39,17 @@ for (var i = 0; i < args.Length; i++)
         case "--start": start = Enum.Parse<StartKind>(args[++i], ignoreCase: true); break;
         case "--skip-compare": compare = false; break;
         case "--skip-steady": steady = false; break;
+        case "--steady-only": main = false; compare = false; break;
+        case "--cases": only = args[++i]; break;
+        case "--runs-study":
+        {
+            var name = args[++i];
+            var n = int.Parse(args[++i], CultureInfo.InvariantCulture);
+            var c = Steadiness.Cases(ExampleNetlists.ImportAll(Path.Combine(FindRoot(), "examples"))).First(c => c.Name.Contains(name, StringComparison.Ordinal));
+            RunsStudy.Run(c.Project, n, new PlacerSettings(seed, effort));
+            return 0;
+        }
+        case "--best-known": bestKnown = int.Parse(args[++i], CultureInfo.InvariantCulture); break;
         case "--write": write = args[++i]; break;
         case "--preview": Preview.Write(args[++i], args[++i]); return 0;
         case "--synthetic": ProjectFile.Write(SyntheticCircuit.Make(int.Parse(args[++i], CultureInfo.InvariantCulture), seed), args[++i]); return 0;
@@ -55,13 +70,16 @@ examples.InsertRange(0, cases.Where(c => c.Name.StartsWith("example", StringComp
 
 var loadBefore = Machine.Load();
 var began = DateTime.UtcNow;
-var rows = cases.Select(c => Measure(c.Name, c.Project, settings, repeat)).ToList();
 var report = new StringBuilder();
 report.AppendLine(CultureInfo.InvariantCulture, $"Machine: {Machine.Describe()}.");
-report.AppendLine();
-report.AppendLine(CultureInfo.InvariantCulture, $"Effort {effort.ToString().ToLowerInvariant()}, seed {seed}, {start.ToString().ToLowerInvariant()} start, each case placed {repeat} times (times: median, lowest-highest); quality figures are the same in every run.");
-report.AppendLine();
-report.Append(MainTable(rows));
+if (main)
+{
+    var rows = cases.Select(c => Measure(c.Name, c.Project, settings, repeat)).ToList();
+    report.AppendLine();
+    report.AppendLine(CultureInfo.InvariantCulture, $"Effort {effort.ToString().ToLowerInvariant()}, seed {seed}, {start.ToString().ToLowerInvariant()} start, each case placed {repeat} times (times: median, lowest-highest); quality figures are the same in every run.");
+    report.AppendLine();
+    report.Append(MainTable(rows));
+}
 if (compare)
 {
     Console.Error.WriteLine("both starts side by side ...");
@@ -74,9 +92,9 @@ if (steady)
 {
     Console.Error.WriteLine($"seed spread over {seeds} seeds ...");
     report.AppendLine();
-    report.AppendLine(CultureInfo.InvariantCulture, $"Seed to seed on the examples, seeds 1-{seeds}: total lead and longest lead (mm), median (lowest-highest), and the spread (highest / lowest - 1):");
+    report.AppendLine(CultureInfo.InvariantCulture, $"Seed to seed at {effort.ToString().ToLowerInvariant()} effort, seeds 1-{seeds}: total lead, longest lead and longest lead on an RF net (mm), median (lowest-highest); spread = highest / lowest - 1; best known = the lowest total lead of {(bestKnown > 0 ? $"seeds 1-{bestKnown} at thorough effort and the seeds here" : "(not run: --best-known N)")}:");
     report.AppendLine();
-    report.Append(SteadyTable(examples, settings, seeds));
+    report.Append(Steadiness.Table([.. Steadiness.Cases(examples).Where(c => only is null || only.Split(',').Any(o => c.Name.Contains(o, StringComparison.Ordinal)))], settings, seeds, bestKnown));
 }
 var loadAfter = Machine.Load();
 report.AppendLine();
@@ -166,32 +184,6 @@ static string StartTable(List<(string Name, Project Project)> cases, PlacerSetti
         }
         var winner = costs[0] <= costs[1] ? "spring" : "scatter";
         table.AppendLine(FormattableString.Invariant($"| {name} | {cells[0]} | {cells[1]} | {winner} ({Math.Max(costs[0], costs[1]) / Math.Min(costs[0], costs[1]) - 1:P0}) |"));
-    }
-    return table.ToString();
-}
-
-static string SteadyTable(List<(string Name, Project Project)> examples, PlacerSettings settings, int seeds)
-{
-    var table = new StringBuilder();
-    table.AppendLine("| case | total lead (mm) | spread | longest lead (mm) | spread | time per seed (s) |");
-    table.AppendLine("|---|---|---|---|---|---|");
-    foreach (var (name, project) in examples)
-    {
-        var totals = new List<double>();
-        var longest = new List<double>();
-        var times = new List<double>();
-        for (var k = 1; k <= seeds; k++)
-        {
-            var clock = Stopwatch.StartNew();
-            var result = Placer.Place(project, settings with { Seed = k });
-            times.Add(clock.Elapsed.TotalSeconds);
-            if (!result.Succeeded) continue;
-            totals.Add(result.Summary!.TotalLead);
-            longest.Add(result.Summary.LongestLead);
-        }
-        if (totals.Count == 0) { table.AppendLine($"| {name} | failed | - | - | - | - |"); continue; }
-        var (t, l) = (Spread.Of(totals), Spread.Of(longest));
-        table.AppendLine(FormattableString.Invariant($"| {name}{(totals.Count < seeds ? $" ({seeds - totals.Count} seeds failed)" : "")} | {t.Median:0.0} ({t.Min:0.0}-{t.Max:0.0}) | {t.Width:P0} | {l.Median:0.0} ({l.Min:0.0}-{l.Max:0.0}) | {l.Width:P0} | {Spread.Of(times).Median:0.00} |"));
     }
     return table.ToString();
 }

@@ -3,8 +3,11 @@ using PadPlan.IO;
 namespace PadPlan.Cli;
 
 /// <summary>Where a command writes: results to Out, messages and progress to Err. Runs a command body and turns failures into exit codes.</summary>
-public sealed class CommandContext(TextWriter stdout, TextWriter stderr, bool errIsTerminal = false)
+public sealed class CommandContext(TextWriter stdout, TextWriter stderr, bool errIsTerminal = false, int columns = TerminalWidth.Unknown)
 {
+    /// <summary>Width of the terminal in characters (see <see cref="TerminalWidth"/>): text tables are fitted to it unless --wide is given.</summary>
+    public int Columns { get; } = columns;
+
     public TextWriter Out { get; } = new VisibleTextWriter(stdout);
     public TextWriter Err { get; } = new VisibleTextWriter(stderr);
     /// <summary>Err is a terminal a person watches, so progress may redraw a line in place; otherwise only results and messages go there.</summary>

@@ -22,14 +22,15 @@ public static class PadPlanCli
             FootprintsCommand.Create(context),
             DemoCommand.Create(context),
             EditCommand.Create(context),
+            SwapCommand.Create(context),
         })
             root.Subcommands.Add(command);
         return root;
     }
 
-    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool errIsTerminal = false)
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool errIsTerminal = false, int columns = TerminalWidth.Unknown)
     {
-        var context = new CommandContext(stdout, stderr, errIsTerminal);
+        var context = new CommandContext(stdout, stderr, errIsTerminal, columns);
         var root = BuildRoot(context);
         if (args.Length == 0)
         {

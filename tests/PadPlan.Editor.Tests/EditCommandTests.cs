@@ -64,6 +64,36 @@ public sealed partial class EditCommandTests : IDisposable
         Assert.Equal(ExitCodes.Success, await run.WaitAsync(TimeSpan.FromMinutes(2)));
     }
 
+    [Fact]
+    public async Task The_stop_message_names_the_recovery_copy_only_when_it_is_on_disk()
+    {
+        var written = new StringWriter();
+        var stderr = new StringWriter();
+        var errors = TextWriter.Synchronized(stderr);
+        var output = TextWriter.Synchronized(written);
+        string Printed()
+        {
+            lock (output) return written.ToString();
+        }
+        var run = Task.Run(() => PadPlanCli.Run(["edit", ProjectPath, "--no-browser"], output, errors));
+        Match address = Match.Empty;
+        for (var i = 0; i < 600 && !(address = Address().Match(Printed())).Success; i++) await Task.Delay(100);
+        Assert.True(address.Success, "edit printed no address: " + Printed());
+        var url = new Uri(address.Value);
+        using var client = new HttpClient { BaseAddress = new Uri($"http://127.0.0.1:{url.Port}") };
+        client.DefaultRequestHeaders.Add(RequestGuard.TokenHeader, url.Query.Split('=')[1]);
+        client.DefaultRequestHeaders.Add("Origin", $"http://127.0.0.1:{url.Port}");
+        (await client.PostAsync("/api/edit", new StringContent("""{"kind":"turn-part","ref":"C2"}""", System.Text.Encoding.UTF8, "application/json"))).EnsureSuccessStatusCode();
+        var recovery = Path.Combine(Folder, "tiny-buffer.unsaved.padplan.json");
+        Assert.True(File.Exists(recovery));
+        File.Delete(recovery); // gone behind the editor's back (a clean-up, another program)
+        (await client.PostAsync("/api/finish", null)).EnsureSuccessStatusCode();
+        Assert.Equal(ExitCodes.Success, await run.WaitAsync(TimeSpan.FromMinutes(2)));
+        var said = stderr.ToString();
+        Assert.DoesNotContain("kept in", said);
+        Assert.Contains("no recovery copy is on disk", said);
+    }
+
     [GeneratedRegex(@"http://127\.0\.0\.1:\d+/\?t=[0-9a-f]+")]
     private static partial Regex Address();
 }

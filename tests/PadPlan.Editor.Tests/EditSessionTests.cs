@@ -111,6 +111,20 @@ public sealed class EditSessionTests : IDisposable
     }
 
     [Fact]
+    public void Leads_dragged_across_each_other_show_as_crossing_on_the_page()
+    {
+        // R1 stands between P3 (above) and P2 (below); landing each lead on the other's pad runs them along one line.
+        var session = EditSession.Open(ProjectPath);
+        session.Apply(new EditRequest { Kind = "land-lead", Ref = "R1", Pin = "1", X = 20, Y = 17 });
+        session.Apply(new EditRequest { Kind = "land-lead", Ref = "R1", Pin = "2", X = 20, Y = 6.2 });
+        var view = PadPlan.Editor.View.PlanViews.Build(session.Current);
+        var crossing = view.Findings.FirstOrDefault(f => f.Rule == RuleIds.LeadCrossing && f.Items.SequenceEqual(["R1.1", "R1.2"]));
+        Assert.NotNull(crossing);
+        Assert.Equal("error", crossing.Severity);
+        Assert.NotNull(crossing.At);
+    }
+
+    [Fact]
     public void A_lead_dragged_onto_the_plane_lands_there()
     {
         var session = EditSession.Open(ProjectPath);

@@ -38,16 +38,7 @@ public sealed class EditorBrowserTests(BrowserFixture browser) : IClassFixture<B
     {
         await using var run = await EditorRun.StartAsync();
         var bench = await BenchPage.OpenAsync(browser.Browser, run);
-        await bench.Page.SelectOptionAsync("#grid", "0.1");
-        var plan = await run.PlanAsync();
-        // J1's only lead lands on P1 (net IN); P2 carries net BASE. A lead soldered into a pad joins the pad's net, so
-        // moving J1 until its lead lands on P2 joins IN to BASE: a short (common practice, no source).
-        var j1 = BenchPage.Part(plan, "J1");
-        var lead = BenchPage.Xy(BenchPage.Lead(j1, "1").GetProperty("landing"));
-        var pad = BenchPage.Pad(plan, "P2");
-        var p2 = (X: pad.GetProperty("x").GetDouble(), Y: pad.GetProperty("y").GetDouble());
-        var grab = BodyCentre(j1);
-        await bench.DragAsync(grab, (grab.X + p2.X - lead.X, grab.Y + p2.Y - lead.Y));
+        await ShortJ1ToBaseAsync(bench, run);
 
         var rules = await bench.FindingRulesAsync();
         Assert.Contains("lead-wrong-pad", rules);
@@ -174,6 +165,22 @@ public sealed class EditorBrowserTests(BrowserFixture browser) : IClassFixture<B
         return await EditorRun.StartOnAsync(run.Folder, run.ProjectPath);
     }
 
+    /// <summary>
+    /// J1's only lead lands on P1 (net IN); P2 carries net BASE. A lead soldered into a pad joins the pad's net, so
+    /// moving J1 until its lead lands on P2 joins IN to BASE: a short (common practice, no source).
+    /// </summary>
+    internal static async Task ShortJ1ToBaseAsync(BenchPage bench, EditorRun run)
+    {
+        await bench.Page.SelectOptionAsync("#grid", "0.1");
+        var plan = await run.PlanAsync();
+        var j1 = BenchPage.Part(plan, "J1");
+        var lead = BenchPage.Xy(BenchPage.Lead(j1, "1").GetProperty("landing"));
+        var pad = BenchPage.Pad(plan, "P2");
+        var p2 = (X: pad.GetProperty("x").GetDouble(), Y: pad.GetProperty("y").GetDouble());
+        var grab = BodyCentre(j1);
+        await bench.DragAsync(grab, (grab.X + p2.X - lead.X, grab.Y + p2.Y - lead.Y));
+    }
+
     private static async Task DragPartAsync(BenchPage bench, EditorRun run, string reference, double dx, double dy)
     {
         var grab = BodyCentre(BenchPage.Part(await run.PlanAsync(), reference));
@@ -191,7 +198,7 @@ public sealed class EditorBrowserTests(BrowserFixture browser) : IClassFixture<B
         "() => JSON.stringify([document.getElementById('board').getAttribute('viewBox'), [...document.querySelectorAll('g.part')].map(g => g.dataset.ref + '@' + g.dataset.x + ',' + g.dataset.y), [...document.querySelectorAll('.island')].map(i => i.outerHTML), document.getElementById('findings').textContent, document.getElementById('unsaved').hidden])");
 
     // The screenshot in README and docs/workflow.md comes from this run: PADPLAN_UPDATE_SCREENSHOTS=1 writes it into docs/.
-    private static async Task Shoot(BenchPage bench, string name)
+    internal static async Task Shoot(BenchPage bench, string name)
     {
         var bytes = await bench.Page.ScreenshotAsync();
         File.WriteAllBytes(Path.Combine(AppContext.BaseDirectory, name), bytes);

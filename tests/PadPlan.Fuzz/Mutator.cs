@@ -164,7 +164,10 @@ public sealed class Mutator(Random random)
     {
         var value = number.GetValue<double>();
         var factor = new[] { -1, 10, 0.1, 1000, 1e-6 }[random.Next(5)];
-        return (value * factor).ToString("R", CultureInfo.InvariantCulture);
+        var scaled = value * factor;
+        // JSON has no infinity: a product past the largest double becomes the largest one written out
+        if (!double.IsFinite(scaled)) return scaled > 0 ? "1e308" : "-1e308";
+        return scaled.ToString("R", CultureInfo.InvariantCulture);
     }
 
     private static void Collect(JsonNode node, List<(JsonNode?, JsonNode, string?, int)> into)

@@ -12,11 +12,12 @@ public static class BomCommand
     {
         var project = SharedOptions.ProjectArgument();
         var csv = SharedOptions.CsvOption();
+        var wide = SharedOptions.Wide();
         var buildOrder = new Option<bool>("--build-order")
         {
             Description = "Also print the build order: numbered steps from input to output (needs a placed project).",
         };
-        var command = new Command("bom", "List the parts to gather, grouped by value and footprint.") { project, csv, buildOrder };
+        var command = new Command("bom", "List the parts to gather, grouped by value and footprint.") { project, csv, buildOrder, wide };
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
@@ -24,7 +25,7 @@ public static class BomCommand
             var loaded = withOrder ? TableOutput.ReadPlaced(file) : ProjectFile.Read(file.FullName);
             var tables = new List<(string Suffix, ReportTable Table)> { ("bom", BomTable.From(loaded)) };
             if (withOrder) tables.Add(("build-order", BuildOrderTable.Table(loaded)));
-            TableOutput.Print(context, tables.Select(t => t.Table));
+            TableOutput.Print(context, tables.Select(t => t.Table), SharedOptions.TableWidth(context, parse, wide));
             var csvFile = parse.GetValue(csv);
             if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, tables);
             return ExitCodes.Success;

@@ -16,9 +16,10 @@ public static class CheckCommand
         var strict = new Option<bool>("--strict") { Description = "Fail (exit 1) on warnings too, not only on errors." };
         var parasitics = new Option<bool>("--parasitics") { Description = "Estimate pad capacitance and lead inductance for every net, not only rf nets." };
         var quiet = SharedOptions.Quiet();
+        var wide = SharedOptions.Wide();
         var command = new Command("check", "Check a plan against its circuit: connectivity, spacing, reach, high voltage; estimate parasitics.")
         {
-            project, json, strict, parasitics, quiet,
+            project, json, strict, parasitics, quiet, wide,
         };
         command.SetAction(parse => context.Guarded(() =>
         {
@@ -35,7 +36,7 @@ public static class CheckCommand
             {
                 if (!report.Passed(isStrict)) context.Out.WriteLine(CheckReportTables.Summary(plan.Name, report, isStrict));
             }
-            else context.Out.Write(CheckReportTables.ToText(plan.Name, report, isStrict));
+            else context.Out.Write(CheckReportTables.ToText(plan.Name, report, isStrict, SharedOptions.TableWidth(context, parse, wide)));
             return report.Passed(isStrict) ? ExitCodes.Success : ExitCodes.RuleViolations;
         }));
         return command;

@@ -22,7 +22,8 @@ public static class CutlistCommand
             DefaultValueFactory = _ => CutOptions.Default.Kerf,
         };
         var csv = SharedOptions.CsvOption();
-        var command = new Command("cutlist", "List the pads to punch and cut, with a cutting plan for your stock.") { project, stock, kerf, csv };
+        var wide = SharedOptions.Wide();
+        var command = new Command("cutlist", "List the pads to punch and cut, with a cutting plan for your stock.") { project, stock, kerf, csv, wide };
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
@@ -33,7 +34,7 @@ public static class CutlistCommand
             var pieces = (parse.GetValue(stock) ?? []).Select((text, i) => ParseStock(text, $"S{i + 1}", placed.Toolkit.StockThickness)).ToValueList();
             var list = CutListBuilder.Build(placed.Layout!, new CutOptions(pieces, kerfMm));
             var tables = CutListTables.From(list);
-            TableOutput.Print(context, tables);
+            TableOutput.Print(context, tables, SharedOptions.TableWidth(context, parse, wide));
             var csvFile = parse.GetValue(csv);
             if (csvFile is not null)
                 TableOutput.WriteCsv(context, csvFile, [("rounds", tables[0]), ("pieces", tables[1]), ("plan", tables[2])]);

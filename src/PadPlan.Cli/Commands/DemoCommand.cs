@@ -63,7 +63,7 @@ public static class DemoCommand
             return ExitCodes.RuleViolations;
         }
         var project = placed.Project!;
-        set.Add(projectFile, ProjectFile.ToBytes(project));
+        set.Add(projectFile, ProjectFile.ToCheckedBytes(project, projectFile));
         say.WriteLine($"2. place: board {project.Board.Width:0} x {project.Board.Height:0} mm, {project.Layout!.Pads.Count} pads");
 
         // 3. check
@@ -87,7 +87,7 @@ public static class DemoCommand
         var book = SheetBook.Build(project, new SheetOptions(Paper.A4, printedDate), check, materials.All, materials.Cutting);
         var sheets = SheetOutput.Add(set, book, SheetFormats.All, dpi: 150);
         set.Commit();
-        say.WriteLine($"5. sheets: {book.Sheets.Count} pages ({sheets} files)");
+        say.WriteLine($"5. sheets: {book.Summary()} ({sheets} files)");
 
         context.Out.WriteLine($"Demo finished. Files are in {dir}:");
         context.Out.WriteLine($"  {projectFile}  the placed project");
@@ -101,7 +101,7 @@ public static class DemoCommand
         return check.Errors > 0 ? ExitCodes.RuleViolations : ExitCodes.Success;
     }
 
-    private static string Text(IEnumerable<ReportTable> tables) => string.Join("\n", tables.Select(TableText.ToText));
+    private static string Text(IEnumerable<ReportTable> tables) => string.Join("\n", tables.Select(t => TableText.ToText(t)));
 
     /// <summary>The example's folder: beside the installed program, or in the source tree when run from it.</summary>
     private static string ExampleFolder(string name)

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Diagnostics;
+using System.Runtime.InteropServices;
 using PadPlan.Editor.Serving;
 using PadPlan.Editor.Sessions;
 
@@ -19,8 +20,7 @@ public static class EditCommand
             var file = parse.GetValue(project)!;
             var chosenPort = parse.GetValue(port);
             if (chosenPort is < 0 or > 65535) throw new UsageException($"--port {chosenPort} is not a port number (0 to 65535).");
-            var recovery = EditSession.RecoveryPathOf(file.FullName);
-            if (File.Exists(recovery))
+            if (EditSession.LeftOverRecovery(file.FullName) is { } recovery)
                 throw new UsageException($"{Path.GetFileName(recovery)} holds unsaved edits of an earlier session. Open it with 'padplan edit {Path.GetFileName(recovery)}' and keep what you want, or delete it; then edit {file.Name} again.");
             return Run(context, new EditorOptions(file.FullName, chosenPort), !parse.GetValue(noBrowser)).GetAwaiter().GetResult();
         }));
@@ -32,36 +32,57 @@ public static class EditCommand
         await using var server = await EditorServer.StartAsync(options);
         context.Out.WriteLine($"editing {server.Session.FileName} at {server.Url}");
         context.Err.WriteLine("Press Ctrl+C, or \"finish\" on the page, to stop.");
-        if (openBrowser && !OpenBrowser(server.Url)) context.Err.WriteLine("could not open a browser; open the address above yourself.");
+        if (openBrowser && !OpenBrowser(server.Url)) context.Err.WriteLine($"could not open a browser; open this address yourself: {server.Url}");
+        // Ctrl+C (SIGINT), SIGTERM (a service manager, `kill`) and SIGHUP (the terminal closed) all stop the editor the same way:
+        // the server stops, the recovery copy stays, and the exit message names it.
         var interrupted = new TaskCompletionSource();
-        ConsoleCancelEventHandler onCancel = (_, e) =>
-        {
-            e.Cancel = true;
-            interrupted.TrySetResult();
-        };
-        Console.CancelKeyPress += onCancel;
+        var signals = new[] { PosixSignal.SIGINT, PosixSignal.SIGTERM, PosixSignal.SIGHUP, PosixSignal.SIGQUIT }
+            .Select(signal => PosixSignalRegistration.Create(signal, e =>
+            {
+                e.Cancel = true;
+                interrupted.TrySetResult();
+            })).ToList();
         try
         {
             await Task.WhenAny(server.Finished, interrupted.Task);
         }
         finally
         {
-            Console.CancelKeyPress -= onCancel;
+            foreach (var signal in signals) signal.Dispose();
         }
-        if (server.Session.Unsaved)
+        await server.StopAsync();
+        if (server.Session.Unsaved && server.Session.RecoveryKept)
             context.Err.WriteLine($"stopped with unsaved edits; they are kept in {Path.GetFileName(server.Session.RecoveryPath)} beside the project.");
+        else if (server.Session.Unsaved)
+            context.Err.WriteLine("stopped with unsaved edits, and no recovery copy is on disk (it was removed, or could not be written): those edits are lost.");
         else context.Err.WriteLine("stopped.");
         return ExitCodes.Success;
     }
+
+    /// <summary>Time the opener has to fail (a missing browser or display) before it is taken to have worked.</summary>
+    private static readonly TimeSpan OpenerGrace = TimeSpan.FromSeconds(5);
 
     private static bool OpenBrowser(Uri url)
     {
         try
         {
-            var start = OperatingSystem.IsWindows() ? new ProcessStartInfo(url.ToString()) { UseShellExecute = true }
-                : new ProcessStartInfo(OperatingSystem.IsMacOS() ? "open" : "xdg-open", url.ToString()) { UseShellExecute = false };
+            if (OperatingSystem.IsWindows())
+            {
+                using var shell = Process.Start(new ProcessStartInfo(url.ToString()) { UseShellExecute = true });
+                return shell is not null;
+            }
+            // No display: no browser can open; say so rather than run an opener that only prints its own errors.
+            if (OperatingSystem.IsLinux() && string.IsNullOrEmpty(Environment.GetEnvironmentVariable("DISPLAY")) && string.IsNullOrEmpty(Environment.GetEnvironmentVariable("WAYLAND_DISPLAY")))
+                return false;
+            var start = new ProcessStartInfo(OperatingSystem.IsMacOS() ? "open" : "xdg-open", url.ToString())
+            {
+                UseShellExecute = false, RedirectStandardOutput = true, RedirectStandardError = true,
+            };
             using var process = Process.Start(start);
-            return process is not null;
+            if (process is null) return false;
+            _ = process.StandardOutput.ReadToEndAsync();
+            _ = process.StandardError.ReadToEndAsync();
+            return !process.WaitForExit(OpenerGrace) || process.ExitCode == 0;
         }
         catch (Exception e) when (e is System.ComponentModel.Win32Exception or InvalidOperationException)
         {

@@ -30,13 +30,13 @@ public static class ImportCommand
             var inFile = parse.GetValue(netlist)!;
             var projectDir = outFile.Directory?.FullName ?? ".";
             var recorded = extraDirs.Select(d => Path.GetRelativePath(projectDir, d).Replace('\\', '/')).ToList();
-            var netlistBytes = ReadNetlist(inFile);
+            var netlistBytes = NetlistImporter.ReadFile(inFile.ToString());
             var preview = NetlistImporter.Read(netlistBytes, inFile.ToString());
             // Footprint folders named in the netlist are relative to the netlist: load them too before building.
             if (preview.FootprintDirs is { Count: > 0 } own)
             {
                 var netlistDir = inFile.Directory?.FullName ?? ".";
-                var full = own.Select(d => Path.GetFullPath(Path.Combine(netlistDir, d))).ToList();
+                var full = own.Select(d => NetlistFootprintDirs.Resolve(netlistDir, d, extraDirs, inFile.ToString())).ToList();
                 library = FootprintLibrary.Load(extraDirs.Concat(full));
                 recorded.AddRange(full.Select(d => Path.GetRelativePath(projectDir, d).Replace('\\', '/')));
                 preview = preview with { FootprintDirs = null };
@@ -57,21 +57,5 @@ public static class ImportCommand
             return ExitCodes.Success;
         }));
         return command;
-    }
-
-    private static byte[] ReadNetlist(FileInfo file)
-    {
-        try
-        {
-            return File.ReadAllBytes(file.FullName);
-        }
-        catch (FileNotFoundException)
-        {
-            throw new IO.InputException(file.ToString(), "no such netlist file.");
-        }
-        catch (DirectoryNotFoundException)
-        {
-            throw new IO.InputException(file.ToString(), "no such netlist file (its folder does not exist).");
-        }
     }
 }

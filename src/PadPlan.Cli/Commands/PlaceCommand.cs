@@ -76,13 +76,13 @@ public static class PlaceCommand
     public static IEnumerable<string> SideBySide(LayoutFigures before, LayoutFigures after)
     {
         static string Mm(double v) => v.ToString("0.0", CultureInfo.InvariantCulture) + " mm";
-        static string Area(double? v) => v is { } a ? a.ToString("0", CultureInfo.InvariantCulture) + " mm^2" : "automatic";
+        static string Area(double? v) => v is { } a ? a.ToString("0", CultureInfo.InvariantCulture) + " mm²" : "automatic";
         var rows = new (string Figure, string Old, string New)[]
         {
             ("figure", "old", "new"),
             ("total lead", Mm(before.TotalLead), Mm(after.TotalLead)),
             ("longest lead", $"{Mm(before.LongestLead)} ({before.LongestLeadName})", $"{Mm(after.LongestLead)} ({after.LongestLeadName})"),
-            ("wire links", before.Links.ToString(CultureInfo.InvariantCulture), after.Links.ToString(CultureInfo.InvariantCulture)),
+            ("jumpers", before.Links.ToString(CultureInfo.InvariantCulture), after.Links.ToString(CultureInfo.InvariantCulture)),
             ("board area", Area(before.BoardArea), Area(after.BoardArea)),
         };
         var w1 = rows.Max(r => r.Figure.Length);

@@ -22,6 +22,14 @@ public static class SharedOptions
         Description = "Also write the table as CSV to this file.",
     };
 
+    public static Option<bool> Wide() => new("--wide")
+    {
+        Description = "Print each table row on one line, however wide, instead of fitting the tables to the terminal (COLUMNS, else the console's width, else 80).",
+    };
+
+    /// <summary>The width text tables are fitted to: none with --wide, else the terminal's.</summary>
+    public static int? TableWidth(CommandContext context, ParseResult parse, Option<bool> wide) => parse.GetValue(wide) ? null : context.Columns;
+
     public static Option<bool> Quiet() => new("--quiet", "-q")
     {
         Description = "Print only errors.",

@@ -39,7 +39,8 @@ public static class SheetsCommand
             var materials = MaterialsTables.Of(plan);
             var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate), check, materials.All, materials.Cutting);
             SheetOutput.Write(context, book, parse.GetValue(output)!.FullName, chosenFormats, resolution);
-            context.Err.WriteLine($"{book.Sheets.Count} sheet(s) on {chosenPaper.Name}, dated {printedDate:yyyy-MM-dd}. Print the template at actual size and measure its check bar before cutting.");
+            context.Err.WriteLine($"{book.Summary()}; on {chosenPaper.Name}, dated {printedDate:yyyy-MM-dd}.");
+            context.Err.WriteLine("Print the template at actual size and measure its check bar before cutting.");
             return ExitCodes.Success;
         }));
         return command;

@@ -17,24 +17,22 @@ public static class TableOutput
         return project;
     }
 
-    /// <summary>Prints the tables as text to standard output, a blank line between them.</summary>
-    public static void Print(CommandContext context, IEnumerable<ReportTable> tables) =>
-        context.Out.Write(string.Join("\n", tables.Select(TableText.ToText)));
+    /// <summary>Prints the tables as text to standard output, a blank line between them, fitted to `width` characters when given.</summary>
+    public static void Print(CommandContext context, IEnumerable<ReportTable> tables, int? width) =>
+        context.Out.Write(string.Join("\n", tables.Select(t => TableText.ToText(t, width))));
 
     /// <summary>
     /// Writes each table as CSV: the first to the file named, the others beside it with the table's name added
-    /// ("bom.csv", "bom-build-order.csv"), so each file is one plain table a spreadsheet opens.
+    /// ("bom.csv", "bom-build-order.csv"), so each file is one plain table a spreadsheet opens. The files are written as
+    /// one set: all of them, or (on a failure) none.
     /// </summary>
     public static void WriteCsv(CommandContext context, FileInfo file, IReadOnlyList<(string Suffix, ReportTable Table)> tables)
     {
         var dir = file.DirectoryName ?? ".";
         var stem = Path.GetFileNameWithoutExtension(file.Name);
         var ext = file.Extension.Length > 0 ? file.Extension : ".csv";
-        for (var i = 0; i < tables.Count; i++)
-        {
-            var path = i == 0 ? file.FullName : Path.Combine(dir, $"{stem}-{tables[i].Suffix}{ext}");
-            AtomicFile.WriteAllText(path, TableText.ToCsv(tables[i].Table));
-            context.Err.WriteLine($"wrote {path}");
-        }
+        var files = tables.Select((t, i) => (Path: i == 0 ? file.FullName : Path.Combine(dir, $"{stem}-{t.Suffix}{ext}"), Bytes: new System.Text.UTF8Encoding(false).GetBytes(TableText.ToCsv(t.Table)))).ToList();
+        AtomicFile.WriteAll(files);
+        foreach (var (path, _) in files) context.Err.WriteLine($"wrote {path}");
     }
 }

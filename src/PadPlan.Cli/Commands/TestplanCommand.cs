@@ -11,19 +11,20 @@ public static class TestplanCommand
     {
         var project = SharedOptions.ProjectArgument();
         var csv = SharedOptions.CsvOption();
+        var wide = SharedOptions.Wide();
         var threshold = new Option<double>("--beep-below")
         {
             Description = "Resistance below which your continuity beeper sounds, in ohms.",
             DefaultValueFactory = _ => DcPaths.DefaultThreshold,
         };
-        var command = new Command("testplan", "Write a continuity test sheet for checking the finished board.") { project, csv, threshold };
+        var command = new Command("testplan", "Write a continuity test sheet for checking the finished board.") { project, csv, threshold, wide };
         command.SetAction(parse => context.Guarded(() =>
         {
             var placed = TableOutput.ReadPlaced(parse.GetValue(project)!);
             var ohms = parse.GetValue(threshold);
             if (!(ohms > 0) || !double.IsFinite(ohms)) throw new UsageException($"--beep-below {ohms}: give your beeper's threshold in ohms, more than 0 (often 30 to 50).");
             var tables = TestPlanTables.Tables(placed, ohms);
-            TableOutput.Print(context, tables);
+            TableOutput.Print(context, tables, SharedOptions.TableWidth(context, parse, wide));
             var csvFile = parse.GetValue(csv);
             if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, [("tests", tables[0]), ("paths", tables[1])]);
             return ExitCodes.Success;

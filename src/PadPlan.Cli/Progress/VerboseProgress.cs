@@ -10,6 +10,6 @@ public sealed class VerboseProgress(TextWriter err, int runs) : IProgress<Placer
     public void Report(PlacerProgress value)
     {
         lock (_gate)
-            err.WriteLine(FormattableString.Invariant($"  run {value.Run}/{runs}: {value.Stage}{(value.Step > 0 ? $" step {value.Step}" : "")}, cost {value.Cost:0.0}, rules broken by {value.Violation:0.00} mm"));
+            err.WriteLine(FormattableString.Invariant($"  run {value.Run}/{runs}: {value.Stage}{(value.Step > 0 ? $" step {value.Step}" : "")}, cost {value.Cost:0.0}; {value.Remaining}"));
     }
 }

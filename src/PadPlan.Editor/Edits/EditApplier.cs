@@ -115,15 +115,15 @@ public static class EditApplier
     {
         var islands = layout.Islands().Select(i => i.Id).ToHashSet(StringComparer.Ordinal);
         foreach (var end in new[] { from, to })
-            if (!islands.Contains(end)) throw new EditRefused($"{end} is not a pad or strip segment; a wire link joins two of them.");
-        if (from == to) throw new EditRefused("a wire link needs two different pads.");
+            if (!islands.Contains(end)) throw new EditRefused($"{end} is not a pad or strip segment; a jumper joins two of them.");
+        if (from == to) throw new EditRefused("a jumper needs two different pads.");
         var link = new Jumper(FreeId(layout, "W"), from, to);
         return layout with { Jumpers = layout.Jumpers.Append(link).ToValueList() };
     }
 
     private static Layout RemoveLink(Layout layout, string id)
     {
-        var link = layout.Jumpers.FirstOrDefault(j => j.Id == id) ?? throw new EditRefused($"there is no wire link {id}.");
+        var link = layout.Jumpers.FirstOrDefault(j => j.Id == id) ?? throw new EditRefused($"there is no jumper {id}.");
         return layout with { Jumpers = layout.Jumpers.Where(j => !ReferenceEquals(j, link)).ToValueList() };
     }
 

@@ -20,7 +20,7 @@ public sealed class EditRequest
     public string? Net { get; set; }
     /// <summary>add-pad: punch diameter (mm); the toolkit's smallest punch when left out.</summary>
     public double? Size { get; set; }
-    /// <summary>add-link: the two pads or strip segments the wire link joins.</summary>
+    /// <summary>add-link: the two pads or strip segments the jumper joins.</summary>
     public string? From { get; set; }
     public string? To { get; set; }
     /// <summary>remove-link: the link's id.</summary>

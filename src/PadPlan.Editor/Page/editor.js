@@ -11,8 +11,9 @@ const state = {
   plan: null,        // the last view the server sent
   tool: "pick",      // pick | pad | link
   chosen: null,      // { kind: "part" | "pad" | "link", id }
-  linkFrom: null,    // first island of a wire link being made
+  linkFrom: null,    // first island of a jumper being made
   lit: new Set(),    // ids, refs, lead names and nets to highlight
+  litFinding: null,  // rule and message of the finding whose items are lit, so a new view can tell whether it is still there
   view: null,        // { x, y, w, h } in board mm
   placing: false,
 };
@@ -45,6 +46,7 @@ async function edit(change) {
 async function step(which) {
   const r = await call("POST", "/api/" + which);
   if (r.ok) show(r.data);
+  else notice((r.data && r.data.message) || "the editor did not answer");
 }
 
 async function save() {
@@ -72,7 +74,7 @@ async function watchPlacer() {
   if (!r.ok) return;
   const p = r.data;
   $("place-status").textContent = p.running
-    ? `run ${p.run} of ${p.runs}: ${p.stage || "starting"}${p.step ? ", step " + p.step : ""}${p.running && p.violation ? ", still " + p.violation + " mm off" : ""}`
+    ? `run ${p.run} of ${p.runs}: ${p.stage || "starting"}${p.step ? ", step " + p.step : ""}${p.left ? "; " + p.left : ""}`
     : p.note || "idle";
   if (p.running) { setTimeout(watchPlacer, 250); return; }
   state.placing = false;
@@ -132,10 +134,12 @@ function controls() {
   $("hold").disabled = !c || c.kind === "link" || state.placing;
   $("hold").textContent = c && isHeld(c) ? "Let go" : "Hold";
   $("remove").disabled = !c || c.kind === "part" || state.placing;
+  $("swap-open").disabled = !c || c.kind !== "part" || state.placing;
+  if (!c || c.kind !== "part" || c.id !== $("swap-panel").dataset.ref) $("swap-panel").hidden = true;
   $("place").disabled = state.placing;
   $("stop-place").hidden = !state.placing;
   for (const t of ["pick", "pad", "link"]) $("tool-" + t).classList.toggle("on", state.tool === t);
-  $("chosen").textContent = c ? describe(c) : "nothing; click a part, pad, strip or wire link";
+  $("chosen").textContent = c ? describe(c) : "nothing; click a part, pad, strip or jumper";
   window.onbeforeunload = p && p.unsaved ? e => { e.preventDefault(); e.returnValue = ""; return ""; } : null;
 }
 
@@ -157,7 +161,7 @@ function describe(c) {
     return `${p.kind === "strip" ? "strip" : p.kind + " pad"} ${p.id} (net ${nets.join(", ")}) at ${mm(p.x)}, ${mm(p.y)}${p.held ? ", held" : ""}`;
   }
   const j = g.jumpers.find(x => x.id === c.id);
-  return `wire link ${j.id} from ${j.from} to ${j.to}`;
+  return `jumper ${j.id} from ${j.from} to ${j.to}`;
 }
 
 const mm = v => (Math.round(v * 100) / 100).toString();
@@ -182,15 +186,29 @@ function findings() {
     const msg = document.createElement("span"); msg.className = "msg"; msg.textContent = " " + f.message;
     const hint = document.createElement("span"); hint.className = "hint"; hint.textContent = f.hint;
     li.append(sev, rule, msg, hint);
+    if (state.litFinding === key(f)) { li.classList.add("on"); state.lit = new Set(f.items); }
     li.addEventListener("click", () => {
       const on = li.classList.contains("on");
       for (const other of list.children) other.classList.remove("on");
       state.lit = on ? new Set() : new Set(f.items);
+      state.litFinding = on ? null : key(f);
       if (!on) li.classList.add("on");
       light();
     });
     return li;
   }));
+  // The finding that was lit is gone (mended, or taken back): nothing stays lit for it.
+  if (state.litFinding && !p.findings.some(f => key(f) === state.litFinding)) unlight();
+}
+
+const key = f => f.rule + "\n" + f.message;
+
+function unlight() {
+  state.lit = new Set();
+  state.litFinding = null;
+  hoverNet = null;
+  for (const li of $("findings").children) li.classList.remove("on");
+  light();
 }
 
 function nets() {
@@ -235,8 +253,6 @@ function draw() {
     s.addEventListener("pointerdown", e => startDrag(e, { kind: "pad", id: owner, island: i.id }));
     s.addEventListener("mouseenter", () => lightNet(i.net));
     s.addEventListener("mouseleave", () => lightNet(null));
-    const t = el("text", { class: "padid", x: i.x, y: i.y }, pads);
-    t.textContent = i.id;
   }
   const links = el("g", { id: "links" }, svg);
   for (const j of g.jumpers) {
@@ -244,6 +260,9 @@ function draw() {
     line.addEventListener("pointerdown", e => { e.stopPropagation(); choose({ kind: "link", id: j.id }); });
   }
   const held = new Set(state.plan.heldParts);
+  const marksOf = new Map();
+  for (const m of state.plan.marks) { if (!marksOf.has(m.ref)) marksOf.set(m.ref, []); marksOf.get(m.ref).push(m); }
+  const named = new Set(state.plan.namedPins);
   const parts = el("g", { id: "parts" }, svg);
   for (const p of g.parts) {
     const group = el("g", { class: "part" + (held.has(p.ref) ? " held" : ""), "data-ref": p.ref, "data-x": p.position[0], "data-y": p.position[1] }, parts);
@@ -252,14 +271,25 @@ function draw() {
     }
     const body = el("polygon", { class: "body", points: p.body.map(q => q.join(",")).join(" "), "data-ref": p.ref }, group);
     body.addEventListener("pointerdown", e => startDrag(e, { kind: "part", id: p.ref }));
+    el("title", {}, body).textContent = `${p.ref}: ${p.value} (${p.footprint})`;
+    for (const m of marksOf.get(p.ref) || [])
+      el("polygon", { class: "mark " + m.kind + (m.filled ? " filled" : ""), points: m.points.map(q => q.join(",")).join(" "), "data-mark": m.kind, "data-of": `${p.ref}.${m.lead}` }, group);
     const c = centre(p.body);
-    const t = el("text", { class: "ref", x: c[0], y: c[1] }, group);
+    const t = el("text", { class: "ref", x: c[0], y: c[1] - (showValues() ? 0.9 : 0) }, group);
     t.textContent = p.ref;
+    // A long value ("12:3 turns bifilar toroid") is cut short on the body; the whole of it is in the body's hover title.
+    if (showValues()) el("text", { class: "value", x: c[0], y: c[1] + 0.9 }, group).textContent = p.value.length > 10 ? p.value.slice(0, 9) + "\u2026" : p.value;
     for (const l of p.leads) {
       const end = el("circle", { class: "end" + (l.pad === null ? " plane-end" : ""), cx: l.landing[0], cy: l.landing[1], r: Math.max(0.4, l.diameter * 0.6), "data-lead": `${p.ref}.${l.pin}`, "data-net": l.net }, group);
       end.addEventListener("pointerdown", e => startDrag(e, { kind: "end", id: p.ref, pin: l.pin, x: l.landing[0], y: l.landing[1] }));
     }
+    // Pin names (E/B/C, A/K, +/-) beside each lead end, as the assembly view prints them.
+    if (named.has(p.ref))
+      for (const l of p.leads) el("text", { class: "pin", x: l.landing[0], y: l.landing[1] - Math.max(0.9, l.diameter * 0.6 + 0.6), "data-of": `${p.ref}.${l.pin}` }, group).textContent = l.pin === "-" ? "\u2212" : l.pin;
   }
+  // Pad ids last, so they read above part bodies.
+  const ids = el("g", { id: "padids" }, svg);
+  for (const i of g.pads) el("text", { class: "padid", x: i.x, y: i.y, "data-for": i.id }, ids).textContent = i.id;
   const threads = el("g", { id: "threads" }, svg);
   for (const o of state.plan.open) el("line", { class: "thread", x1: o.from[0], y1: o.from[1], x2: o.to[0], y2: o.to[1], "data-net": o.net }, threads);
   light();
@@ -352,7 +382,8 @@ function startDrag(e, what) {
   e.preventDefault();
   if (state.tool === "link" && what.kind === "pad") { linkClick(what.island); return; }
   if (state.tool === "pad") return;
-  if (what.kind !== "end") choose({ kind: what.kind, id: what.id });
+  // A lead end belongs to its part: grabbing it (on an upright part it lies inside the body) chooses that part.
+  choose({ kind: what.kind === "end" ? "part" : what.kind, id: what.id });
   drag = { what, from: toBoard(e), moved: false, target: e.target };
   $("board").setPointerCapture(e.pointerId);
 }
@@ -410,7 +441,7 @@ function onBoardDown(e) {
 }
 
 function linkClick(island) {
-  if (!state.linkFrom) { state.linkFrom = island; notice(`wire link from ${island}: now click the other pad`); return; }
+  if (!state.linkFrom) { state.linkFrom = island; notice(`jumper from ${island}: now click the other pad`); return; }
   const from = state.linkFrom;
   state.linkFrom = null;
   $("notice").hidden = true;
@@ -447,6 +478,54 @@ function remove() {
   if (c.kind === "link") edit({ kind: "remove-link", link: c.id });
 }
 
+function showValues() { return $("values").checked; }
+
+function toggleValues() { $("values").checked = !$("values").checked; valuesChanged(); }
+
+function valuesChanged() {
+  sessionStorage.setItem("padplan-values", $("values").checked ? "1" : "");
+  draw();
+}
+
+// ---------- swapping a part for the one on hand ----------
+
+async function openSwap() {
+  const c = state.chosen;
+  if (!c || c.kind !== "part") return;
+  const r = await call("GET", "/api/swap?ref=" + encodeURIComponent(c.id));
+  if (!r.ok) { notice((r.data && r.data.message) || "the editor did not answer"); return; }
+  const s = r.data;
+  $("swap-panel").dataset.ref = s.ref;
+  $("swap-ref").textContent = `${s.ref} (${s.value}, ${s.footprint}${s.variant ? ", " + s.variant : ""})`;
+  const fp = $("swap-footprint");
+  fp.replaceChildren(...s.footprints.map(f => { const o = document.createElement("option"); o.value = f.name; o.textContent = f.name; o.title = f.description; o.dataset.variants = JSON.stringify(f.variants); return o; }));
+  fp.value = s.footprint;
+  fillVariants(s.variant);
+  $("swap-value").value = s.value;
+  $("swap-widen").value = "0";
+  $("swap-panel").hidden = false;
+}
+
+function fillVariants(keep) {
+  const o = $("swap-footprint").selectedOptions[0];
+  const variants = o ? JSON.parse(o.dataset.variants) : [];
+  fillSelect($("swap-variant"), ["", ...variants], keep || "");
+  $("swap-variant").options[0].textContent = variants.length ? "(first)" : "(none)";
+  $("swap-variant").disabled = variants.length === 0;
+}
+
+async function doSwap() {
+  const ref = $("swap-panel").dataset.ref;
+  $("swap-go").disabled = true;
+  notice(`swapping ${ref} and placing it again among its neighbours ...`);
+  const r = await call("POST", "/api/swap", { ref, footprint: $("swap-footprint").value, variant: $("swap-variant").value || null, value: $("swap-value").value, widen: parseInt($("swap-widen").value, 10) });
+  $("swap-go").disabled = false;
+  if (!r.ok) { notice((r.data && r.data.message) || "the swap was refused"); return; }
+  show(r.data);
+  notice(`swapped ${ref}; the check ${r.data.errors === 0 ? "passes" : "finds " + r.data.errors + " errors"}. Take back undoes it.`);
+  $("swap-panel").hidden = true;
+}
+
 // ---------- wiring up ----------
 
 function keys(e) {
@@ -458,8 +537,9 @@ function keys(e) {
   const actions = {
     "+": () => zoom(1 / 1.25), "=": () => zoom(1 / 1.25), "-": () => zoom(1.25), "0": () => setView(whole()),
     ArrowLeft: () => pan(-0.1, 0), ArrowRight: () => pan(0.1, 0), ArrowUp: () => pan(0, -0.1), ArrowDown: () => pan(0, 0.1),
-    t: turn, h: hold, Delete: remove, Backspace: remove, p: () => setTool("pick"), n: () => setTool("pad"), w: () => setTool("link"),
-    Escape: () => { setTool("pick"); choose(null); },
+    t: turn, h: hold, Delete: remove, Backspace: remove, p: () => setTool("pick"), n: () => setTool("pad"),
+    j: () => setTool("link"), v: toggleValues,
+    Escape: () => { setTool("pick"); choose(null); unlight(); },
   };
   if (actions[k]) { e.preventDefault(); actions[k](); }
 }
@@ -479,6 +559,11 @@ document.addEventListener("DOMContentLoaded", () => {
   $("turn").addEventListener("click", turn);
   $("hold").addEventListener("click", hold);
   $("remove").addEventListener("click", remove);
+  $("swap-open").addEventListener("click", openSwap);
+  $("swap-footprint").addEventListener("change", () => fillVariants(null));
+  $("swap-go").addEventListener("click", doSwap);
+  $("swap-cancel").addEventListener("click", () => { $("swap-panel").hidden = true; });
+  $("values").addEventListener("change", valuesChanged);
   $("place").addEventListener("click", placeRest);
   $("stop-place").addEventListener("click", () => call("POST", "/api/place/stop"));
   $("grid").addEventListener("change", () => sessionStorage.setItem("padplan-grid", $("grid").value));
@@ -489,5 +574,6 @@ document.addEventListener("DOMContentLoaded", () => {
   $("finish").addEventListener("click", finish);
   const g = sessionStorage.getItem("padplan-grid");
   if (g) $("grid").value = g;
+  $("values").checked = sessionStorage.getItem("padplan-values") === "1";
   load();
 });

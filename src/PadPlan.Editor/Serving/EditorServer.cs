@@ -1,4 +1,5 @@
 using PadPlan.Gate;
+using PadPlan.IO;
 using System.Net;
 using System.Security.Cryptography;
 using System.Text.Json;
@@ -33,6 +34,7 @@ public sealed class EditorServer : IAsyncDisposable
     private bool _placing;
     private string _placeNote = "";
     private readonly Effort _effort;
+    private readonly SwapEdit _swap = new(SwapEdit.LibraryFor);
     private int _port;
 
     private EditorServer(WebApplication app, EditSession session, string token, Effort effort)
@@ -88,25 +90,21 @@ public sealed class EditorServer : IAsyncDisposable
         app.MapGet("/api/model.glb", () => Model());
         app.MapPost("/api/edit", async (HttpRequest request) =>
         {
-            var edit = await ReadEdit(request);
+            var edit = await ReadJson<EditRequest>(request);
             if (edit is null) return Refused("the edit is not valid JSON.");
             if (Placing) return Refused("the placer is still working; wait for it or stop it first.");
-            try
-            {
-                _session.Apply(edit);
-            }
-            catch (EditRefused e)
-            {
-                return Refused(e.Message);
-            }
-            catch (ArgumentException e)
-            {
-                return Refused(e.Message);
-            }
-            return View();
+            return Changing(() => _session.Apply(edit));
         });
-        app.MapPost("/api/undo", () => Placing ? Refused("the placer is still working.") : Step(_session.Undo()));
-        app.MapPost("/api/redo", () => Placing ? Refused("the placer is still working.") : Step(_session.Redo()));
+        app.MapPost("/api/undo", () => Placing ? Refused("the placer is still working.") : Changing(() => _session.Undo(), "nothing to take back."));
+        app.MapPost("/api/redo", () => Placing ? Refused("the placer is still working.") : Changing(() => _session.Redo(), "nothing to do again."));
+        app.MapGet("/api/swap", (string? @ref) => Changing(() => Results.Json(_swap.Choices(_session.Current, @ref ?? ""), Json)));
+        app.MapPost("/api/swap", async (HttpRequest request) =>
+        {
+            var swap = await ReadJson<SwapEditRequest>(request);
+            if (swap is null) return Refused("the swap is not valid JSON.");
+            if (Placing) return Refused("the placer is still working; wait for it or stop it first.");
+            return Changing(() => _session.Replace(_swap.Apply(_session.Current, swap)));
+        });
         app.MapPost("/api/save", () => Saved(_session.Save()));
         app.MapPost("/api/keep-copy", () => Saved(_session.SaveCopy()));
         app.MapPost("/api/place", () => StartPlacing());
@@ -147,7 +145,29 @@ public sealed class EditorServer : IAsyncDisposable
         return Results.Bytes(GlbFile.Write(BoardModel.Of(project)), "model/gltf-binary");
     }
 
-    private IResult Step(bool done) => done ? View() : Refused("nothing to step to.");
+    /// <summary>
+    /// Runs one change and answers with the new view, or with a message and the plan unchanged: a refusal (422), or a
+    /// fault of the server itself (500), never an empty answer.
+    /// </summary>
+    private IResult Changing(Action change) => Changing(() => { change(); return View(); });
+
+    private IResult Changing(Func<bool> step, string nothing) => Changing(() => step() ? View() : Refused(nothing));
+
+    private static IResult Changing(Func<IResult> change)
+    {
+        try
+        {
+            return change();
+        }
+        catch (Exception e) when (e is EditRefused or ArgumentException or InvalidOperationException or InputException)
+        {
+            return Refused(e.Message);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            return Results.Json(new { message = "not applied: " + e.Message }, Json, statusCode: StatusCodes.Status500InternalServerError);
+        }
+    }
 
     private IResult Saved(SaveOutcome outcome) =>
         Results.Json(outcome, Json, statusCode: outcome.Saved ? StatusCodes.Status200OK : StatusCodes.Status409Conflict);
@@ -176,9 +196,9 @@ public sealed class EditorServer : IAsyncDisposable
         {
             note = Outcome(task);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (EditRefused e)
         {
-            note = "placed, but the recovery copy could not be written: " + e.Message;
+            note = "placed, but the plan could not be kept, so it is as it was: " + e.Message;
         }
         lock (_placeGate)
         {
@@ -209,17 +229,18 @@ public sealed class EditorServer : IAsyncDisposable
                 stage = last.Stage ?? "",
                 step = last.Step,
                 violation = Math.Round(last.Violation, 2),
+                left = last.Stage is null ? "" : last.Remaining,
                 note = _placeNote,
                 revision = _session.Revision,
             }, Json);
         }
     }
 
-    private static async Task<EditRequest?> ReadEdit(HttpRequest request)
+    private static async Task<T?> ReadJson<T>(HttpRequest request) where T : class
     {
         try
         {
-            return await JsonSerializer.DeserializeAsync<EditRequest>(request.Body, Json);
+            return await JsonSerializer.DeserializeAsync<T>(request.Body, Json);
         }
         catch (JsonException)
         {
@@ -237,5 +258,6 @@ public sealed class EditorServer : IAsyncDisposable
     {
         await StopAsync();
         await _app.DisposeAsync();
+        _session.Dispose();
     }
 }

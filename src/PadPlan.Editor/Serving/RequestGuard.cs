@@ -8,12 +8,15 @@ namespace PadPlan.Editor.Serving;
 /// The checks every request passes before it reaches the editor: the Host header must name the loopback address and
 /// our port (so a page from another site cannot reach us through DNS rebinding), the per-run token must match
 /// (header; for the page itself, the query of the URL the browser was given), and a state-changing request must come
-/// from our own origin.
+/// from our own origin. Only an edit carries a body; any other request that brings one is refused, so nothing the
+/// server does not read can ride along.
 /// </summary>
 public sealed class RequestGuard(string token, Func<int> port)
 {
     public const string TokenHeader = "X-PadPlan-Token";
     public const string TokenQuery = "t";
+    /// <summary>The one request that carries a body (a JSON edit).</summary>
+    public const string BodyPath = "/api/edit";
     private readonly byte[] _token = Encoding.UTF8.GetBytes(token);
 
     public async Task InvokeAsync(HttpContext context, RequestDelegate next)
@@ -50,6 +53,8 @@ public sealed class RequestGuard(string token, Func<int> port)
             if (request.Headers["Sec-Fetch-Site"].ToString() is "cross-site" or "same-site")
                 return (StatusCodes.Status403Forbidden, "refused: a change must come from the editor's own page.");
         }
+        if ((request.ContentLength > 0 || request.Headers.TransferEncoding.Count > 0) && !request.Path.Equals(BodyPath, StringComparison.Ordinal))
+            return (StatusCodes.Status400BadRequest, "refused: this request takes no body.");
         return null;
     }
 

@@ -11,9 +11,11 @@ namespace PadPlan.Editor.Sessions;
 /// plan for redo (no limit within the session), and what the file on disk held when it was loaded, so a save never
 /// overwrites someone else's change. All members are safe to call from several request threads.
 /// </summary>
-public sealed class EditSession
+public sealed class EditSession : IDisposable
 {
     private readonly Lock _gate = new();
+    // Holds this session's own recovery copy name, so a second editor on the same project keeps its copy under another name.
+    private WriterLock? _recoveryClaim;
     private readonly Stack<Project> _undo = new();
     private readonly Stack<Project> _redo = new();
     private byte[] _diskHash;
@@ -24,6 +26,7 @@ public sealed class EditSession
         Path = path;
         Current = _saved = project;
         _diskHash = diskHash;
+        (RecoveryPath, _recoveryClaim) = ClaimRecovery(path);
     }
 
     /// <summary>Full path of the project file; never sent to the page.</summary>
@@ -36,14 +39,72 @@ public sealed class EditSession
     public bool CanRedo => _redo.Count > 0;
     public string FileName => System.IO.Path.GetFileName(Path);
 
-    /// <summary>The copy kept beside the project while there are unsaved edits: "NAME.unsaved.padplan.json".</summary>
-    public string RecoveryPath => RecoveryPathOf(Path);
+    /// <summary>
+    /// This session's copy, kept beside the project while there are unsaved edits: "NAME.unsaved.padplan.json", or
+    /// "NAME.unsaved-2.padplan.json" (and on) when another editor already has the first one open.
+    /// </summary>
+    public string RecoveryPath { get; private set; }
 
-    public static string RecoveryPathOf(string path)
+    /// <summary>True once this session's recovery copy is on disk.</summary>
+    public bool RecoveryKept => File.Exists(RecoveryPath);
+
+    /// <summary>The n-th recovery copy name of a project: "NAME.unsaved.padplan.json", then "NAME.unsaved-2.padplan.json", ...</summary>
+    public static string RecoveryPathOf(string path, int n = 1)
     {
         var name = System.IO.Path.GetFileName(path);
         var stem = name.EndsWith(ProjectFile.Extension, StringComparison.OrdinalIgnoreCase) ? name[..^ProjectFile.Extension.Length] : name;
-        return System.IO.Path.Combine(System.IO.Path.GetDirectoryName(path) ?? ".", stem + ".unsaved" + ProjectFile.Extension);
+        return System.IO.Path.Combine(System.IO.Path.GetDirectoryName(path) ?? ".", stem + ".unsaved" + (n > 1 ? $"-{n}" : "") + ProjectFile.Extension);
+    }
+
+    /// <summary>Copies this many per project at most; more editors than that on one file is a mistake worth stopping.</summary>
+    private const int MaxRecoveryCopies = 20;
+
+    /// <summary>A recovery copy left by an editor that is no longer running (its name is not claimed by a live one), or null.</summary>
+    public static string? LeftOverRecovery(string path)
+    {
+        for (var n = 1; n <= MaxRecoveryCopies; n++)
+        {
+            var candidate = RecoveryPathOf(System.IO.Path.GetFullPath(path), n);
+            if (!File.Exists(candidate)) continue;
+            try
+            {
+                using (WriterLock.Take(candidate)) return candidate;
+            }
+            catch (InputException)
+            {
+                // another editor running now keeps this copy up to date
+            }
+        }
+        return null;
+    }
+
+    // The first recovery name that holds no file and that no running editor has claimed.
+    private static (string, WriterLock) ClaimRecovery(string path)
+    {
+        for (var n = 1; n <= MaxRecoveryCopies; n++)
+        {
+            var candidate = RecoveryPathOf(path, n);
+            if (File.Exists(candidate)) continue;
+            try
+            {
+                return (candidate, WriterLock.Take(candidate));
+            }
+            catch (InputException)
+            {
+                // claimed by an editor running now: try the next name
+            }
+        }
+        throw new InputException(path, $"{MaxRecoveryCopies} editors already have {System.IO.Path.GetFileName(path)} open, or their recovery copies are left beside it; finish them or open those copies first.");
+    }
+
+    /// <summary>Lets go of this session's recovery name; the copy itself stays on disk when there are unsaved edits.</summary>
+    public void Dispose()
+    {
+        lock (_gate)
+        {
+            _recoveryClaim?.Dispose();
+            _recoveryClaim = null;
+        }
     }
 
     /// <summary>Reads the project (throws <see cref="InputException"/> for a bad file) and remembers what the disk held.</summary>
@@ -54,22 +115,57 @@ public sealed class EditSession
         return new EditSession(full, project, HashOf(full) ?? []);
     }
 
-    /// <summary>Applies an edit; throws <see cref="EditRefused"/> and changes nothing when it cannot be applied.</summary>
+    /// <summary>Applies an edit; throws <see cref="EditRefused"/> and changes nothing when it cannot be applied or kept.</summary>
     public void Apply(EditRequest edit)
     {
         lock (_gate) Replace(EditApplier.Apply(Current, edit));
     }
 
-    /// <summary>Makes a whole new plan current (e.g. the placer's result) as one undoable step.</summary>
+    /// <summary>
+    /// Makes a whole new plan current (an edit, a swap, the placer's result) as one undoable step. Refused with
+    /// <see cref="EditRefused"/>, changing nothing, when the plan would not read back from its own file (a value
+    /// outside the project format's limits) or when its recovery copy cannot be written.
+    /// </summary>
     public void Replace(Project next)
     {
         lock (_gate)
         {
             if (Equals(next, Current)) return;
+            Keep(next, ReadsBack(next));
             _undo.Push(Current);
             _redo.Clear();
             Current = next;
-            Changed();
+            Revision++;
+        }
+    }
+
+    /// <summary>The file bytes of a plan, once they have been read back as the same plan; refused otherwise.</summary>
+    private byte[] ReadsBack(Project next)
+    {
+        var bytes = ProjectFile.ToBytes(next);
+        try
+        {
+            if (Equals(ProjectFile.Parse(bytes, FileName), next)) return bytes;
+        }
+        catch (InputException e)
+        {
+            throw new EditRefused($"not applied: the project file could not hold the result ({(e.JsonPath is { } at ? at + ": " : "")}{e.Message.TrimEnd('.')}).");
+        }
+        throw new EditRefused("not applied: the project file would not read back as this plan.");
+    }
+
+    // The recovery copy follows every change and is written before the change is made: a change that cannot be kept is not made.
+    // It is written while unsaved and removed once the plan is back to what the file holds.
+    private void Keep(Project next, byte[] bytes)
+    {
+        try
+        {
+            if (!Equals(next, _saved)) AtomicFile.WriteAllBytes(RecoveryPath, bytes);
+            else if (File.Exists(RecoveryPath)) File.Delete(RecoveryPath);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or InputException)
+        {
+            throw new EditRefused($"not applied: the recovery copy {System.IO.Path.GetFileName(RecoveryPath)} could not be written ({e.Message}). Free some disk space or make the folder writable, then try again; the plan is as it was.");
         }
     }
 
@@ -82,9 +178,10 @@ public sealed class EditSession
         lock (_gate)
         {
             if (from.Count == 0) return false;
+            Keep(from.Peek(), ProjectFile.ToBytes(from.Peek()));
             to.Push(Current);
             Current = from.Pop();
-            Changed();
+            Revision++;
             return true;
         }
     }
@@ -113,6 +210,8 @@ public sealed class EditSession
             if (Refusal(copy) is { } refused) return refused;
             if (File.Exists(oldRecovery)) File.Delete(oldRecovery);
             Path = copy;
+            _recoveryClaim?.Dispose();
+            (RecoveryPath, _recoveryClaim) = ClaimRecovery(copy);
             return new SaveOutcome(true, FileName, $"kept the plan as {FileName} beside the project; this page now edits that file");
         }
     }
@@ -133,28 +232,22 @@ public sealed class EditSession
 
     private void WriteTo(string path)
     {
-        var bytes = ProjectFile.ToBytes(Current);
+        var bytes = ProjectFile.ToCheckedBytes(Current, path);
         using (ProjectFile.Claim(path)) AtomicFile.WriteAllBytes(path, bytes);
         _diskHash = SHA256.HashData(bytes);
         _saved = Current;
         Revision++;
-        var recovery = RecoveryPathOf(path);
-        if (File.Exists(recovery)) File.Delete(recovery);
+        if (File.Exists(RecoveryPath)) File.Delete(RecoveryPath);
     }
 
-    // The recovery copy follows every change: written while unsaved, removed once the plan is back to what the file holds.
-    private void Changed()
-    {
-        Revision++;
-        if (Unsaved) AtomicFile.WriteAllBytes(RecoveryPath, ProjectFile.ToBytes(Current));
-        else if (File.Exists(RecoveryPath)) File.Delete(RecoveryPath);
-    }
-
-    private static string FreeCopyPath(string path)
+    /// <summary>The first free "BASE-N.padplan.json" beside the project, N from 2; a copy of a copy numbers the same base ("p-3", never "p-2-2").</summary>
+    internal static string FreeCopyPath(string path)
     {
         var dir = System.IO.Path.GetDirectoryName(path) ?? ".";
         var name = System.IO.Path.GetFileName(path);
         var stem = name.EndsWith(ProjectFile.Extension, StringComparison.OrdinalIgnoreCase) ? name[..^ProjectFile.Extension.Length] : System.IO.Path.GetFileNameWithoutExtension(name);
+        var numbered = System.Text.RegularExpressions.Regex.Match(stem, @"^(?<base>.+)-[0-9]+$");
+        if (numbered.Success) stem = numbered.Groups["base"].Value;
         for (var n = 2; ; n++)
         {
             var candidate = System.IO.Path.Combine(dir, $"{stem}-{n}{ProjectFile.Extension}");
@@ -166,9 +259,9 @@ public sealed class EditSession
     {
         try
         {
-            return SHA256.HashData(File.ReadAllBytes(path));
+            return SHA256.HashData(InputFile.ReadAllBytes(path, ProjectFiles.Limits.InputLimits.MaxFileBytes, "project file"));
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (InputException)
         {
             return null;
         }

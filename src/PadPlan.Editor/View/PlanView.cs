@@ -20,6 +20,10 @@ public sealed class PlanView
     public List<double> Punches { get; set; } = [];
     public List<FindingView> Findings { get; set; } = [];
     public List<OpenThread> Open { get; set; } = [];
+    /// <summary>Polarity and pin-1 marks of the placed parts (band, notch, dot, winding start), from the footprints' marks, in board mm.</summary>
+    public List<MarkView> Marks { get; set; } = [];
+    /// <summary>Parts whose lead ends carry their pin names on the bench (E/B/C, A/K, +/-), as the assembly view prints them.</summary>
+    public List<string> NamedPins { get; set; } = [];
     public int Errors { get; set; }
     public int Warnings { get; set; }
     /// <summary>Server time of the last check, for the status line (not a test figure).</summary>
@@ -54,4 +58,14 @@ public sealed class OpenThread
     public string Net { get; set; } = "";
     public double[] From { get; set; } = [];
     public double[] To { get; set; } = [];
+}
+
+/// <summary>One printed mark of a placed part: its outline in board mm, filled (band, dot) or drawn (notch).</summary>
+public sealed class MarkView
+{
+    public string Ref { get; set; } = "";
+    public string Lead { get; set; } = "";
+    public string Kind { get; set; } = "";
+    public List<double[]> Points { get; set; } = [];
+    public bool Filled { get; set; }
 }

@@ -2,6 +2,7 @@ using System.Diagnostics;
 using PadPlan.Editor.Edits;
 using PadPlan.Model;
 using PadPlan.Output.Geometry;
+using PadPlan.Output.Sheets;
 using PadPlan.Rules;
 
 namespace PadPlan.Editor.View;
@@ -34,10 +35,25 @@ public static class PlanViews
                 Items = [.. f.Items],
             }).ToList(),
             Open = layout is null ? [] : OpenThreads(project, layout, report),
+            Marks = layout is null ? [] : MarksOf(project, layout),
+            NamedPins = project.Parts.Where(p => PinMarks.NamesShown(project.FootprintOf(p), project.FootprintOf(p).PinNames(p.Variant))).Select(p => p.Ref).ToList(),
             Errors = report.Errors,
             Warnings = report.Warnings,
             CheckMilliseconds = Math.Round(ms, 1),
         };
+    }
+
+    // The same marks the assembly view prints (Output/Sheets/PinMarks), at board scale.
+    private static List<MarkView> MarksOf(Project project, Layout layout)
+    {
+        var board = new BoardView(Point.Origin, 1);
+        return layout.Placements.Where(p => project.FindPart(p.Ref) is not null)
+            .SelectMany(p => PinMarks.Shapes(project.FindPart(p.Ref)!, project.FootprintOf(project.FindPart(p.Ref)!), p, board))
+            .Select(m => new MarkView
+            {
+                Ref = m.Ref, Lead = m.Lead, Kind = m.Kind.ToString().ToLowerInvariant(), Filled = m.Filled,
+                Points = m.Shape.Select(q => new[] { Math.Round(q.X, 3), Math.Round(q.Y, 3) }).ToList(),
+            }).ToList();
     }
 
     private static PadAnchor Anchor(Pad pad) => new()
@@ -51,7 +67,7 @@ public static class PlanViews
     };
 
     // Drawing help only: the check has already said which net is open and which leads it names; this draws the shortest
-    // lines that would join the pieces those leads land in (pieces by island, joined by wire links).
+    // lines that would join the pieces those leads land in (pieces by island, joined by jumpers).
     private static List<OpenThread> OpenThreads(Project project, Layout layout, CheckReport report)
     {
         var threads = new List<OpenThread>();

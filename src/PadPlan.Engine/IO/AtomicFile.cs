@@ -9,37 +9,87 @@ namespace PadPlan.IO;
 /// </summary>
 public static partial class AtomicFile
 {
-    public static void WriteAllBytes(string path, ReadOnlySpan<byte> bytes)
+    /// <summary>Writes through a symbolic link: the file it points to is replaced and the link stays a link.</summary>
+    public static void WriteAllBytes(string path, ReadOnlySpan<byte> bytes) => WriteAll([(path, bytes.ToArray())]);
+
+    /// <summary>
+    /// Writes files that belong together (a CSV and its companion tables) as a set: every file is first written whole to
+    /// its temporary file, and only then are they renamed into place one after the other. A failure while writing (a
+    /// full disk) leaves every old file as it was; only a kill in the moment between two renames can leave a new file
+    /// beside an old one, each of them whole (docs/limits.md).
+    /// </summary>
+    public static void WriteAll(IReadOnlyList<(string Path, byte[] Bytes)> files)
     {
-        var full = Path.GetFullPath(path);
-        var dir = Path.GetDirectoryName(full) ?? ".";
-        EnsureReplaceable(full);
-        RemoveStaleTemps(dir, Path.GetFileName(full));
-        var temp = Path.Combine(dir, $".{Path.GetFileName(full)}.{Environment.ProcessId}.{Guid.NewGuid():N}.tmp");
+        var targets = files.Select(f => (Given: f.Path, Full: RealPath(f.Path), f.Bytes)).ToList();
+        foreach (var (_, full, _) in targets)
+        {
+            EnsureReplaceable(full);
+            RemoveStaleTemps(Path.GetDirectoryName(full) ?? ".", Path.GetFileName(full));
+        }
+        var temps = targets.Select(t => Path.Combine(Path.GetDirectoryName(t.Full) ?? ".", $".{Path.GetFileName(t.Full)}.{Environment.ProcessId}.{Guid.NewGuid():N}.tmp")).ToList();
+        var current = 0;
         try
         {
-            Directory.CreateDirectory(dir);
-            using (var stream = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None))
+            for (current = 0; current < targets.Count; current++)
             {
-                stream.Write(bytes);
-                stream.Flush(flushToDisk: true);
+                Directory.CreateDirectory(Path.GetDirectoryName(targets[current].Full) ?? ".");
+                using (var stream = new FileStream(temps[current], FileMode.CreateNew, FileAccess.Write, FileShare.None))
+                {
+                    stream.Write(targets[current].Bytes);
+                    stream.Flush(flushToDisk: true);
+                }
+                FaultPoint.Step("file.temp-written");
             }
-            File.Move(temp, full, overwrite: true);
+            for (current = 0; current < targets.Count; current++)
+            {
+                File.Move(temps[current], targets[current].Full, overwrite: true);
+                FaultPoint.Step("file.renamed");
+            }
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            // The user knows their file, not our temporary one: name theirs and say it is unchanged.
+            // The user knows their file, not our temporary one: name theirs and say what is unchanged.
+            var (given, full, _) = targets[Math.Min(current, targets.Count - 1)];
+            var temp = temps[Math.Min(current, temps.Count - 1)];
             var reason = e.Message.Replace(temp, full, StringComparison.Ordinal).Replace(Path.GetFileName(temp), Path.GetFileName(full), StringComparison.Ordinal);
-            throw new InputException(path, $"cannot write the file ({reason}); {(File.Exists(full) ? "the old file is unchanged" : "nothing was written")}.");
+            throw new InputException(given, $"cannot write the file ({reason}); {Unchanged(targets.Select(t => t.Full).ToList(), current, temps)}.");
         }
         finally
         {
-            TryDelete(temp);
+            foreach (var temp in temps) TryDelete(temp);
         }
+    }
+
+    // What a failed write left: nothing renamed yet means every old file stands (or nothing was written at all).
+    private static string Unchanged(IReadOnlyList<string> targets, int failedAt, IReadOnlyList<string> temps)
+    {
+        var renamed = targets.Where((t, i) => i < failedAt && !File.Exists(temps[i])).ToList();
+        if (renamed.Count > 0) return $"{string.Join(", ", renamed.Select(Path.GetFileName))} {(renamed.Count == 1 ? "was" : "were")} written, the rest not";
+        if (targets.Count == 1) return File.Exists(targets[0]) ? "the old file is unchanged" : "nothing was written";
+        return "no file was written or changed";
     }
 
     public static void WriteAllText(string path, string text) =>
         WriteAllBytes(path, new System.Text.UTF8Encoding(encoderShouldEmitUTF8Identifier: false).GetBytes(text));
+
+    /// <summary>
+    /// The full path of the file itself: a symbolic link (or a chain of them) is followed to the file it names, so the
+    /// writer lock and the write both act on the real file, and a project reached by two paths has one lock.
+    /// </summary>
+    public static string RealPath(string path)
+    {
+        var full = Path.GetFullPath(path);
+        for (var hop = 0; hop < MaxLinkHops; hop++)
+        {
+            var target = new FileInfo(full).LinkTarget;
+            if (target is null) return full;
+            full = Path.GetFullPath(target, Path.GetDirectoryName(full) ?? ".");
+        }
+        throw new InputException(path, $"this symbolic link leads through more than {MaxLinkHops} links (a loop?); give the path of the file itself.");
+    }
+
+    /// <summary>Links followed before a path is taken for a loop (Linux's own limit, MAXSYMLINKS, is 40).</summary>
+    private const int MaxLinkHops = 40;
 
     /// <summary>Refuses (exit 2) to replace a file the user has made read-only.</summary>
     public static void EnsureReplaceable(string path)
@@ -68,8 +118,7 @@ public static partial class AtomicFile
         var temps = forName is null ? Directory.EnumerateFileSystemEntries(dir, ".*.tmp") : Directory.EnumerateFileSystemEntries(dir, $".{forName}.*.tmp");
         foreach (var entry in temps.Concat(Directory.EnumerateFileSystemEntries(dir, $"{forName ?? ""}*.lock.*.stale")).ToList())
         {
-            var match = TempName().Match(Path.GetFileName(entry));
-            if (!match.Success || !int.TryParse(match.Groups["pid"].Value, out var pid) || IsRunning(pid)) continue;
+            if (!IsLeftover(entry)) continue;
             try
             {
                 if (Directory.Exists(entry)) Directory.Delete(entry, recursive: true);
@@ -82,6 +131,13 @@ public static partial class AtomicFile
             }
         }
         return removed;
+    }
+
+    /// <summary>True for a temporary file or folder of ours (".NAME.PID.RANDOM.tmp", ".old", ".stale") whose process has ended.</summary>
+    public static bool IsLeftover(string path)
+    {
+        var match = TempName().Match(Path.GetFileName(path));
+        return match.Success && int.TryParse(match.Groups["pid"].Value, out var pid) && !IsRunning(pid);
     }
 
     private static bool IsRunning(int pid)
@@ -110,6 +166,6 @@ public static partial class AtomicFile
         }
     }
 
-    [GeneratedRegex(@"^.+\.(?<pid>[0-9]+)\.[0-9a-f]{32}\.(tmp|stale)$")]
+    [GeneratedRegex(@"^.+\.(?<pid>[0-9]+)\.[0-9a-f]{32}\.(tmp|stale|old)$")]
     private static partial Regex TempName();
 }

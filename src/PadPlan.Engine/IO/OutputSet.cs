@@ -1,12 +1,19 @@
 namespace PadPlan.IO;
 
 /// <summary>
-/// A set of files that replaces the old set in a folder as a whole: every file is first written into a temporary
-/// folder ".FOLDER.PID.RANDOM.tmp" beside the target, and only when all are written (and every target can be replaced)
-/// are they moved into place. A failure before that leaves the old files exactly as they were.
+/// A folder of output files (sheets, the demo's files) replaced as a whole: every file is written into a new folder
+/// ".FOLDER.PID.RANDOM.tmp" beside the target, with a list of its files (<see cref="ListName"/>); then the old folder is
+/// renamed aside (".FOLDER.PID.RANDOM.old"), the new one renamed into its place, and the old one deleted. A reader sees
+/// the whole old set, then for an instant no folder, then the whole new set; never a mix, and no file of the old set
+/// that the new set lacks. A folder that holds files PadPlan did not write (not on its list) is refused, never replaced,
+/// so a user's own files are never lost. A run killed between the two renames leaves the old folder aside; the next run
+/// for that folder puts it back before doing anything else. docs/limits.md states the protocol step by step.
 /// </summary>
 public sealed class OutputSet : IDisposable
 {
+    /// <summary>The list of the set's files, kept in the folder, so the next run knows which files are PadPlan's.</summary>
+    public const string ListName = ".padplan-set";
+
     private readonly List<string> _names = [];
     private bool _done;
 
@@ -16,18 +23,20 @@ public sealed class OutputSet : IDisposable
         Staging = staging;
     }
 
-    /// <summary>The folder the set goes into.</summary>
+    /// <summary>The folder the set goes into (a symbolic link followed).</summary>
     public string Dir { get; }
     /// <summary>The temporary folder the files are written into first.</summary>
     public string Staging { get; }
 
-    /// <summary>Starts a set for <paramref name="dir"/>, first removing temporary files and folders left beside it by runs that were killed.</summary>
+    /// <summary>Starts a set for <paramref name="dir"/>: an old set left aside by a killed run is put back, leftovers of killed runs removed, and a folder with files PadPlan did not write refused before any work.</summary>
     public static OutputSet Begin(string dir)
     {
-        var full = Path.TrimEndingDirectorySeparator(Path.GetFullPath(dir));
+        var full = Path.TrimEndingDirectorySeparator(AtomicFile.RealPath(Path.TrimEndingDirectorySeparator(Path.GetFullPath(dir))));
         var parent = Path.GetDirectoryName(full) ?? ".";
+        RestoreAside(parent, full);
         AtomicFile.RemoveStaleTemps(parent);
-        AtomicFile.RemoveStaleTemps(full);
+        if (File.Exists(full)) throw new InputException(full, "this is a file, not a folder; give a folder for the output files (it is created if missing).");
+        EnsureOurs(full);
         var staging = Path.Combine(parent, $".{Path.GetFileName(full)}.{Environment.ProcessId}.{Guid.NewGuid():N}.tmp");
         try
         {
@@ -46,9 +55,12 @@ public sealed class OutputSet : IDisposable
         if (name != Path.GetFileName(name) || name.StartsWith('.')) throw new ArgumentException($"'{name}' is not a plain file name.", nameof(name));
         try
         {
-            using var stream = new FileStream(Path.Combine(Staging, name), FileMode.CreateNew, FileAccess.Write, FileShare.None);
-            stream.Write(bytes);
-            stream.Flush(flushToDisk: true);
+            using (var stream = new FileStream(Path.Combine(Staging, name), FileMode.CreateNew, FileAccess.Write, FileShare.None))
+            {
+                stream.Write(bytes);
+                stream.Flush(flushToDisk: true);
+            }
+            FaultPoint.Step("set.file-written");
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
@@ -60,20 +72,33 @@ public sealed class OutputSet : IDisposable
 
     public string AddText(string name, string text) => Add(name, new System.Text.UTF8Encoding(false).GetBytes(text));
 
-    /// <summary>Moves every file into place, after checking that each target can be replaced; returns the final paths in the order added.</summary>
+    /// <summary>Puts the new folder in place of the old one (see the class summary); returns the final paths in the order added.</summary>
     public IReadOnlyList<string> Commit()
     {
-        Directory.CreateDirectory(Dir);
-        var targets = _names.Select(n => Path.Combine(Dir, n)).ToList();
-        foreach (var target in targets)
+        var parent = Path.GetDirectoryName(Dir) ?? ".";
+        var aside = Path.Combine(parent, $".{Path.GetFileName(Dir)}.{Environment.ProcessId}.{Guid.NewGuid():N}.old");
+        try
         {
-            if (Directory.Exists(target)) throw new InputException(target, "a folder has the name of an output file; rename or remove it. The old files are unchanged.");
-            AtomicFile.EnsureReplaceable(target);
+            File.WriteAllLines(Path.Combine(Staging, ListName), _names);
+            FaultPoint.Step("set.staged");
+            EnsureOurs(Dir); // again: a file may have appeared while the set was drawn
+            var hadOld = Directory.Exists(Dir);
+            if (hadOld)
+            {
+                Directory.Move(Dir, aside);
+                FaultPoint.Step("set.old-aside");
+            }
+            Directory.Move(Staging, Dir);
+            _done = true;
+            FaultPoint.Step("set.new-in-place");
+            if (hadOld) TryDeleteFolder(aside);
         }
-        for (var i = 0; i < _names.Count; i++) File.Move(Path.Combine(Staging, _names[i]), targets[i], overwrite: true);
-        _done = true;
-        Directory.Delete(Staging, recursive: true);
-        return targets;
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            if (!Directory.Exists(Dir) && Directory.Exists(aside)) Directory.Move(aside, Dir);
+            throw new InputException(Dir, $"cannot replace the folder ({e.Message.Replace(Staging, Dir, StringComparison.Ordinal).Replace(aside, Dir, StringComparison.Ordinal)}); the old files are unchanged.");
+        }
+        return _names.Select(n => Path.Combine(Dir, n)).ToList();
     }
 
     /// <summary>Removes the temporary folder if the set was not committed (the old files stay).</summary>
@@ -81,13 +106,56 @@ public sealed class OutputSet : IDisposable
     {
         if (_done) return;
         _done = true;
+        TryDeleteFolder(Staging);
+    }
+
+    /// <summary>Refuses a folder that holds anything PadPlan did not write there, or a file of an old set the user made read-only.</summary>
+    private static void EnsureOurs(string dir)
+    {
+        if (!Directory.Exists(dir)) return;
+        var listed = ListOf(dir);
+        var foreign = Directory.EnumerateFileSystemEntries(dir).Select(Path.GetFileName)
+            .Where(n => n != ListName && !listed.Contains(n!)).Order(StringComparer.Ordinal).ToList();
+        if (foreign.Count > 0)
+            throw new InputException(dir,
+                $"the folder holds {foreign.Count} file{(foreign.Count == 1 ? "" : "s")} PadPlan did not write ({string.Join(", ", foreign.Take(3).Select(n => $"\"{Shorten(n!)}\""))}{(foreign.Count > 3 ? ", ..." : "")}); " +
+                "PadPlan replaces its output folder as a whole, so it writes only into a new or empty folder, or one it wrote before. Give another folder, or move those files out. Nothing was changed.");
+        foreach (var name in listed)
+            AtomicFile.EnsureReplaceable(Path.Combine(dir, name));
+    }
+
+    private static HashSet<string> ListOf(string dir)
+    {
+        var list = Path.Combine(dir, ListName);
+        if (!File.Exists(list)) return new HashSet<string>(StringComparer.Ordinal);
+        var bytes = InputFile.ReadAllBytes(list, 1024 * 1024, "list of PadPlan's output files");
+        return new System.Text.UTF8Encoding(false).GetString(bytes).Split('\n', StringSplitOptions.RemoveEmptyEntries)
+            .Where(n => n == Path.GetFileName(n) && !n.StartsWith('.')).ToHashSet(StringComparer.Ordinal);
+    }
+
+    // A folder set aside by a run that was killed before the new one took its place goes back, if nothing took its place since.
+    private static void RestoreAside(string parent, string full)
+    {
+        if (!Directory.Exists(parent)) return;
+        foreach (var aside in Directory.EnumerateDirectories(parent, $".{Path.GetFileName(full)}.*.old").Order(StringComparer.Ordinal).ToList())
+        {
+            if (!AtomicFile.IsLeftover(aside)) continue;
+            if (!Directory.Exists(full)) Directory.Move(aside, full);
+            else TryDeleteFolder(aside);
+        }
+    }
+
+    private static string Shorten(string name) => name.Length <= 40 ? name : name[..39] + "…";
+
+    private static void TryDeleteFolder(string path)
+    {
         try
         {
-            if (Directory.Exists(Staging)) Directory.Delete(Staging, recursive: true);
+            if (Directory.Exists(path)) Directory.Delete(path, recursive: true);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            // left for RemoveStaleTemps on the next run
+            // left for the next run to remove
         }
     }
 }

@@ -12,14 +12,12 @@ public sealed class WriterLock : IDisposable
 {
     public const string Suffix = ".lock";
 
-    private readonly FileStream _stream;
     private bool _released;
 
-    private WriterLock(string file, string lockPath, FileStream stream)
+    private WriterLock(string file, string lockPath)
     {
         File = file;
         LockPath = lockPath;
-        _stream = stream;
     }
 
     /// <summary>The file this lock guards.</summary>
@@ -27,17 +25,18 @@ public sealed class WriterLock : IDisposable
     public string LockPath { get; }
 
     /// <summary>Takes the lock for <paramref name="file"/>, or throws an <see cref="InputException"/> naming the process that holds it.</summary>
+    /// <remarks>A symbolic link is followed: the lock sits beside the real file, so two paths to one file share it.</remarks>
     public static WriterLock Take(string file)
     {
-        var full = Path.GetFullPath(file);
+        var full = AtomicFile.RealPath(file);
         var lockPath = full + Suffix;
         for (var attempt = 0; attempt < 5; attempt++)
         {
-            if (TryCreate(lockPath) is { } stream) return new WriterLock(full, lockPath, stream);
+            if (TryCreate(lockPath)) return new WriterLock(full, lockPath);
             var owner = Owner.Read(lockPath);
             if (owner is null)
             {
-                Thread.Sleep(20); // released between our two looks, or being written this instant: look again
+                Thread.Sleep(20); // released between our two looks: look again
                 continue;
             }
             if (owner.Value.IsRunning())
@@ -51,35 +50,38 @@ public sealed class WriterLock : IDisposable
     {
         if (_released) return;
         _released = true;
-        try
-        {
-            if (Owner.Read(LockPath) is { } owner && owner == Owner.Current) System.IO.File.Delete(LockPath);
-        }
-        finally
-        {
-            _stream.Dispose();
-        }
+        if (Owner.Read(LockPath) is { } owner && owner == Owner.Current) System.IO.File.Delete(LockPath);
     }
 
-    private static FileStream? TryCreate(string lockPath)
+    // The lock appears whole or not at all: the owner is written to a temporary file, which is then linked to the lock's
+    // name only if no lock is there (File.Move without overwrite). So a lock file is never empty while its owner lives,
+    // and an empty one (a full disk, an older PadPlan) is stale at once.
+    private static bool TryCreate(string lockPath)
     {
-        FileStream stream;
+        var dir = Path.GetDirectoryName(lockPath) ?? ".";
+        var temp = Path.Combine(dir, $".{Path.GetFileName(lockPath)}.{Environment.ProcessId}.{Guid.NewGuid():N}.tmp");
         try
         {
-            stream = new FileStream(lockPath, FileMode.CreateNew, FileAccess.Write, FileShare.Read | FileShare.Delete);
+            using (var stream = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None))
+            {
+                stream.Write(System.Text.Encoding.ASCII.GetBytes(Owner.Current.ToText()));
+                stream.Flush(flushToDisk: true);
+            }
+            System.IO.File.Move(temp, lockPath, overwrite: false);
+            return true;
         }
         catch (IOException) when (System.IO.File.Exists(lockPath))
         {
-            return null;
+            return false;
         }
-        catch (UnauthorizedAccessException e)
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            throw new InputException(Path.GetFileName(lockPath), $"cannot create the lock file beside the project: {e.Message}");
+            throw new InputException(Path.GetFileName(lockPath), $"cannot create the lock file beside the project ({e.Message.Replace(temp, lockPath, StringComparison.Ordinal)}); nothing was written.");
         }
-        var text = Owner.Current.ToText();
-        stream.Write(System.Text.Encoding.ASCII.GetBytes(text));
-        stream.Flush(flushToDisk: true);
-        return stream;
+        finally
+        {
+            try { System.IO.File.Delete(temp); } catch (Exception e) when (e is IOException or UnauthorizedAccessException) { /* cleaned by RemoveStaleTemps */ }
+        }
     }
 
     // Move the stale lock aside under a name of our own, and delete it only if it is still the one we judged stale:
@@ -121,9 +123,7 @@ public sealed class WriterLock : IDisposable
                 return null;
             }
             if (lines.Length < 2 || !int.TryParse(lines[0], CultureInfo.InvariantCulture, out var pid) || !long.TryParse(lines[1], CultureInfo.InvariantCulture, out var start))
-                return lines.Length == 0 && DateTime.UtcNow - System.IO.File.GetLastWriteTimeUtc(path) < TimeSpan.FromSeconds(2)
-                    ? null // just created, owner not written yet
-                    : new Owner(0, 0); // no owner we can find: stale
+                return new Owner(0, 0); // a lock appears with its owner written (TryCreate), so one without is stale
             return new Owner(pid, start);
         }
 

@@ -5,7 +5,7 @@ namespace PadPlan.Import;
 /// <summary>What the project builder decides on the way, gathered for the import record: the lead each netlist pin went to, and the summary lines about subcircuit calls and assumptions.</summary>
 internal sealed class ImportLedger
 {
-    private static readonly string[] TopicOrder = ["source", "subcircuit", "assumed", "left off"];
+    private static readonly string[] TopicOrder = ["source", "subcircuit", "rf", "assumed", "left off"];
     private readonly Dictionary<(string Ref, string Pin), (string Part, string Lead)> _leads = new(PinComparer.Instance);
     private readonly List<ImportSummaryLine> _summary = [];
 
@@ -16,6 +16,17 @@ internal sealed class ImportLedger
     public string? Pinout { get; set; }
 
     public void Assumed(string reference, string what) => _summary.Add(new ImportSummaryLine("assumed", reference, what));
+
+    /// <summary>The RF nets a parts map adds to those the deck gave, or one line saying that none is marked and the RF checks are off.</summary>
+    public void RfNets(Netlist netlist, IEnumerable<Net> nets)
+    {
+        var named = (netlist.Summary ?? ValueList<ImportSummaryLine>.Empty).Where(l => l.Topic == "rf").Select(l => l.Item).ToHashSet(StringComparer.OrdinalIgnoreCase);
+        var rf = nets.Where(n => n.Class == NetClass.Rf).ToList();
+        foreach (var net in rf.Where(n => !named.Contains(NetlistText.Echo(n.Name))))
+            _summary.Add(new ImportSummaryLine("rf", NetlistText.Echo(net.Name), "class rf in the parts map"));
+        if (rf.Count == 0)
+            _summary.Add(new ImportSummaryLine("rf", "none", "no net is marked RF, so the RF checks (short leads, parasitic estimates) are off; mark nets with a *padplan rf NET line or \"class\": \"rf\" in a parts map"));
+    }
 
     public void Mapped(NetlistPart part, string partRef, PinMapper.Result mapped, string footprint, bool fromMap, bool assumed)
     {
@@ -35,7 +46,7 @@ internal sealed class ImportLedger
         var summary = (netlist.Summary ?? ValueList<ImportSummaryLine>.Empty).Concat(_summary)
             .OrderBy(l => Array.IndexOf(TopicOrder, l.Topic)).ToValueList();
         var elements = (netlist.Elements ?? ValueList<SpiceElement>.Empty).Select(OnLeads).ToValueList();
-        return new ImportRecord(summary, elements, netlist.DeckLines ?? ValueList<string>.Empty);
+        return new ImportRecord(summary, elements, netlist.DeckLines ?? ValueList<PadPlan.Model.Spice.CarriedLine>.Empty);
     }
 
     private SpiceElement OnLeads(SpiceElement element)

@@ -16,5 +16,5 @@ public sealed record Netlist(
     (double Width, double Height)? BoardSize = null,
     ValueList<string>? FootprintDirs = null,
     ValueList<SpiceElement>? Elements = null,
-    ValueList<string>? DeckLines = null,
+    ValueList<PadPlan.Model.Spice.CarriedLine>? DeckLines = null,
     ValueList<ImportSummaryLine>? Summary = null);

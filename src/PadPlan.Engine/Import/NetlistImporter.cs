@@ -1,4 +1,5 @@
 using PadPlan.IO;
+using PadPlan.ProjectFiles.Limits;
 
 namespace PadPlan.Import;
 
@@ -7,30 +8,23 @@ public static class NetlistImporter
 {
     public enum Format { Ppn, Spice }
 
-    public static ImportResult ImportFile(string path, ImportOptions options)
-    {
-        byte[] bytes;
-        try
-        {
-            bytes = File.ReadAllBytes(path);
-        }
-        catch (FileNotFoundException)
-        {
-            throw new InputException(path, "no such netlist file.");
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new InputException(path, $"cannot read the netlist: {e.Message}");
-        }
-        return Import(bytes, path, options);
-    }
+    public static ImportResult ImportFile(string path, ImportOptions options) => Import(ReadFile(path), path, options);
+
+    /// <summary>The bytes of a netlist file: a regular file of at most <see cref="InputLimits.MaxNetlistBytes"/>.</summary>
+    public static byte[] ReadFile(string path) => InputFile.ReadAllBytes(path, InputLimits.MaxNetlistBytes, "netlist file");
 
     public static ImportResult Import(byte[] bytes, string file, ImportOptions options) => ProjectBuilder.Build(Read(bytes, file), options);
 
+    /// <summary>The netlist's circuit, refused (exit 2) when it is over a limit of docs/limits.md: bytes and line length first, then element lines counted before any is parsed, then parts.</summary>
     public static Netlist Read(byte[] bytes, string file)
     {
+        if (bytes.Length > InputLimits.MaxNetlistBytes)
+            throw new InputException(file, $"the netlist file is larger than {InputLimits.MaxNetlistBytes / (1024 * 1024)} MB, the most PadPlan reads (see docs/limits.md).");
         var lines = NetlistText.Lines(bytes, file);
-        return Detect(lines, file) == Format.Ppn ? PpnReader.Read(lines, file) : SpiceReader.Read(lines, file);
+        NetlistLimits.CheckLines(lines, file);
+        var netlist = Detect(lines, file) == Format.Ppn ? PpnReader.Read(lines, file) : SpiceReader.Read(lines, file);
+        NetlistLimits.CheckParts(netlist.Parts.Count, file);
+        return netlist;
     }
 
     // name=value words that SPICE element lines carry (m=, ic=, tc1=, l=, w=...): not the own format's PIN=NET.

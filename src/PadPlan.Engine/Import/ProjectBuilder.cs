@@ -40,6 +40,7 @@ public static class ProjectBuilder
         }
 
         var nets = Nets(parts, estimated, netlist, notes);
+        if (netlist.Elements is not null) ledger.RfNets(netlist, nets);
         var size = options.BoardSize ?? netlist.BoardSize;
         var project = new Project(
             ProjectName(file),
@@ -72,11 +73,11 @@ public static class ProjectBuilder
                 throw new InputException(file, $"duplicate reference {p.Ref}: it is already used on line {seen[p.Ref]}. Every part needs its own reference.", p.Line);
     }
 
-    /// <summary>A part named like a pad or a wire strap would share its id with one in the build steps and the check report.</summary>
+    /// <summary>A part named like a pad or a jumper would share its id with one in the build steps and the check report.</summary>
     private static void RefuseGeneratedForm(string reference, string file, int line)
     {
         if (GeneratedIds.ClashOf(reference) is not { } prefix) return;
-        var what = prefix == GeneratedIds.StrapPrefix ? $"wire straps ({GeneratedIds.Strap(1)}, {GeneratedIds.Strap(2)}...)" : $"pads ({GeneratedIds.Pad(1)}, {GeneratedIds.Pad(2)}...)";
+        var what = prefix == GeneratedIds.JumperPrefix ? $"jumpers ({GeneratedIds.Jumper(1)}, {GeneratedIds.Jumper(2)}...)" : $"pads ({GeneratedIds.Pad(1)}, {GeneratedIds.Pad(2)}...)";
         throw new InputException(file, $"part reference {reference} has the form PadPlan gives {what}, so the build steps would name two things {reference}. Rename the part (e.g. {reference}A or J{reference[prefix.Length..]}).", line);
     }
 

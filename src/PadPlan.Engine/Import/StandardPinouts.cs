@@ -33,15 +33,26 @@ public static class StandardPinouts
         var numbers = names.Select(n => int.TryParse(n, NumberStyles.None, CultureInfo.InvariantCulture, out var k) ? k : 0).ToList();
         if (numbers.Any(k => k is < 1 or > 14) || numbers.Distinct().Count() != numbers.Count) return null;
         if (numbers.SequenceEqual(Enumerable.Range(1, numbers.Count))) return null; // leads in call order: nothing to learn
-        var footprint = numbers.Max() <= 8 ? "dip-8" : "dip-14";
         var leads = names.ToDictionary(n => n, n => n, StringComparer.OrdinalIgnoreCase);
         var set = numbers.ToHashSet();
-        var (name, what) = footprint == "dip-8" && set.IsSupersetOf([2, 3, 4, 6, 7]) && set.Count <= 7
-            ? ("single op-amp pinout", "the usual single op-amp pinout (2 -in, 3 +in, 4 V-, 6 out, 7 V+)")
-            : footprint == "dip-8" && set.Count == 8
-            ? ("dual op-amp pinout", "the usual dual op-amp pinout (1 out A, 2 -in A, 3 +in A, 4 V-, 5 +in B, 6 -in B, 7 out B, 8 V+)")
-            : ("ports as lead numbers", "each port on the lead its number names");
+        // Numbers are lead numbers only when they fit a standard pinout; otherwise they are the model's own node numbers
+        // (a shunt reference "7 6 11"), and the call goes on a generic footprint in call order.
+        var (name, footprint, what) = numbers.Max() <= 8 && set.IsSupersetOf([2, 3, 4, 6, 7]) && set.Count <= 7
+            ? ("single op-amp pinout", "dip-8", "the usual single op-amp pinout (2 -in, 3 +in, 4 V-, 6 out, 7 V+)")
+            : set.SetEquals(Enumerable.Range(1, 8))
+            ? ("dual op-amp pinout", "dip-8", "the usual dual op-amp pinout (1 out A, 2 -in A, 3 +in A, 4 V-, 5 +in B, 6 -in B, 7 out B, 8 V+)")
+            : set.Count >= 5 && set.IsSupersetOf([4, 11]) && QuadSection(set)
+            ? ("quad op-amp pinout", "dip-14", "the usual quad op-amp pinout (4 V+, 11 V-, sections on 1-3, 5-7, 8-10, 12-14)")
+            : default;
+        if (name is null) return null;
         return new Pinout(name, footprint, leads, $"its ports are named by lead numbers ({string.Join(" ", names)}), so it is put on {footprint} with {what}.");
+    }
+
+    // Every lead other than the supplies belongs to a section whose three leads (out, -in, +in) are all there.
+    private static bool QuadSection(HashSet<int> set)
+    {
+        int[][] sections = [[1, 2, 3], [5, 6, 7], [8, 9, 10], [12, 13, 14]];
+        return set.All(k => k is 4 or 11 || sections.Any(s => s.Contains(k) && s.All(set.Contains)));
     }
 
     private static Pinout? ByRoles(List<string> names)

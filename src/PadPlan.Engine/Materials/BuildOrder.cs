@@ -29,11 +29,11 @@ public static class BuildOrder
         {
             var fresh = pads.Where(p => glued.Add(p.Id)).DistinctBy(p => p.Id).OrderBy(p => p.Id, NaturalOrder.Comparer).ToList();
             if (fresh.Count > 0)
-                Add("Glue pads", string.Join(", ", fresh.Select(p => p.Id).Order(NaturalOrder.Comparer)), "nets " + string.Join(", ", fresh.SelectMany(NetsOf).Distinct()), "copper up; see the placement sheet");
+                Add("Glue pads", string.Join(", ", fresh.Select(p => p.Id).Order(NaturalOrder.Comparer)), "nets " + string.Join(", ", fresh.SelectMany(NetsOf).Distinct()), "copper up, each centred on its mark on the pad template");
             foreach (var j in layout.Jumpers.Where(j => !linked.Contains(j.Id) && IsDown(j.From) && IsDown(j.To)).OrderBy(j => j.Id, NaturalOrder.Comparer))
             {
                 linked.Add(j.Id);
-                Add("Fit wire link", j.Id, $"{j.From} to {j.To}", "insulated if it crosses other copper");
+                Add("Fit jumper", j.Id, $"{j.From} to {j.To}", "insulated if it crosses other copper");
             }
         }
         bool IsDown(string islandId) => padOfIsland.TryGetValue(islandId, out var pad) && glued.Contains(pad.Id);

@@ -73,7 +73,7 @@ public static class TestPlan
     private static string LinkText(Layout layout, string a, string b)
     {
         var link = layout.Jumpers.FirstOrDefault(j => (j.From == a && j.To == b) || (j.From == b && j.To == a));
-        return link is not null ? $"through wire link {link.Id}" : "through the wire links between them";
+        return link is not null ? $"through jumper {link.Id}" : "through the jumpers between them";
     }
 
     private static bool SameStrip(Layout layout, string a, string b) =>

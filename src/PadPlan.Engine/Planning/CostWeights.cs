@@ -8,6 +8,8 @@ internal sealed record CostWeights
     public double LongLead { get; init; } = 10.0;
     /// <summary>RF leads count this many times over: each mm adds about 1 nH (DOMAIN 2).</summary>
     public double RfFactor { get; init; } = 3.0;
+    /// <summary>Each RF net's longest lead costs this much more per mm, on top of its weighted length: the longest lead sets the worst stray inductance of the net (common practice, no source).</summary>
+    public double RfLongestLead { get; init; } = 2.0;
     public double Jumper { get; init; } = 1.5;
     public double GroundLead { get; init; } = 1.0;
     /// <summary>Pull of every item toward the middle of the region: keeps the used area small.</summary>

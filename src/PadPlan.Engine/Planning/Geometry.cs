@@ -82,4 +82,29 @@ internal static class Geometry
     /// <summary>How far a box sticks out of a region, summed over its sides.</summary>
     public static double OutsideRegion(double minX, double minY, double maxX, double maxY, in Region r) =>
         Math.Max(0, r.MinX - minX) + Math.Max(0, r.MinY - minY) + Math.Max(0, maxX - r.MaxX) + Math.Max(0, maxY - r.MaxY);
+
+    /// <summary>Shortest distance between segments a0-a1 and b0-b1 (zero when they cross); any value at or above <paramref name="enough"/> when their boxes lie that far apart.</summary>
+    public static double SegmentGap(double a0x, double a0y, double a1x, double a1y, double b0x, double b0y, double b1x, double b1y, double enough)
+    {
+        if (Math.Min(a0x, a1x) > Math.Max(b0x, b1x) + enough || Math.Min(b0x, b1x) > Math.Max(a0x, a1x) + enough
+            || Math.Min(a0y, a1y) > Math.Max(b0y, b1y) + enough || Math.Min(b0y, b1y) > Math.Max(a0y, a1y) + enough) return enough;
+        var s1 = Side(b0x, b0y, b1x, b1y, a0x, a0y);
+        var s2 = Side(b0x, b0y, b1x, b1y, a1x, a1y);
+        var s3 = Side(a0x, a0y, a1x, a1y, b0x, b0y);
+        var s4 = Side(a0x, a0y, a1x, a1y, b1x, b1y);
+        if (s1 * s2 < 0 && s3 * s4 < 0) return 0;
+        return Math.Min(Math.Min(PointToSegment(a0x, a0y, b0x, b0y, b1x, b1y), PointToSegment(a1x, a1y, b0x, b0y, b1x, b1y)),
+            Math.Min(PointToSegment(b0x, b0y, a0x, a0y, a1x, a1y), PointToSegment(b1x, b1y, a0x, a0y, a1x, a1y)));
+    }
+
+    private static double Side(double ax, double ay, double bx, double by, double px, double py) => (bx - ax) * (py - ay) - (by - ay) * (px - ax);
+
+    private static double PointToSegment(double px, double py, double ax, double ay, double bx, double by)
+    {
+        var (dx, dy) = (bx - ax, by - ay);
+        var len2 = dx * dx + dy * dy;
+        var t = len2 < 1e-18 ? 0 : Math.Clamp(((px - ax) * dx + (py - ay) * dy) / len2, 0, 1);
+        var (cx, cy) = (ax + dx * t - px, ay + dy * t - py);
+        return Math.Sqrt(cx * cx + cy * cy);
+    }
 }

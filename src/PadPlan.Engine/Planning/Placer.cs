@@ -62,18 +62,24 @@ public static class Placer
     }
 
     /// <summary>
-    /// The best of several independent runs: legal first, then lowest cost, then lowest run number. Runs go in fixed batches and
-    /// stop early once the two best legal ones agree on the cost; seeds and batches are fixed per run, so threads never change the answer.
+    /// The best of several runs: legal first, then lowest cost, then lowest run number. Independent runs go first, in fixed batches;
+    /// on a circuit of more than <see cref="PlacerSettings.SteadyCircuit"/> parts they stop early once the two best legal ones
+    /// agree on the cost. Then, when the best is legal, refining runs anneal the best layout so far again, a batch at a time.
+    /// Seeds and batches are fixed per run, so threads never change the answer.
     /// </summary>
     internal static RunOutcome RunAll(PlacementProblem problem, PlacerSettings settings, IProgress<PlacerProgress>? progress)
     {
-        var runs = settings.RunsFor(problem.Project.Parts.Count);
-        var results = new RunOutcome?[runs];
+        var parts = problem.Project.Parts.Count;
+        var independent = settings.IndependentRunsFor(parts);
+        var refines = settings.RefinesFor(parts);
+        var results = new RunOutcome?[independent + refines];
+        RunOutcome? best = null;
         void One(int k)
         {
             var state = new AnnealState(problem);
             var annealer = new Annealer(state, settings.Seed * 7919L + k);
-            annealer.Start(settings.Start, k);
+            if (k < independent) annealer.Start(settings.Start, k);
+            else annealer.Resume(best!.State);
             annealer.Run(settings.MovesFactor, (step, cost, violation) => progress?.Report(new PlacerProgress(k + 1, "annealing", step, cost, violation)));
             var legal = Legaliser.Finish(state);
             if (legal)
@@ -86,22 +92,29 @@ public static class Placer
             progress?.Report(new PlacerProgress(k + 1, legal ? "legal" : "not legal", 0, state.Cost, state.Violation));
             results[k] = new RunOutcome(state, legal, annealer.Stats.TotalTried) { Stats = annealer.Stats };
         }
-        var done = 0;
-        while (done < runs)
+        void Batches(int from, int to, Func<bool> enough)
         {
-            var batch = Math.Min(PlacerLimits.RunBatch, runs - done);
-            var first = done;
-            if (settings.AllowThreads && batch > 1)
-                Parallel.For(first, first + batch, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, One);
-            else
-                for (var k = first; k < first + batch; k++) One(k);
-            done += batch;
-            if (Agree(results.Take(done))) break;
+            for (var first = from; first < to; first += PlacerLimits.RunBatch)
+            {
+                var last = Math.Min(first + PlacerLimits.RunBatch, to);
+                if (settings.AllowThreads && last - first > 1)
+                    Parallel.For(first, last, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, One);
+                else
+                    for (var k = first; k < last; k++) One(k);
+                best = Best(results);
+                if (enough()) return;
+            }
         }
-        var finished = results.Take(done).Select(r => r!).ToArray();
-        var best = finished.Select((r, k) => (r, k)).OrderBy(x => x.r.Legal ? 0 : 1).ThenBy(x => x.r.Legal ? 0 : x.r.State.Violation).ThenBy(x => x.r.State.Cost).ThenBy(x => x.k).First().r;
-        return best with { Moves = finished.Sum(r => r.Moves), Runs = done };
+        Batches(0, independent, () => refines == 0 && Agree(results));
+        if (best!.Legal) Batches(independent, independent + refines, () => false);
+        var finished = results.Where(r => r is not null).Select(r => r!).ToArray();
+        return best! with { Moves = finished.Sum(r => r.Moves), Runs = finished.Length };
     }
+
+    /// <summary>Legal first, then least broken, then lowest cost, then lowest run number.</summary>
+    private static RunOutcome Best(IEnumerable<RunOutcome?> results) =>
+        results.Select((r, k) => (r, k)).Where(x => x.r is not null)
+            .OrderBy(x => x.r!.Legal ? 0 : 1).ThenBy(x => x.r!.Legal ? 0 : x.r!.State.Violation).ThenBy(x => x.r!.State.Cost).ThenBy(x => x.k).First().r!;
 
     /// <summary>The two cheapest legal runs are within <see cref="PlacerLimits.RunsAgree"/> of each other: more seeds would find little more.</summary>
     private static bool Agree(IEnumerable<RunOutcome?> runs)

@@ -19,8 +19,16 @@ internal static class PlacerLimits
     public static readonly double[] GroundTurns = [0, 45, -45, 90, -90, 135, -135, 180];
     /// <summary>VPR target acceptance rate for the move-range limiter (Betz and Rose, 1997).</summary>
     public const double TargetAcceptance = 0.44;
-    /// <summary>Cooling factor while 15-80 % of moves are kept; VPR uses 0.95, 0.9 halved the moves for the same cost within seed-to-seed noise in our measurements.</summary>
+    /// <summary>Cooling factor while 15-80 % of moves are kept; VPR uses 0.95, 0.9 halved the moves for the same cost within seed-to-seed noise in our measurements at 500 and 1,000 parts.</summary>
     public const double MiddleCooling = 0.9;
+    /// <summary>
+    /// VPR's cooling factor in that band, used on circuits of up to <see cref="PlacerSettings.SteadyCircuit"/> parts, where runs are
+    /// cheap: on the crystal oscillator, 12 single runs from the spring start ended at a median cost of 210 (173-276) against 229
+    /// (200-263) at 0.9, for twice the moves (2026-12-04, docs/benchmarks.md).
+    /// </summary>
+    public const double SteadyCooling = 0.95;
+    /// <summary>Runs that anneal the best layout of the independent runs again (cool, close by, a new seed each), two at a time; the best of all is kept.</summary>
+    public const int RefineRuns = 4;
     /// <summary>VPR initial temperature: this many standard deviations of the cost change of random moves.</summary>
     public const double StartTemperatureSigmas = 20;
     /// <summary>VPR stopping rule: temperature below this fraction of the mean cost per net.</summary>

@@ -15,8 +15,17 @@ public sealed record PlacerSettings(int Seed = 1, Effort Effort = Effort.Normal,
     /// <summary>Circuits up to this many parts get twice the runs: each run is cheap, and the best of more seeds is markedly better.</summary>
     public const int SmallCircuit = 30;
 
-    /// <summary>Independent runs (seeds Seed, Seed+1, ...) whose best result is kept; fixed by effort and circuit size, so the result never depends on the machine.</summary>
-    public int RunsFor(int parts) => (Effort == Effort.Thorough ? 4 : 2) * (parts <= SmallCircuit ? 2 : 1);
+    /// <summary>Circuits up to this many parts are placed for steadiness: slower cooling, every independent run made, then runs that anneal the best layout again (docs/placement.md, section 4).</summary>
+    public const int SteadyCircuit = 100;
+
+    /// <summary>All runs of a placement: the independent ones and those that start again from the best layout. Fixed by effort and circuit size, so the result never depends on the machine.</summary>
+    public int RunsFor(int parts) => IndependentRunsFor(parts) + RefinesFor(parts);
+
+    /// <summary>Independent runs (seed x 7919 + k) whose best result is kept.</summary>
+    public int IndependentRunsFor(int parts) => (Effort == Effort.Thorough ? 4 : 2) * (parts <= SmallCircuit ? 2 : 1);
+
+    /// <summary>Runs that start again from the best layout so far (none at quick effort or above <see cref="SteadyCircuit"/> parts).</summary>
+    public int RefinesFor(int parts) => Effort == Effort.Quick || parts > SteadyCircuit ? 0 : PlacerLimits.RefineRuns;
 
     /// <summary>Scale of moves per temperature relative to the VPR default of N^(4/3).</summary>
     public double MovesFactor => Effort switch

@@ -14,6 +14,6 @@ internal static partial class DtoWriter
             Nodes = e.Nodes.Count == 0 ? null : [.. e.Nodes.Select(n => new SpiceNodeDto { Pin = n.Pin, Net = n.Net })],
             Tail = e.Tail,
         })],
-        DeckLines = r.DeckLines.Count == 0 ? null : [.. r.DeckLines],
+        DeckLines = r.DeckLines.Count == 0 ? null : [.. r.DeckLines.Select(l => l.Text)],
     };
 }

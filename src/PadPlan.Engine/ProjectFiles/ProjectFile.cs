@@ -23,14 +23,14 @@ public static class ProjectFile
     public static Project Parse(byte[] bytes, string fileName)
     {
         bytes = TextEncodingCheck.Utf8(bytes, fileName);
-        var dto = JsonInput.Deserialize(bytes, ProjectJsonContext.Default.ProjectDto, InputLimits.Project, fileName, "a project");
+        var dto = JsonInput.Deserialize(bytes, ProjectJsonContext.Default.ProjectDto, InputLimits.Project, fileName, "a project", d => d.Format);
         var reader = new DtoReader(fileName, bytes);
         if (dto.Format is null)
             throw reader.Fail("$.format", $"missing \"format\": a PadPlan project file starts with \"format\": \"{FormatTag}\".");
         if (dto.Format != FormatTag)
             throw reader.Fail("$.format", dto.Format.StartsWith(FormatPrefix, StringComparison.Ordinal)
-                ? $"this file is format \"{dto.Format}\"; this PadPlan reads \"{FormatTag}\". Use a PadPlan version that knows that format."
-                : $"\"{dto.Format}\" is not a PadPlan project format; expected \"{FormatTag}\".");
+                ? $"this file is format {JsonInput.Describe(dto.Format)}; this PadPlan reads \"{FormatTag}\". Use a PadPlan version that knows that format."
+                : $"this file has {JsonInput.Describe(dto.Format)}, not a PadPlan project format; expected \"{FormatTag}\".");
         var project = new Project(
             reader.Need(dto.Name, "$.name", "project name"),
             reader.Board(dto.Board, "$.board"),
@@ -68,6 +68,32 @@ public static class ProjectFile
         return claim;
     }
 
-    /// <summary>Writes a project atomically: the old file stays whole until the new one is complete.</summary>
-    public static void Write(Project project, string path) => AtomicFile.WriteAllBytes(path, ToBytes(project));
+    /// <summary>
+    /// Writes a project atomically (the old file stays whole until the new one is complete), after checking that it reads
+    /// back: the one place every project write goes through (import, place, swap, the editor's save).
+    /// </summary>
+    public static void Write(Project project, string path) => AtomicFile.WriteAllBytes(path, ToCheckedBytes(project, path));
+
+    /// <summary>
+    /// The bytes of <paramref name="project"/>, checked exactly as <see cref="Read"/> checks a file (every limit of
+    /// docs/limits.md, every name referring to something that exists). Anything out of range throws an
+    /// <see cref="InputException"/> (exit 2) naming the JSON path and the limit, so no command writes a file that PadPlan
+    /// would then refuse. Call it before writing a project by any other route.
+    /// </summary>
+    public static byte[] ToCheckedBytes(Project project, string path)
+    {
+        var bytes = ToBytes(project);
+        try
+        {
+            Parse(bytes, path);
+        }
+        catch (InputException e)
+        {
+            throw new InputException(path,
+                $"the project to be written would be refused when read back, so nothing was written: {e.Message} " +
+                "Bring that value within its limit (in the netlist, parts map or options) and run again.",
+                jsonPath: e.JsonPath, inner: e);
+        }
+        return bytes;
+    }
 }

@@ -21,6 +21,7 @@ public static class Checker
             .Concat(ConnectivityCheck.Run(ctx))
             .Concat(SpacingCheck.Run(ctx))
             .Concat(LeadCheck.Run(ctx))
+            .Concat(LeadCrossingCheck.Run(ctx))
             .Concat(PlacementCheck.Run(ctx))
             .Concat(HeightCheck.Run(ctx))
             .Concat(ElectricalCheck.Run(ctx))));

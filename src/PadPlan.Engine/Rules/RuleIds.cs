@@ -29,6 +29,7 @@ public static class RuleIds
     public const string LeadReach = "lead-reach";
     public const string LeadLength = "lead-length";
     public const string PadCapacity = "pad-capacity";
+    public const string LeadCrossing = "lead-crossing";
 
     // Parts and board
     public const string BodyOverlap = "body-overlap";
@@ -48,7 +49,7 @@ public static class RuleIds
     [
         LayoutMissing, BoardSize, PartUnplaced, LeadUnplaced, SingleConnection,
         Open, Short, LeadWrongPad, LeadOffPad, GroundOnPad, PadShort, JumperShort, JumperEnd, LandingMismatch, PadUnused,
-        PadGap, GroundGap, LeadEdge, LeadReach, LeadLength, PadCapacity,
+        PadGap, GroundGap, LeadEdge, LeadReach, LeadLength, PadCapacity, LeadCrossing,
         BodyOverlap, BodyOverPad, LeadMeetsBody, BoardMargin, Keepout,
         HvSpacing, HvCreepage, HvCaution, StripCurrent,
     ];

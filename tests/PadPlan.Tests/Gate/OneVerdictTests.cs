@@ -76,7 +76,7 @@ public class OneVerdictTests
         // The other row carries no high voltage next to another net, so it keeps the toolkit's 0.6 mm score.
         Assert.Contains(strips, s => s.ScoreWidth == 0.6);
         // The builder is told to cut the wider score.
-        var cuts = CliRunner.Run("cutlist", project);
+        var cuts = CliRunner.Run("cutlist", project, "--wide");
         Assert.Contains($"each {anodeStrip.ScoreWidth.ToString(System.Globalization.CultureInfo.InvariantCulture)} mm wide", cuts.Out);
     }
 

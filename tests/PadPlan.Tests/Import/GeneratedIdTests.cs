@@ -4,7 +4,7 @@ using PadPlan.Model;
 
 namespace PadPlan.Tests.Import;
 
-/// <summary>Ids PadPlan makes up (pads P1..., wire straps ST1...) never clash with a part reference from either netlist format.</summary>
+/// <summary>Ids PadPlan makes up (pads P1..., jumpers ST1...) never clash with a part reference from either netlist format.</summary>
 public class GeneratedIdTests
 {
     private static ImportResult Import(string text, string name) =>
@@ -12,28 +12,28 @@ public class GeneratedIdTests
 
     // SPICE element letters (Berkeley SPICE3 / ngspice manual): S is a voltage-controlled switch, which PadPlan cannot place, so
     // an S line is left off the board with a warning and no SPICE element ever becomes a part whose reference starts with the
-    // strap prefix.
+    // jumper prefix.
     [Fact]
-    public void The_SPICE_element_of_the_strap_prefix_letter_is_left_off_not_made_a_part()
+    public void The_SPICE_element_of_the_jumper_prefix_letter_is_left_off_not_made_a_part()
     {
-        Assert.Equal('S', GeneratedIds.StrapPrefix[0]);
-        var result = Import($"title\n{GeneratedIds.Strap(1)} a b c d SW\nR1 a b 1k\nR2 c d 1k\n.model SW sw\n.end\n", "t.cir");
-        Assert.DoesNotContain(result.Project.Parts, p => p.Ref.StartsWith(GeneratedIds.StrapPrefix, StringComparison.OrdinalIgnoreCase));
-        Assert.Contains(result.Notes, n => n.Message.Contains(GeneratedIds.Strap(1)) && n.Message.Contains("switch"));
-        // The letters that do become parts (R C L D Q J M X, and V I as wire landings W1...) are not the strap prefix's first letter.
-        Assert.DoesNotContain(GeneratedIds.StrapPrefix[0], "RCLDQJMXVIW");
+        Assert.Equal('S', GeneratedIds.JumperPrefix[0]);
+        var result = Import($"title\n{GeneratedIds.Jumper(1)} a b c d SW\nR1 a b 1k\nR2 c d 1k\n.model SW sw\n.end\n", "t.cir");
+        Assert.DoesNotContain(result.Project.Parts, p => p.Ref.StartsWith(GeneratedIds.JumperPrefix, StringComparison.OrdinalIgnoreCase));
+        Assert.Contains(result.Notes, n => n.Message.Contains(GeneratedIds.Jumper(1)) && n.Message.Contains("switch"));
+        // The letters that do become parts (R C L D Q J M X, and V I as wire landings W1...) are not the jumper prefix's first letter.
+        Assert.DoesNotContain(GeneratedIds.JumperPrefix[0], "RCLDQJMXVIW");
     }
 
     [Fact]
-    public void Every_padplan_netlist_reference_prefix_gives_the_strap_prefix_no_meaning()
+    public void Every_padplan_netlist_reference_prefix_gives_the_jumper_prefix_no_meaning()
     {
-        // The reference prefixes the PadPlan netlist knows (docs/netlist-format.md): none is the strap prefix or starts it.
+        // The reference prefixes the PadPlan netlist knows (docs/netlist-format.md): none is the jumper prefix or starts it.
         foreach (var prefix in new[] { "R", "VR", "RV", "C", "VC", "CV", "TC", "L", "T", "D", "CR", "LED", "Q", "U", "IC", "Y", "XTAL", "J", "W", "P", "CN", "CON" })
         {
-            Assert.NotEqual(GeneratedIds.StrapPrefix, prefix);
+            Assert.NotEqual(GeneratedIds.JumperPrefix, prefix);
             Assert.NotNull(PpnReader.KindOf(prefix + "1", null));
         }
-        Assert.Null(PpnReader.KindOf(GeneratedIds.Strap(1), null));
+        Assert.Null(PpnReader.KindOf(GeneratedIds.Jumper(1), null));
     }
 
     [Theory]
@@ -63,14 +63,14 @@ public class GeneratedIdTests
     }
 
     [Fact]
-    public void Placed_jumpers_are_straps_and_no_id_in_a_layout_is_also_a_part_reference()
+    public void Placed_jumpers_get_ST_ids_and_no_id_in_a_layout_is_also_a_part_reference()
     {
         var dir = TestPaths.NewTempDir();
         var project = Path.Combine(dir, "cw.padplan.json");
         Assert.Equal(0, Cli.CliRunner.Run("import", Path.Combine(TestPaths.Examples, "cw-filter", "cw-filter.ppn"), "-o", project, "--quiet").ExitCode);
         Assert.Equal(0, Cli.CliRunner.Run("place", project, "--effort", "quick", "--quiet").ExitCode);
         var placed = PadPlan.ProjectFiles.ProjectFile.Read(project);
-        Assert.All(placed.Layout!.Jumpers, j => Assert.Matches($"^{GeneratedIds.StrapPrefix}[0-9]+$", j.Id));
+        Assert.All(placed.Layout!.Jumpers, j => Assert.Matches($"^{GeneratedIds.JumperPrefix}[0-9]+$", j.Id));
         var refs = placed.Parts.Select(p => p.Ref).ToHashSet(StringComparer.OrdinalIgnoreCase);
         var ids = placed.Layout.Jumpers.Select(j => j.Id).Concat(placed.Layout.Islands().Select(i => i.Id)).Concat(placed.Layout.Pads.Select(p => p.Id));
         Assert.DoesNotContain(ids, refs.Contains);

@@ -103,4 +103,72 @@ public class SpiceDeviceTests
         Assert.Equal(("inv", "in", "out", "vp", "vn"), (u1.NetOf("2"), u1.NetOf("3"), u1.NetOf("6"), u1.NetOf("7"), u1.NetOf("4")));
         Assert.Contains(r.Notes, n => n.Message.Contains("single op-amp pinout"));
     }
+
+    [Fact]
+    public void A_one_port_call_whose_body_uses_ground_gets_a_ground_lead()
+    {
+        // .subckt LOADCELL p with R1 p 0 inside: the part joins b to the plane, so it needs two leads, not a one-lead DIP
+        var r = SpiceCorpus.Import("sub-one-port-ground");
+        var x1 = r.Project.FindPart("X1")!;
+        Assert.Equal("sip-2", x1.Footprint);
+        Assert.Equal(("b", "GND"), (x1.NetOf("1"), x1.NetOf("2")));
+        Assert.Contains(r.Notes, n => n.Message.StartsWith("X1:") && n.Message.Contains("ground lead"));
+    }
+
+    [Fact]
+    public void Numbered_ports_that_fit_no_standard_pinout_go_on_three_leads_in_call_order()
+    {
+        // ports 7 6 11 are the model's node numbers: no DIP pinout has a three-lead part on 6, 7 and 11
+        var r = SpiceCorpus.Import("sub-numbered-shunt");
+        var u1 = r.Project.FindPart("U1")!;
+        Assert.Equal("sip-3", u1.Footprint);
+        Assert.Equal(("r", "GND", "k"), (u1.NetOf("1"), u1.NetOf("2"), u1.NetOf("3")));
+        Assert.DoesNotContain(r.Notes, n => n.Message.Contains("lead numbers"));
+    }
+
+    [Fact]
+    public void A_mosfet_bulk_is_tied_to_its_source_lead_whatever_net_the_deck_puts_it_on()
+    {
+        // M1's bulk on 0, M2's on vss, M3's on its source: all three become lead S in the export, each off-source one with the same note
+        var r = ImportFixture.Import("""
+            three MOSFETs with their bulk on ground, on a negative rail and on the source
+            .model SMALLN NMOS(VTO=1 KP=2m)
+            V1 vdd 0 9
+            V2 vss 0 -5
+            Vg g 0 2.5
+            R1 vdd d1 2.2k
+            M1 d1 g s1 0 SMALLN
+            R2 s1 0 100
+            R3 vdd d2 2.2k
+            M2 d2 g s2 vss SMALLN
+            R4 s2 0 100
+            R5 vdd d3 2.2k
+            M3 d3 g s3 s3 SMALLN
+            R6 s3 0 100
+            .end
+            """);
+        foreach (var name in new[] { "M1", "M2", "M3" })
+        {
+            var element = r.Project.Imported!.Elements.Single(e => e.Name == name);
+            Assert.Equal(element.Nodes[2].Pin, element.Nodes[3].Pin);
+            Assert.Equal(3, r.Project.FindPart(name)!.Pins.Count);
+        }
+        var notes = r.Notes.Where(n => n.Message.Contains("ties the bulk to its source")).Select(n => n.Message[..3]).ToList();
+        Assert.Equal(["M1:", "M2:"], notes);
+    }
+
+    [Fact]
+    public void A_thermal_network_on_an_ambient_source_and_the_source_stay_off_the_board()
+    {
+        var r = SpiceCorpus.Import("dev-mos-thermal-ambient");
+        var p = r.Project;
+        Assert.Null(p.FindPart("Xca"));
+        Assert.Null(p.FindPart("ca"));
+        Assert.DoesNotContain(p.Parts, x => x.Value.Contains("VTamb", StringComparison.Ordinal));
+        Assert.DoesNotContain(p.Nets, n => n.Name == "tamb");
+        Assert.Contains(p.Imported!.Summary, l => l.Topic == "left off" && l.Item == "VTamb");
+        Assert.Contains(p.Imported!.Summary, l => l.Topic == "left off" && l.Item == "Xca");
+        // the supply V1 still gets its landing
+        Assert.Contains(p.Parts, x => x.Value.Contains("V1", StringComparison.Ordinal));
+    }
 }

@@ -46,6 +46,25 @@ public static partial class Ngspice
         return values;
     }
 
+    /// <summary>
+    /// Runs `ngspice -b` on a deck file as it stands (nothing removed or added), in the deck's folder with HOME set to
+    /// that folder (so no start-up file of the machine's user is read); returns stdout and stderr. ngspice may fail on
+    /// the deck: only what it does matters to the caller (a marker file it creates, or not).
+    /// </summary>
+    public static string RunBatch(string deckFile)
+    {
+        var exe = Path ?? throw new InvalidOperationException("ngspice is not installed (apt-get install ngspice); CI must install it (.ci/run).");
+        var dir = System.IO.Path.GetDirectoryName(deckFile)!;
+        var start = new ProcessStartInfo(exe, ["-b", deckFile]) { RedirectStandardOutput = true, RedirectStandardError = true, RedirectStandardInput = true, WorkingDirectory = dir };
+        start.Environment["HOME"] = dir;
+        using var process = Process.Start(start)!;
+        process.StandardInput.Close();
+        var output = process.StandardOutput.ReadToEndAsync();
+        var errors = process.StandardError.ReadToEndAsync();
+        if (!process.WaitForExit(60_000)) { process.Kill(true); throw new TimeoutException("ngspice ran over 1 minute."); }
+        return output.Result + "\n" + errors.Result;
+    }
+
     // numeric node names are printed as v(10)
     private static string Unwrapped(string name) => name.StartsWith("v(", StringComparison.Ordinal) && name.EndsWith(')') ? name[2..^1] : name;
 

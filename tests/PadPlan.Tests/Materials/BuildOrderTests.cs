@@ -40,7 +40,7 @@ public sealed class BuildOrderTests
         var project = LinkedProject();
         var order = BuildOrder.Steps(project).Select(s => $"{s.Action}: {s.What.Split(' ')[0]}").ToList();
         Assert.Equal(
-            ["Glue pads: P1,", "Solder: R1", "Glue pads: P3,", "Fit wire link: W1", "Solder: R2", "Solder: C1", "Test: the"],
+            ["Glue pads: P1,", "Solder: R1", "Glue pads: P3,", "Fit jumper: W1", "Solder: R2", "Solder: C1", "Test: the"],
             order);
         Assert.Contains("ground: 2 to the plane", BuildOrder.Steps(project).Single(s => s.What.StartsWith("C1", StringComparison.Ordinal)).Note);
     }

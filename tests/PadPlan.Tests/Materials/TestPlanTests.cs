@@ -18,7 +18,7 @@ public sealed class TestPlanTests
             Assert.Single(rows, r => r[1] == "apart" && r[2] == island.Id && r[3] == DcPaths.Plane);
         var joined = Assert.Single(rows, r => r[1] == "joined" && r[2] == "P2");
         Assert.Equal(("P3", "beeps"), (joined[3], joined[4]));
-        Assert.Contains("wire link W1", joined[5]);
+        Assert.Contains("jumper W1", joined[5]);
         var ground = Assert.Single(rows, r => r[1] == "joined" && r[2] == DcPaths.Plane);
         Assert.Equal("C1.2", ground[3]);
         Assert.Equal(Enumerable.Range(1, rows.Count).Select(i => i.ToString()), rows.Select(r => r[0]));

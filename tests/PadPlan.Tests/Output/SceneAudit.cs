@@ -15,7 +15,8 @@ public static class SceneAudit
     public static IReadOnlyList<string> Problems(BoardScene scene)
     {
         var problems = new List<string>();
-        var labels = scene.Labels;
+        // a label without a clear place is left off the view (the detail pages show it)
+        var labels = scene.Labels.Where(l => l.Clear).ToList();
         for (var i = 0; i < labels.Count; i++)
             for (var j = i + 1; j < labels.Count; j++)
                 if (labels[i].Box.Overlaps(labels[j].Box)) problems.Add($"label {Name(labels[i])} overlaps label {Name(labels[j])}");

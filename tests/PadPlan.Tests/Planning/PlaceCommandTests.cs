@@ -74,9 +74,9 @@ public class PlaceCommandTests
         // The old column repeats what the first place printed for its own layout, the new one what the second made.
         Assert.Matches($@"^\s+total lead\s+{Regex.Escape(firstTotal[1].Value)} mm\s+{Regex.Escape(Mm(now.TotalLead))} mm$", rows[1]);
         Assert.Matches($@"^\s+longest lead\s+{Regex.Escape(firstTotal[2].Value)} mm \(\S+\)\s+{Regex.Escape(Mm(now.LongestLead))} mm", rows[2]);
-        Assert.Matches($@"^\s+wire links\s+{old.Links}\s+{now.Links}$", rows[3]);
+        Assert.Matches($@"^\s+jumpers\s+{old.Links}\s+{now.Links}$", rows[3]);
         // 50 x 36 mm before (the fixture's board), 60 x 40 mm after (--board).
-        Assert.Matches(@"^\s+board area\s+1800 mm\^2\s+2400 mm\^2$", rows[4]);
+        Assert.Matches(@"^\s+board area\s+1800 mm²\s+2400 mm²$", rows[4]);
         Assert.Equal((60.0, 40.0), (ProjectFile.Read(path).Board.Width!.Value, ProjectFile.Read(path).Board.Height!.Value));
     }
 

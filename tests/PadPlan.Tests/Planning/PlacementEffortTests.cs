@@ -46,6 +46,7 @@ public class PlacementEffortTests
     [Theory]
     [InlineData("tiny-buffer")]
     [InlineData("valve-stage")]
+    [InlineData("xtal-osc-40m")]
     public void Lead_length_is_steady_from_seed_to_seed(string example)
     {
         var project = ExampleProjects.Unplaced(example);
@@ -58,9 +59,10 @@ public class PlacementEffortTests
             totals.Add(result.Summary!.TotalLead);
             longest.Add(result.Summary.LongestLead);
         }
-        // common practice, no source: the targets are 10 % and 25 % (measured, and missed, in docs/benchmarks.md). CI allows 1.5x
-        // between best and worst seed for the total lead and 4x for the longest lead: on these two examples the longest lead of
-        // 10 seeds has spread 1.4x to 3.3x over the code versions measured, so the bound catches a collapse, not the target.
+        // common practice, no source: the target is 10 % (measured, and missed, in docs/benchmarks.md). CI allows 1.5x between best
+        // and worst seed for the total lead and 4x for the longest lead. Measured with the refining runs (2026-12-04): total lead
+        // 1.18x (tiny buffer), 1.41x (valve stage), 1.34x (crystal oscillator, 1.74x before them); longest lead up to 2.6x. So the
+        // bound catches a return of the old spread on the crystal oscillator, not the target.
         Assert.True(totals.Max() <= 1.5 * totals.Min(), $"total lead {string.Join(", ", totals.Select(t => t.ToString("0.0")))}");
         Assert.True(longest.Max() <= 4.0 * longest.Min(), $"longest lead {string.Join(", ", longest.Select(t => t.ToString("0.0")))}");
     }

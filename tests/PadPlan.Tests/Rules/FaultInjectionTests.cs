@@ -46,6 +46,39 @@ public class FaultInjectionTests
     }
 
     [Fact]
+    public void Transistor_turned_half_round_with_its_leads_left_on_their_pads()
+    {
+        // Q1 (TO-92, C B E at 1.27 mm pitch) turned 180 degrees: E now leaves the body left of B, while E still lands on
+        // P4 to the right and B on P2 to the left, so the two bare leads cross on the way.
+        var report = Check(Tiny.ReplacePlacement("Q1", pl => new Placement(pl.Ref, pl.Position, Rotation.R180, pl.Leads)));
+        var hit = Expect(report, RuleIds.LeadCrossing, "Q1.B", "Q1.E");
+        Assert.Equal(Severity.Error, hit.Severity);
+        Assert.Contains("cross", hit.Message);
+        Assert.False(report.Passed(strict: false));
+    }
+
+    [Fact]
+    public void Leads_swapped_between_their_pads()
+    {
+        // R1 stands vertical between P3 (VCC, above) and P2 (BASE, below); swapping its landings makes each lead run
+        // along the other over the body: the same line, 0 mm apart.
+        var swapped = Tiny.MoveLanding("R1", "1", "P2", 20, 17).MoveLanding("R1", "2", "P3", 20, 6.2);
+        var report = Check(swapped);
+        Expect(report, RuleIds.LeadCrossing, "R1.1", "R1.2");
+    }
+
+    [Fact]
+    public void Leads_nearer_than_a_wider_lead_gap()
+    {
+        // The tiny buffer passes with the default 0.5 mm; asking 8 mm between bare leads of two nets turns Q1.C (VCC, to
+        // P3) and R1.2 (BASE, to P2), about 5.5 mm apart surface to surface, into a finding that says how far apart they are.
+        var report = Check(Tiny with { Rules = Tiny.Rules with { LeadGap = 8 } });
+        var near = report.Findings.Where(f => f.RuleId == RuleIds.LeadCrossing).ToList();
+        Assert.NotEmpty(near);
+        Assert.Contains(near, f => f.Message.Contains("apart") && f.Items.Contains("Q1.C") && f.Items.Contains("R1.2") && f.Message.Contains("need 8 mm"));
+    }
+
+    [Fact]
     public void Jumper_deleted()
     {
         var report = Check(Dip.RemoveJumper("JP1"));

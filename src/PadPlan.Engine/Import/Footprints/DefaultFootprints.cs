@@ -56,6 +56,7 @@ public static class DefaultFootprints
     private static bool PowerDiode(string model) =>
         model.Contains("rect", StringComparison.OrdinalIgnoreCase) || model.Contains("power", StringComparison.OrdinalIgnoreCase) || model.Contains("pwr", StringComparison.OrdinalIgnoreCase);
 
-    private static bool Crystal(string model) =>
+    /// <summary>A model or subcircuit name that says crystal (xtal, crystal, quartz).</summary>
+    public static bool Crystal(string model) =>
         model.Contains("xtal", StringComparison.OrdinalIgnoreCase) || model.Contains("crystal", StringComparison.OrdinalIgnoreCase) || model.Contains("quartz", StringComparison.OrdinalIgnoreCase);
 }

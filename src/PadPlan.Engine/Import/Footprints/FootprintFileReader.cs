@@ -20,10 +20,10 @@ public static class FootprintFileReader
     public static IReadOnlyList<(Footprint Footprint, string Path)> Parse(byte[] bytes, string file)
     {
         bytes = TextEncodingCheck.Utf8(bytes, file);
-        var dto = JsonInput.Deserialize(bytes, ProjectJsonContext.Default.FootprintFileDto, InputLimits.FootprintFile, file, "footprints");
+        var dto = JsonInput.Deserialize(bytes, ProjectJsonContext.Default.FootprintFileDto, InputLimits.FootprintFile, file, "footprints", d => d.Format);
         var reader = new DtoReader(file, bytes);
         if (dto.Format != FormatTag)
-            throw reader.Fail("$.format", $"a footprint file starts with \"format\": \"{FormatTag}\" (found {(dto.Format is null ? "nothing" : $"\"{dto.Format}\"")}).");
+            throw reader.Fail("$.format", $"a footprint file starts with \"format\": \"{FormatTag}\" (found {JsonInput.Describe(dto.Format)}).");
         var family = reader.Need(dto.Family, "$.family", "family name (e.g. \"resistors\")");
         var list = reader.Need(dto.Footprints, "$.footprints", "footprint list");
         return list.Select((f, i) => (reader.Footprint(f, $"$.footprints[{i}]", family), $"$.footprints[{i}]")).ToList();

@@ -41,10 +41,10 @@ public sealed class PartsMap
     public static PartsMap Parse(byte[] bytes, string file, FootprintLibrary library)
     {
         bytes = TextEncodingCheck.Utf8(bytes, file);
-        var dto = JsonInput.Deserialize(bytes, ImportJsonContext.Default.PartsMapDto, InputLimits.PartsMap, file, "a parts map");
+        var dto = JsonInput.Deserialize(bytes, ImportJsonContext.Default.PartsMapDto, InputLimits.PartsMap, file, "a parts map", d => d.Format);
         var reader = new DtoReader(file, bytes);
         if (dto.Format != FormatTag)
-            throw reader.Fail("$.format", $"a parts map starts with \"format\": \"{FormatTag}\" (found {(dto.Format is null ? "nothing" : $"\"{dto.Format}\"")}).");
+            throw reader.Fail("$.format", $"a parts map starts with \"format\": \"{FormatTag}\" (found {JsonInput.Describe(dto.Format)}).");
         PartsMapEntry Entry(string key, PartsMapEntryDto e, string path)
         {
             if (e.Footprint is not null && library.Find(e.Footprint) is null)

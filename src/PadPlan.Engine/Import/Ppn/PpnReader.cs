@@ -45,6 +45,7 @@ public static partial class PpnReader
                     nets.Add(NetLine(tokens, Bad));
                     break;
                 default:
+                    NetlistLimits.CheckParts(parts.Count + 1, file, lineNo);
                     parts.Add(PartLine(tokens, lineNo, Bad));
                     break;
             }

@@ -33,11 +33,12 @@ internal sealed partial class SpiceElements
         Record(e.Name, null, [("1", plusNode), ("2", minusNode)], e.TailFrom(2));
     }
 
-    public Netlist Finish(string title, IEnumerable<string> openEnded)
+    public Netlist Finish(string title, IEnumerable<string> openEnded, IEnumerable<(string Node, int Line)> rfMarked)
     {
         var parts = _parts.Select(p => p with { Pins = p.Pins.Select(x => x with { Net = _nodes.Resolve(x.Net) }).ToValueList() }).ToList();
         var elements = _elements.Select(el => el with { Nodes = el.Nodes.Select(n => new SpiceNode(n.Pin, _nodes.Resolve(n.Net))).ToValueList() }).ToList();
-        parts = LeaveOffSimulationOnly(parts, elements);
+        var offBoard = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
+        parts = LeaveOffSimulationOnly(parts, elements, offBoard);
         // "XU2A" names part U2A: drop the X that SPICE needs when a letter follows and no other part has that name.
         var names = new HashSet<string>(parts.Select(p => p.Ref), StringComparer.OrdinalIgnoreCase);
         var renamed = new Dictionary<string, string>(StringComparer.OrdinalIgnoreCase);
@@ -48,7 +49,15 @@ internal sealed partial class SpiceElements
         // landings take names no part and no element of the deck has (a left-off W1 switch keeps its name in messages)
         var used = new HashSet<string>(parts.Select(p => p.Ref).Concat(elements.Select(el => el.Name)), StringComparer.OrdinalIgnoreCase);
         var next = 1;
-        foreach (var source in _sources)
+        var built = _sources.Where(s => !LeftOffSource(s, elements, offBoard)).ToList();
+        var rf = RfNets.Find(parts, rfMarked.Select(m => (_nodes.Resolve(Net(m.Node)), $"marked *padplan rf (line {m.Line})")),
+            built.Select(s => (s.Ref, s.Spec, _nodes.Resolve(s.Plus), _nodes.Resolve(s.Minus))));
+        foreach (var (net, why) in rf)
+        {
+            Fact(new NetFacts(net, Class: NetClass.Rf));
+            _summary.Add(new ImportSummaryLine("rf", NetlistText.Echo(net), why));
+        }
+        foreach (var source in built)
         {
             while (used.Contains($"W{next}")) next++;
             var landing = $"W{next}";
@@ -61,22 +70,36 @@ internal sealed partial class SpiceElements
             Elements: elements.ToValueList(), DeckLines: scan.DeckLines.ToValueList(), Summary: _summary.ToValueList());
     }
 
-    // A subcircuit of only behavioural sources and passive parts whose nodes reach no real part (a thermal network) has nothing to build.
-    private List<NetlistPart> LeaveOffSimulationOnly(List<NetlistPart> parts, List<SpiceElement> elements)
+    // A subcircuit of only behavioural sources and passive parts whose nodes reach no lead of a real part (a thermal
+    // network on a transistor's thermal nodes) has nothing to build; a source does not make a node physical, so a
+    // network driven by an ambient-temperature source is left off too. The left-off nets are gathered in offBoard.
+    private List<NetlistPart> LeaveOffSimulationOnly(List<NetlistPart> parts, List<SpiceElement> elements, HashSet<string> offBoard)
     {
         bool SimulationOnly(NetlistPart p) => p.Kind == PartKind.Subcircuit && p.Model is not null && scan.Subckts.TryGetValue(p.Model, out var def) && def.SimulationOnly;
         var physical = parts.Where(p => !SimulationOnly(p)).SelectMany(p => p.Pins.Select(x => x.Net)).ToHashSet(StringComparer.OrdinalIgnoreCase);
-        physical.UnionWith(_sources.SelectMany(s => new[] { _nodes.Resolve(s.Plus), _nodes.Resolve(s.Minus) }));
         var kept = new List<NetlistPart>();
         foreach (var p in parts)
         {
             if (!SimulationOnly(p) || p.Pins.Any(x => !NetNames.IsGround(x.Net) && physical.Contains(x.Net))) { kept.Add(p); continue; }
+            offBoard.UnionWith(p.Pins.Select(x => x.Net).Where(n => !NetNames.IsGround(n)));
             notes.Add(new ImportNote(file, p.Line, $"{NetlistText.Echo(p.Ref)}: subcircuit {NetlistText.Echo(p.Model!)} holds only behavioural sources and passive parts, and its nodes ({NetlistText.Echo(string.Join(" ", p.Pins.Select(x => x.Net)))}) reach no part on the board (a thermal network or a model); it is left off the board."));
             _summary.Add(new ImportSummaryLine("left off", NetlistText.Echo(p.Ref), $"simulation-only subcircuit {NetlistText.Echo(p.Model!)}"));
             var at = elements.FindIndex(el => string.Equals(el.Ref, p.Ref, StringComparison.Ordinal));
             if (at >= 0) elements[at] = elements[at] with { Ref = null, Nodes = elements[at].Nodes.Select(n => n with { Pin = null }).ToValueList() };
         }
         return kept;
+    }
+
+    // A source whose nodes reach only left-off networks (and ground) drives the simulation only: an ambient temperature at any value.
+    private bool LeftOffSource(PendingSource source, List<SpiceElement> elements, HashSet<string> offBoard)
+    {
+        var nodes = new[] { _nodes.Resolve(source.Plus), _nodes.Resolve(source.Minus) };
+        if (!nodes.Any(offBoard.Contains) || !nodes.All(n => NetNames.IsGround(n) || offBoard.Contains(n))) return false;
+        var name = NetlistText.Echo(source.Ref);
+        notes.Add(new ImportNote(file, source.Line, $"{name}: its nodes ({NetlistText.Echo(string.Join(" ", nodes))}) reach only a network left off the board (a thermal network's ambient, say), so it is no supply and gets no landing; it stays in the simulation only."));
+        _summary.Add(new ImportSummaryLine("left off", name, $"source on simulation-only nets ({NetlistText.Echo(string.Join(", ", nodes))})"));
+        elements[source.Element] = elements[source.Element] with { Ref = null, Nodes = elements[source.Element].Nodes.Select(n => n with { Pin = null }).ToValueList() };
+        return true;
     }
 
     private NetlistPart Landing(PendingSource source, string landing)

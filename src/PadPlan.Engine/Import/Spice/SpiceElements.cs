@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text.RegularExpressions;
 using PadPlan.IO;
 using PadPlan.Model;
+using PadPlan.Model.Spice;
 using PadPlan.Model.Values;
 
 namespace PadPlan.Import;
@@ -24,6 +25,8 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
 
     public void Element(SpiceLine line)
     {
+        // every word of an element reaches the exported deck: only SPICE deck text gets in (Model/Spice/SpiceText)
+        if (SpiceText.Problem(line.Text) is { } problem) throw new InputException(file, $"this line {problem}", line.Line);
         var tokens = SpiceWords.Of(line, file);
         var text = SpiceWords.Normalised(line);
         var name = tokens[0].Text;
@@ -109,10 +112,37 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
         }
         else if (!SpiceValues.LooksLikeNumber(valueText))
             throw e.Bad($"bad value \"{NetlistText.Echo(valueText)}\": a SPICE value is a number that starts with a digit (4.7k, 100n, 1meg), or a {{parameter expression}}.");
-        else if (PartValues.TryRead(kind, valueText, ValueSyntax.Spice, out var v, out display, out var error)) number = v;
+        else if (PartValues.TryRead(kind, valueText, ValueSyntax.Spice, out var v, out display, out var error))
+        {
+            number = v;
+            SpiceReading(e, valueText, v);
+        }
         else throw e.Bad($"bad value. {error.Replace(valueText, NetlistText.Echo(valueText), StringComparison.Ordinal)}");
         Add(new NetlistPart(e.Name, kind, display, number, model, null, null, ValueList.Of(new NetlistPin("1", Net(args[0])), new NetlistPin("2", Net(args[1]))), Positional: true, e.Line));
         Record(e.Name, e.Name, [("1", args[0]), ("2", args[1])], e.TailFrom(2));
+    }
+
+    /// <summary>
+    /// A value that SPICE reads otherwise than a builder: an IEC 60062 code (4k7, 2R2), which simulators without these
+    /// codes read up to the scale factor (4k7 as 4k), or letters after the scale factor that SPICE ignores (4kk7x). The
+    /// builder's reading stands (the export writes it as a plain number); the note names the line and SPICE's reading.
+    /// </summary>
+    private void SpiceReading(ElementLine e, string text, ComponentValue builder)
+    {
+        if (!ComponentValue.TryReadAsSpice(text, out var spice, out var ignored)) return;
+        var asSpice = new ComponentValue(spice, builder.Unit).ToDisplay();
+        var name = NetlistText.Echo(e.Name);
+        var shown = NetlistText.Echo(text);
+        if (ComponentValue.IsIecCode(text) && Math.Abs(spice - builder.Number) > 1e-12 * Math.Abs(builder.Number))
+        {
+            notes.Add(new ImportNote(file, e.Line, $"{name}: value {shown} is an IEC 60062 code, read as {builder.ToDisplay()} as a builder means it. SPICE simulators without these codes (ngspice among them) read it as {asSpice}: they ignore the letters after the scale factor, so a simulation of this deck as written used {asSpice}. The exported deck writes {SpiceText.Number(builder.Number)}; write that in your deck too, so both agree."));
+            _summary.Add(new ImportSummaryLine("assumed", name, $"value {shown} read as {builder.ToDisplay()} (SPICE without IEC codes reads {asSpice})"));
+        }
+        else if (ignored.Length > 0 && !ComponentValue.IsUnitWord(ignored))
+        {
+            notes.Add(new ImportNote(file, e.Line, $"{name}: value {shown}: SPICE reads {asSpice} and ignores \"{NetlistText.Echo(ignored)}\" after the scale factor; PadPlan reads it the same. If another value was meant, write it as a plain number."));
+            _summary.Add(new ImportSummaryLine("assumed", name, $"value {shown} read as {asSpice} (letters after the scale factor ignored)"));
+        }
     }
 
     private static string? Parameter(List<string> words, string key) =>
@@ -141,12 +171,15 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
                 recorded.Add((null, nodes[i]));
                 continue;
             }
-            // Discrete packages have no bulk or substrate lead: the bulk is tied to the source inside, the substrate is the case or nothing.
+            // Discrete packages have no bulk or substrate lead: a MOSFET's bulk is tied to the source inside, whatever net
+            // the deck puts it on, so the export ties it to lead S; a BJT's substrate is the case or nothing.
             var tiedTo = kind == PartKind.Mosfet ? Net(nodes[2]) : NetNames.Ground;
             var same = string.Equals(Net(nodes[i]), tiedTo, StringComparison.OrdinalIgnoreCase);
-            recorded.Add((same && kind == PartKind.Mosfet ? "S" : null, nodes[i]));
+            recorded.Add((kind == PartKind.Mosfet ? "S" : null, nodes[i]));
             if (!same)
-                notes.Add(new ImportNote(file, e.Line, $"{NetlistText.Echo(e.Name)}: the {(kind == PartKind.Mosfet ? "bulk" : "substrate")} node {NetlistText.Echo(nodes[i])} has no lead on a discrete part and is left out; it is not on {tiedTo} as usual, so check the circuit."));
+                notes.Add(new ImportNote(file, e.Line, kind == PartKind.Mosfet
+                    ? $"{NetlistText.Echo(e.Name)}: the bulk node {NetlistText.Echo(nodes[i])} is not on the source {NetlistText.Echo(nodes[2])}; a discrete MOSFET has no bulk lead and ties the bulk to its source inside the package, so the board and the exported deck tie it to lead S. Check the circuit: a deck that meant the bulk on {NetlistText.Echo(nodes[i])} simulates differently."
+                    : $"{NetlistText.Echo(e.Name)}: the substrate node {NetlistText.Echo(nodes[i])} has no lead on a discrete part and is left out; it is not on {tiedTo} as usual, so check the circuit."));
         }
         if (thermal < nodes.Count)
             notes.Add(new ImportNote(file, e.Line, $"{NetlistText.Echo(e.Name)}: nodes {NetlistText.Echo(string.Join(" ", nodes.Skip(thermal)))} are thermal nodes (junction and case temperature) of the model, not leads; they stay in the simulation only."));
@@ -191,7 +224,16 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
         }
         else pinNames = nodes.Select((_, i) => (i + 1).ToString(CultureInfo.InvariantCulture)).ToList();
         var pins = nodes.Select((n, i) => new NetlistPin(pinNames[i], Net(n))).ToValueList();
-        Add(new NetlistPart(e.Name, PartKind.Subcircuit, sub, null, sub, null, null, pins, Positional: true, e.Line));
+        var part = new NetlistPart(e.Name, PartKind.Subcircuit, sub, null, sub, null, null, pins, Positional: true, e.Line);
+        // A body that puts a node on global ground (0) reaches the ground plane though no port does: the part needs a
+        // ground lead. A recognised pinout (an op-amp macromodel's 0 is only its reference) already says where its leads are.
+        if (def is { UsesGround: true } && !nodes.Any(NetNames.IsGround) && StandardPinouts.Find(part) is null && OpAmpPinout.FromNames(pinNames) is null)
+        {
+            var ground = UniqueNames([.. pinNames, "GND"])[^1];
+            part = part with { Pins = pins.Add(new NetlistPin(ground, NetNames.Ground)) };
+            notes.Add(new ImportNote(file, e.Line, $"{NetlistText.Echo(e.Name)}: subcircuit {NetlistText.Echo(sub)} puts a node on ground (0) inside, so the part gets a ground lead ({ground}) after its ports. Check the data sheet; a parts map can say otherwise."));
+        }
+        Add(part);
         Record(e.Name, e.Name, nodes.Select((n, i) => ((string?)pinNames[i], n)), e.TailFrom(nodes.Count));
     }
 
@@ -214,7 +256,12 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
         _elements.Add(new SpiceElement(e.Name, null, ValueList<SpiceNode>.Empty, e.TailFrom(0)));
     }
 
-    private void Add(NetlistPart part) => _parts.Add(part);
+    // Windings joined by K lines become one part later, so the exact count is checked after reading; this stops a runaway deck early.
+    private void Add(NetlistPart part)
+    {
+        NetlistLimits.CheckParts(_parts.Count + 1, file, part.Line, 2 * ProjectFiles.Limits.InputLimits.MaxParts);
+        _parts.Add(part);
+    }
 
     private void Fact(NetFacts facts) =>
         _facts[facts.Name] = _facts.TryGetValue(facts.Name, out var had) ? had.Merge(facts) : facts;

@@ -31,6 +31,11 @@ public static class SpiceExpression
     private sealed class Parser(string text, IReadOnlyDictionary<string, double> parameters)
     {
         private int _at;
+        private int _depth;
+
+        // Lines are checked against SpiceText's depth limits before they are read; this bound keeps the parser's own
+        // recursion finite whatever text it is given (a deeper expression is left unevaluated).
+        private const int MaxDepth = 4 * PadPlan.Model.Spice.SpiceText.MaxExpressionDepth + PadPlan.Model.Spice.SpiceText.MaxSignRun;
 
         public bool AtEnd { get { Skip(); return _at >= text.Length; } }
 
@@ -66,6 +71,13 @@ public static class SpiceExpression
         }
 
         private double? Unary()
+        {
+            if (++_depth > MaxDepth) return null;
+            try { return UnaryInner(); }
+            finally { _depth--; }
+        }
+
+        private double? UnaryInner()
         {
             Skip();
             if (_at < text.Length && text[_at] is '-' or '+')

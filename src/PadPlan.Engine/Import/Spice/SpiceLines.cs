@@ -17,6 +17,7 @@ public static class SpiceLines
             {
                 if (lines.Count == 0)
                     throw new InputException(file, "a continuation line (+) with nothing before it to continue. Join it to an element line or remove the '+'.", i + 1, 1);
+                NetlistLimits.CheckJoined(lines[^1].Text.Length + text.Length, file, lines[^1].Line);
                 lines[^1] = lines[^1] with { Text = lines[^1].Text + " " + text[1..] };
                 continue;
             }

@@ -19,7 +19,8 @@ public static partial class SpiceReader
         var scan = SpiceScan.Of(lines, file, notes);
         var state = new SpiceElements(file, scan, notes);
         foreach (var line in scan.TopLevel) state.Element(line);
-        return state.Finish(title, OpenEndDirective.Find(physical, file).Select(d => d.Node));
+        return state.Finish(title, CommentDirective.Find(physical, file, CommentDirective.OpenEnd).Select(d => d.Node).ToList(),
+            CommentDirective.Find(physical, file, CommentDirective.Rf).ToList());
     }
 
     [GeneratedRegex(@"^[RCLDQJMXKVI][A-Za-z_]*\d\w*\s+\S+\s+\S+", RegexOptions.IgnoreCase)]

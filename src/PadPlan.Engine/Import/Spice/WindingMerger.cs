@@ -12,41 +12,49 @@ public static class WindingMerger
     {
         if (couplings.Count == 0) return [.. parts];
         var byRef = parts.ToDictionary(p => p.Ref, StringComparer.OrdinalIgnoreCase);
-        var group = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
-        var groups = new List<(List<string> Windings, List<WindingCoupling> Lines)>();
-        foreach (var k in couplings)
+        var order = parts.Select((p, i) => (p.Ref, i)).ToDictionary(x => x.Ref, x => x.i, StringComparer.OrdinalIgnoreCase);
+        // Windings on one core form a connected group of K lines: union-find over the K lines (the earliest line of a
+        // group is its root), so thousands of chained K lines merge in near-linear time.
+        var root = Enumerable.Range(0, couplings.Count).ToArray();
+        int Find(int x)
         {
+            while (root[x] != x) x = root[x] = root[root[x]];
+            return x;
+        }
+        var firstLine = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
+        for (var n = 0; n < couplings.Count; n++)
+        {
+            var k = couplings[n];
             foreach (var l in k.Inductors)
+            {
                 if (!byRef.TryGetValue(l, out var part) || part.Kind != PartKind.Inductor)
                     throw new InputException(file, $"{k.Ref}: couples {l}, which is not an inductor in this netlist.", k.Line);
-            var existing = k.Inductors.Where(group.ContainsKey).Select(l => group[l]).Distinct().Order().ToList();
-            var target = existing.Count > 0 ? existing[0] : groups.Count;
-            if (existing.Count == 0) groups.Add(([], []));
-            foreach (var other in existing.Skip(1))
-            {
-                // a later K line joined two cores' worth of windings: one core after all
-                foreach (var l in groups[other].Windings) group[l] = target;
-                groups[target].Windings.AddRange(groups[other].Windings);
-                groups[target].Lines.AddRange(groups[other].Lines);
-                groups[other] = ([], []);
+                if (!firstLine.TryAdd(l, n))
+                {
+                    var (a, b) = (Find(n), Find(firstLine[l]));
+                    if (a != b) root[Math.Max(a, b)] = Math.Min(a, b);
+                }
             }
-            foreach (var l in k.Inductors.Where(l => !group.ContainsKey(l)))
-            {
-                group[l] = target;
-                groups[target].Windings.Add(l);
-            }
-            groups[target].Lines.Add(k);
         }
+        var group = firstLine.ToDictionary(e => e.Key, e => Find(e.Value), StringComparer.OrdinalIgnoreCase);
+        var groups = new SortedDictionary<int, (List<string> Windings, List<WindingCoupling> Lines)>();
+        for (var n = 0; n < couplings.Count; n++)
+        {
+            var g = Find(n);
+            if (!groups.TryGetValue(g, out var entry)) groups[g] = entry = ([], []);
+            entry.Lines.Add(couplings[n]);
+        }
+        foreach (var (l, g) in group) groups[g].Windings.Add(l);
 
         var used = new HashSet<string>(parts.Select(p => p.Ref), StringComparer.OrdinalIgnoreCase);
         var merged = new Dictionary<int, NetlistPart>();
         var next = 1;
-        foreach (var (windings, lines, index) in groups.Select((g, i) => (g.Windings, g.Lines, i)).Where(g => g.Windings.Count > 0))
+        foreach (var (index, (windings, lines)) in groups)
         {
             while (used.Contains($"T{next}")) next++;
             var reference = $"T{next}";
             used.Add(reference);
-            var sorted = windings.OrderBy(l => parts.ToList().FindIndex(p => string.Equals(p.Ref, l, StringComparison.OrdinalIgnoreCase))).ToList();
+            var sorted = windings.OrderBy(l => order[l]).ToList();
             var pins = sorted.SelectMany((l, i) => new[]
             {
                 new NetlistPin((2 * i + 1).ToString(CultureInfo.InvariantCulture), byRef[l].Pins[0].Net),

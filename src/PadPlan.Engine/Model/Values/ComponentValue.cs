@@ -38,16 +38,10 @@ public readonly record struct ComponentValue(double Number, string Unit)
         }
         if (TryIecCode(s, out value)) return true;
 
-        var i = 0;
-        while (i < s.Length && (char.IsAsciiDigit(s[i]) || s[i] is '.' or '+' or '-' or 'e' or 'E'))
+        var i = NumberPrefix(s, out var number);
+        if (i == 0)
         {
-            // stop at an 'e' that does not start an exponent (e.g. "1meg" never reaches here; "5e" would)
-            if (s[i] is 'e' or 'E' && !(i + 1 < s.Length && (char.IsAsciiDigit(s[i + 1]) || s[i + 1] is '+' or '-'))) break;
-            i++;
-        }
-        if (i == 0 || !double.TryParse(s[..i], NumberStyles.Float, CultureInfo.InvariantCulture, out var number) || !double.IsFinite(number))
-        {
-            error = $"\"{text}\" is not a value: expected a number such as 4.7k, 100n, 4k7 or 2.2uH.";
+            error = $"\"{(s.Length <= 80 ? s : s[..77] + "...")}\" is not a value: expected a number such as 4.7k, 100n, 4k7 or 2.2uH.";
             return false;
         }
         var rest = s[i..];
@@ -62,6 +56,44 @@ public readonly record struct ComponentValue(double Number, string Unit)
         value = new ComponentValue(number * scale, unit);
         return true;
     }
+
+    // The length of the number at the start of s (0 when there is none) and its value.
+    private static int NumberPrefix(string s, out double number)
+    {
+        number = 0;
+        var i = 0;
+        while (i < s.Length && (char.IsAsciiDigit(s[i]) || s[i] is '.' or '+' or '-' or 'e' or 'E'))
+        {
+            // stop at an 'e' that does not start an exponent (e.g. "1meg" never reaches here; "5e" would)
+            if (s[i] is 'e' or 'E' && !(i + 1 < s.Length && (char.IsAsciiDigit(s[i + 1]) || s[i + 1] is '+' or '-'))) break;
+            i++;
+        }
+        return i > 0 && double.TryParse(s[..i], NumberStyles.Float, CultureInfo.InvariantCulture, out number) && double.IsFinite(number) ? i : 0;
+    }
+
+    /// <summary>
+    /// How a SPICE simulator without IEC 60062 codes reads a value (SPICE3 and ngspice number syntax): the number, one
+    /// scale factor (case-insensitive; "meg", "mil"), and every letter after it ignored, so "4k7" is 4000 and "2R2" is
+    /// 2. Gives the number and the ignored letters; false when the text does not start with a number.
+    /// </summary>
+    public static bool TryReadAsSpice(string? text, out double number, out string ignored)
+    {
+        ignored = "";
+        var s = (text ?? "").Trim();
+        var i = NumberPrefix(s, out number);
+        if (i == 0) return false;
+        var (scale, after) = ScaleOf(s[i..], ValueSyntax.Spice);
+        number *= scale;
+        ignored = after;
+        return true;
+    }
+
+    /// <summary>True for letters that name a unit (F, H, V, A, W, Hz, ohm, ohms, and R for ohms), case-insensitive as SPICE reads them: letters a reader may ignore without changing what was meant.</summary>
+    public static bool IsUnitWord(string letters) =>
+        letters.Equals("R", StringComparison.OrdinalIgnoreCase) || Units.Any(u => string.Equals(u.Text, letters, StringComparison.OrdinalIgnoreCase));
+
+    /// <summary>True when the text is an IEC 60062 code with a letter in place of the decimal sign (4k7, 2R2, 1u5).</summary>
+    public static bool IsIecCode(string? text) => TryIecCode((text ?? "").Trim().Replace(" ", "", StringComparison.Ordinal), out _);
 
     // 4k7, R47, 4R7, 2u2, 4p7, 47K3: digits, one IEC letter in place of the decimal sign, digits, then an optional unit.
     private static bool TryIecCode(string s, out ComponentValue value)

@@ -31,11 +31,12 @@ public static class CheckReportTables
         return $"Check of {project} {verdict}: {report.Errors} error(s), {report.Warnings} warning(s), {notes} note(s){(strict ? " (strict: warnings fail)" : "")}.";
     }
 
-    /// <summary>The whole report as plain text.</summary>
-    public static string ToText(string project, CheckReport report, bool strict)
+    /// <summary>The whole report as plain text; with a width, every line fits it (see <see cref="TableText.ToText"/>).</summary>
+    public static string ToText(string project, CheckReport report, bool strict, int? width = null)
     {
-        var parts = new List<string> { Summary(project, report, strict) + "\n" };
-        parts.AddRange(Build(report).Select(TableText.ToText));
+        var summary = Summary(project, report, strict);
+        var parts = new List<string> { string.Join("\n", width is { } w ? TableText.Wrap(summary, w) : [summary]) + "\n" };
+        parts.AddRange(Build(report).Select(t => TableText.ToText(t, width)));
         return string.Join("\n", parts);
     }
 

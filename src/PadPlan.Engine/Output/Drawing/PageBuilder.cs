@@ -9,6 +9,13 @@ public sealed class PageBuilder
 
     public int Count => _shapes.Count;
 
+    /// <summary>Marks the shape added last with what it stands for (see <see cref="ShapeTag"/>).</summary>
+    public PageBuilder Tag(ShapeTag? tag)
+    {
+        if (tag is not null && _shapes.Count > 0) _shapes[^1] = _shapes[^1] with { Tag = tag };
+        return this;
+    }
+
     public PageBuilder Add(Shape shape)
     {
         _shapes.Add(shape);

@@ -34,15 +34,15 @@ public static class SvgWriter
                 case PolyShape p:
                     sb.Append(p.Closed ? "<polygon" : "<polyline").Append(" points=\"")
                       .Append(string.Join(" ", p.Points.Select(pt => $"{N(pt.X)},{N(pt.Y)}"))).Append('"')
-                      .Append(Paint(p.Stroke, p.Fill)).Append("/>\n");
+                      .Append(Paint(p.Stroke, p.Fill)).Append(TagText(p.Tag)).Append("/>\n");
                     break;
                 case RectShape r:
                     sb.Append($"<rect x=\"{N(r.Box.Left)}\" y=\"{N(r.Box.Top)}\" width=\"{N(r.Box.Width)}\" height=\"{N(r.Box.Height)}\"");
                     if (r.CornerRadius > 0) sb.Append($" rx=\"{N(r.CornerRadius)}\"");
-                    sb.Append(Paint(r.Stroke, r.Fill)).Append("/>\n");
+                    sb.Append(Paint(r.Stroke, r.Fill)).Append(TagText(r.Tag)).Append("/>\n");
                     break;
                 case CircleShape c:
-                    sb.Append($"<circle cx=\"{N(c.Center.X)}\" cy=\"{N(c.Center.Y)}\" r=\"{N(c.Radius)}\"").Append(Paint(c.Stroke, c.Fill)).Append("/>\n");
+                    sb.Append($"<circle cx=\"{N(c.Center.X)}\" cy=\"{N(c.Center.Y)}\" r=\"{N(c.Radius)}\"").Append(Paint(c.Stroke, c.Fill)).Append(TagText(c.Tag)).Append("/>\n");
                     break;
                 case TextShape t:
                     WriteText(sb, t);
@@ -68,7 +68,18 @@ public static class SvgWriter
         if (t.Weight == FontWeight.Bold) sb.Append(" font-weight=\"bold\"");
         if (t.Colour != Ink.Black) sb.Append($" fill=\"{t.Colour.ToHex()}\"");
         if (t.Angle != 0) sb.Append($" transform=\"rotate({N(t.Angle)} {N(t.At.X)} {N(t.At.Y)})\"");
+        sb.Append(TagText(t.Tag));
         sb.Append(" xml:space=\"preserve\">").Append(Escape(t.Text)).Append("</text>\n");
+    }
+
+    /// <summary>The shape's tag as data attributes (HTML's data-* convention, which SVG 2 adopts), or nothing.</summary>
+    private static string TagText(ShapeTag? tag)
+    {
+        if (tag is null) return "";
+        var sb = new StringBuilder($" data-kind=\"{Escape(tag.Kind)}\"");
+        if (tag.Id is { } id) sb.Append($" data-id=\"{Escape(id)}\"");
+        if (tag.Names is { Count: > 0 } names) sb.Append($" data-names=\"{Escape(string.Join(" ", names))}\"");
+        return sb.ToString();
     }
 
     private static string Paint(Stroke? stroke, Ink? fill)

@@ -34,11 +34,13 @@ public enum LabelRole
     PadId,
     NetName,
     PartName,
+    /// <summary>A number in place of a reference that found no room; the parts table beside the view says which part it is.</summary>
+    PartKey,
     PinName,
 }
 
 /// <summary>A placed label: one or two lines of text in a box, what it belongs to, and its leader line if it has one.</summary>
-public sealed record SceneLabel(LabelRole Role, LabelTarget Target, string TargetId, string Text, string? Second, Box Box, Point? LeaderFrom = null, Point? LeaderTo = null)
+public sealed record SceneLabel(LabelRole Role, LabelTarget Target, string TargetId, string Text, string? Second, Box Box, Point? LeaderFrom = null, Point? LeaderTo = null, bool Clear = true)
 {
     public bool HasLeader => LeaderFrom is not null;
 }
@@ -104,7 +106,7 @@ public sealed record BoardScene(
         foreach (var keepout in project.Board.Keepouts) placer.Obstacle(new BoxZone(view.ToPage(Sheets.Marks.BoundsOf(keepout))), hard: false);
         foreach (var pad in pads)
         {
-            placer.Obstacle(pad.Zone, pad.Id);
+            placer.Obstacle(pad.Zone, pad.Id, stopsLeaders: true);
             placer.Target(LabelTarget.Pad, pad.Id, pad.Zone);
         }
         foreach (var part in parts)
@@ -115,7 +117,7 @@ public sealed record BoardScene(
         foreach (var lead in leads)
         {
             placer.Obstacle(new LineZone(lead.Exit, lead.Landing, 0.5), lead.Ref, hard: false);
-            placer.Obstacle(lead.OnPlane ? new BoxZone(Box.Around(lead.Landing, PlaneSymbol, PlaneSymbol)) : new DiscZone(lead.Landing, DotRadius));
+            placer.Obstacle(lead.OnPlane ? new BoxZone(Box.Around(lead.Landing, PlaneSymbol, PlaneSymbol)) : new DiscZone(lead.Landing, DotRadius), stopsLeaders: true);
             placer.Target(LabelTarget.Lead, lead.Name, new DiscZone(lead.Exit, 0.01));
         }
         foreach (var mark in marks) placer.Obstacle(new BoxZone(mark.Bounds));
@@ -129,45 +131,67 @@ public sealed record BoardScene(
             // first choice: just inside the body edge nearest the lead; then on the lead's exit; then the rings round it
             var inset = body.Inflate(-0.2) is var b && b.Width > w && b.Height > h ? new Box(b.Left + w / 2, b.Top + h / 2, b.Right - w / 2, b.Bottom - h / 2) : body;
             IReadOnlyList<Box> preferred = [Box.Around(inset.Nearest(lead.Exit), w, h), Box.Around(lead.Exit, w, h)];
-            var placed = placer.Place(new LabelPlacer.Request(lead.Ref, LabelTarget.Lead, lead.Name, exit, w, h, preferred, LeaderFrom: LabelPlacer.FirstLeaderRing + 2, AlsoOwns: lead.Pad is null ? null : [lead.Pad]));
-            labels.Add(new SceneLabel(LabelRole.PinName, LabelTarget.Lead, lead.Name, text, null, placed.Box, placed.LeaderFrom, placed.LeaderTo));
+            var placed = placer.Place(new LabelPlacer.Request(lead.Ref, LabelTarget.Lead, lead.Name, exit, w, h, preferred, LeaderFrom: LabelPlacer.FirstLeaderRing + 2, AlsoOwns: lead.Pad is null ? null : [lead.Pad], LeaderMayCross: true));
+            labels.Add(new SceneLabel(LabelRole.PinName, LabelTarget.Lead, lead.Name, text, null, placed.Box, placed.LeaderFrom, placed.LeaderTo, placed.Resolved));
         }
-        var over = pads.ToDictionary(p => p.Id, p => (IReadOnlyCollection<string>)parts.Where(part => Geometry2D.Inside(p.Box.Center, part.Outline)).Select(part => part.Ref).ToList());
+        // each part's reference: inside its body, else beside it or on a leader, else a key number in the same places
+        var key = 0;
+        foreach (var part in parts.OrderBy(p => p.Ref, NaturalOrder.Comparer))
+        {
+            var placed = PlaceName(placer, part, part.Ref, RefSize) ?? PlaceName(placer, part, part.Ref, MinRefSize);
+            var role = LabelRole.PartName;
+            var text = part.Ref;
+            if (placed is null)
+            {
+                text = KeyPrefix + (++key).ToString(System.Globalization.CultureInfo.InvariantCulture);
+                role = LabelRole.PartKey;
+                placed = PlaceName(placer, part, text, KeySize) ?? placer.Place(NameRequest(part, text, KeySize) with { LeaderMayCross = true });
+            }
+            labels.Add(new SceneLabel(role, LabelTarget.Part, part.Ref, text, null, placed.Box, placed.LeaderFrom, placed.LeaderTo, placed.Resolved));
+        }
+        // pad ids and net names where there is room: the template carries every pad id, the legend and the leads table every net
         foreach (var pad in pads)
         {
             var (w, h) = Label.Size(pad.Id, SheetStyle.TextTiny);
             IReadOnlyList<Box> inside = [.. new[] { -0.28, 0.28, 0 }.Select(f => Box.Around(pad.Box.Center + new Point(0, f * pad.Box.Height), w, h)).Where(b => InsidePad(pad, b))];
-            var placed = placer.Place(new LabelPlacer.Request(pad.Id, LabelTarget.Pad, pad.Id, pad.Zone, w, h, inside, AlsoOwns: over[pad.Id]));
-            labels.Add(new SceneLabel(LabelRole.PadId, LabelTarget.Pad, pad.Id, pad.Id, null, placed.Box, placed.LeaderFrom, placed.LeaderTo));
-        }
-        foreach (var part in parts)
-        {
-            var value = PartValue(part.Value);
-            var w = Math.Max(TextMetrics.Width(part.Ref, SheetStyle.TextNormal, FontWeight.Bold), TextMetrics.Width(value, SheetStyle.TextSmall)) + 0.4;
-            var h = SheetStyle.TextNormal + (value.Length > 0 ? SheetStyle.TextSmall * 1.15 : 0);
-            var inside = Box.Around(part.Zone.Bounds.Center, w, h);
-            // A part standing over another part's pad: its name may sit inside its own outline over that pad, as the outline already does.
-            var under = pads.Where(p => over[p.Id].Contains(part.Ref)).Select(p => p.Id).ToList();
-            var placed = placer.Place(new LabelPlacer.Request(part.Ref, LabelTarget.Part, part.Ref, part.Zone, w, h, part.Zone.Bounds.Contains(inside) ? [inside] : [], AlsoOwns: under.Count > 0 ? under : null));
-            labels.Add(new SceneLabel(LabelRole.PartName, LabelTarget.Part, part.Ref, part.Ref, value.Length > 0 ? value : null, placed.Box, placed.LeaderFrom, placed.LeaderTo));
+            if (placer.TryPlace(new LabelPlacer.Request(pad.Id, LabelTarget.Pad, pad.Id, pad.Zone, w, h, inside)) is { } placed)
+                labels.Add(new SceneLabel(LabelRole.PadId, LabelTarget.Pad, pad.Id, pad.Id, null, placed.Box, placed.LeaderFrom, placed.LeaderTo));
         }
         foreach (var pad in pads.Where(p => p.Net is not null))
         {
             var (w, h) = Label.Size(pad.Net!, SheetStyle.TextSmall, FontWeight.Bold);
-            var placed = placer.Place(new LabelPlacer.Request(pad.Id, LabelTarget.Pad, pad.Id, pad.Zone, w, h, AlsoOwns: over[pad.Id]));
-            labels.Add(new SceneLabel(LabelRole.NetName, LabelTarget.Pad, pad.Id, pad.Net!, null, placed.Box, placed.LeaderFrom, placed.LeaderTo));
+            if (placer.TryPlace(new LabelPlacer.Request(pad.Id, LabelTarget.Pad, pad.Id, pad.Zone, w, h, LeaderFrom: LabelPlacer.FirstLeaderRing + 1)) is { } placed)
+                labels.Add(new SceneLabel(LabelRole.NetName, LabelTarget.Pad, pad.Id, pad.Net!, null, placed.Box, placed.LeaderFrom, placed.LeaderTo));
         }
         unresolved = placer.Unresolved;
         return labels;
     }
 
+    /// <summary>Em size of a reference on the view, and the least it shrinks to before a key number takes its place (2 mm on paper, the issue's floor for readable labels).</summary>
+    public const double RefSize = SheetStyle.TextNormal;
+    public const double MinRefSize = 2.0;
+    /// <summary>Em size of a key number: as small as a pin name, since it is one or two digits.</summary>
+    public const double KeySize = PinSize;
+    /// <summary>Key numbers read "#3", so that they are not taken for pin numbers.</summary>
+    public const string KeyPrefix = "#";
+
+    private static LabelPlacer.Request NameRequest(ScenePart part, string text, double size)
+    {
+        var (w, h) = Label.Size(text, size, FontWeight.Bold);
+        // inside the body: the middle first, then slid towards each end and side, clear of pads the body stands over
+        var room = part.Zone.Bounds.Inflate(-0.15);
+        var (dx, dy) = (Math.Max(0, (room.Width - w) / 2), Math.Max(0, (room.Height - h) / 2));
+        var inside = new[] { (0.0, 0.0), (-dx, 0.0), (dx, 0.0), (0.0, -dy), (0.0, dy), (-dx, -dy), (dx, -dy), (-dx, dy), (dx, dy) }
+            .Select(o => Box.Around(room.Center + new Point(o.Item1, o.Item2), w, h))
+            .Where(b => room.Contains(b) && Geometry2D.Corners(b).All(c => Geometry2D.Inside(c, part.Outline) || part.Zone.DistanceTo(Box.Around(c, 0, 0)) < 1e-6))
+            .Distinct().ToList();
+        return new LabelPlacer.Request(part.Ref, LabelTarget.Part, part.Ref, part.Zone, w, h, inside);
+    }
+
+    private static LabelPlacer.Placed? PlaceName(LabelPlacer placer, ScenePart part, string text, double size) => placer.TryPlace(NameRequest(part, text, size));
+
     /// <summary>Em size of pin names on the view (page mm).</summary>
     public const double PinSize = 1.8;
-
-    /// <summary>Longest part value printed beside the reference (page mm); the full value is in the parts list.</summary>
-    private const double ValueWidth = 26;
-
-    internal static string PartValue(string value) => TextMetrics.Fit(value, SheetStyle.TextSmall, ValueWidth);
 
     private static bool InsidePad(ScenePad pad, Box box) => pad.Round
         ? Geometry2D.Corners(box).All(c => c.DistanceTo(pad.Box.Center) <= pad.Box.Width / 2 - 0.1)

@@ -5,7 +5,7 @@ using PadPlan.Output.Drawing;
 
 namespace PadPlan.Output.Sheets;
 
-/// <summary>One piece as drawn on its stock: its outline on the page and where its id is written.</summary>
+/// <summary>One piece as drawn on its stock: its outline on the page and where its id is written (or its key number, "#3", when the id does not fit; the key below the drawing names it).</summary>
 internal sealed record DrawnPiece(string Id, Box Outline, string Text, Box Label);
 
 /// <summary>One cut as drawn: its line on the page and the numbered bubble that gives its place in the cut order, on the line or joined to it by a leader at Anchor.</summary>
@@ -33,6 +33,8 @@ internal static class CutPlanDrawing
     /// <summary>Smallest piece id drawn (mm em size), about 3.4 pt: still readable on a laser print. Common practice, no source.</summary>
     private const double LabelMin = 1.2;
     private const double BubbleRadius = 1.5;
+    /// <summary>Least clear space between a cut's number and any other label or number (mm).</summary>
+    private const double Gap = 0.4;
     private const double BubbleText = 1.8;
     /// <summary>Longest leader from a crowded cut to its number (mm).</summary>
     public const double MaxLeader = 24;
@@ -86,7 +88,8 @@ internal static class CutPlanDrawing
         var discs = new List<Box>();
         var labels = new List<Box>();
         var text = new PageBuilder();
-        var crowded = new List<(string Id, Box Outline)>();
+        var crowded = new List<(string Id, string Key, Box Outline)>();
+        var keys = new List<(string Key, string Id)>();
         foreach (var placed in plan.On(stock))
         {
             var a = P(placed.X, placed.Y);
@@ -99,14 +102,23 @@ internal static class CutPlanDrawing
                 page.Circle(c, r, SheetStyle.Fine, Ink.White);
                 discs.Add(Box.Around(c, 2 * r, 2 * r));
             }
-            if (PieceLabel(text, placed.Piece.Id, box) is { } label)
+            if (PieceLabel(text, placed.Piece.Id, placed.Piece.Id, box) is { } label)
             {
                 labels.Add(label.Label);
                 pieces.Add(label);
+                continue;
+            }
+            // too small for its whole id: a key number, inside the piece if it fits there, else beside the stock
+            var key = $"#{keys.Count + 1}";
+            keys.Add((key, placed.Piece.Id));
+            if (PieceLabel(text, placed.Piece.Id, key, box) is { } keyed)
+            {
+                labels.Add(keyed.Label);
+                pieces.Add(keyed);
             }
             else
             {
-                crowded.Add((placed.Piece.Id, box));
+                crowded.Add((placed.Piece.Id, key, box));
             }
         }
         page.Rect(outline, SheetStyle.Heavy);
@@ -128,64 +140,67 @@ internal static class CutPlanDrawing
         }
         foreach (var shape in text.Shapes()) page.Add(shape);
         var bottom = pieces.Select(p => p.Label.Bottom).Append(outline.Bottom).Max();
+        if (keys.Count > 0)
+        {
+            var line = "Key: " + string.Join(", ", keys.Select(k => $"{k.Key} = {k.Id}"));
+            foreach (var row in TextMetrics.Wrap(line, SheetStyle.TextSmall, width))
+            {
+                bottom += SheetStyle.TextSmall * SheetStyle.LineGap;
+                page.Text(row, new Point(at.X, bottom - SheetStyle.TextSmall * 0.3), SheetStyle.TextSmall);
+            }
+        }
         return new CutPlanFigure(stock, denominator, outline, pieces.ToValueList(), drawn.ToValueList(), discs.ToValueList(), bottom - at.Y, page.Shapes());
     }
 
     // Ids of pieces too small to hold them at the drawing's scale: in a column right of the stock (below it when the
     // page has no room at the side), in the pieces' order down the page, each on a leader to its piece's centre.
-    private static IEnumerable<DrawnPiece> Callouts(PageBuilder page, List<(string Id, Box Outline)> crowded, Box stock, double right)
+    private static IEnumerable<DrawnPiece> Callouts(PageBuilder page, List<(string Id, string Key, Box Outline)> crowded, Box stock, double right)
     {
         var size = SheetStyle.TextSmall;
         var step = size * SheetStyle.LineGap;
-        var widest = crowded.Select(c => TextMetrics.Width(c.Id, size)).DefaultIfEmpty(0).Max();
+        var widest = crowded.Select(c => TextMetrics.Width(c.Key, size)).DefaultIfEmpty(0).Max();
         var beside = stock.Right + 4 + widest <= right;
         var x = beside ? stock.Right + 4 : stock.Left + 4;
         var y = beside ? stock.Top : stock.Bottom + 2;
-        foreach (var (id, box) in crowded.OrderBy(c => c.Outline.Center.Y).ThenBy(c => c.Outline.Center.X))
+        foreach (var (id, key, box) in crowded.OrderBy(c => c.Outline.Center.Y).ThenBy(c => c.Outline.Center.X))
         {
             if (beside) y = Math.Max(y, box.Center.Y - step / 2);
-            var width = TextMetrics.Width(id, size);
+            var width = TextMetrics.Width(key, size);
             var label = new Box(x, y, x + width, y + step);
             page.Line(box.Center, new Point(x - 0.5, y + step / 2), SheetStyle.Hair);
             page.Circle(box.Center, 0.25, null, Ink.Black);
-            page.Text(id, new Point(x, y + step / 2 + size * TextMetrics.CapHeight / 2), size);
-            yield return new DrawnPiece(id, box, id, label);
+            page.Text(key, new Point(x, y + step / 2 + size * TextMetrics.CapHeight / 2), size);
+            yield return new DrawnPiece(id, box, key, label);
             y += step;
         }
     }
 
-    // The id inside its piece: across it if there is room, else along a tall narrow piece, at a smaller size if the whole id
-    // then fits, else shortened with an ellipsis to the piece's length; a white ground under it keeps it readable over disc outlines. Null when even the smallest
-    // readable size does not fit inside the piece.
-    private static DrawnPiece? PieceLabel(PageBuilder page, string id, Box box)
+    // The text (the piece's id, or its key number) inside its piece: across it if there is room, else along a tall narrow
+    // piece, at a smaller size if the whole text then fits; a white ground under it keeps it readable over disc outlines.
+    // The box reserved is the font's whole ascent and descent, as a browser lays the text out. Null when even the
+    // smallest readable size does not fit inside the piece: never cut short.
+    private static DrawnPiece? PieceLabel(PageBuilder page, string id, string shown, Box box)
     {
         const double inset = 0.3;
         var upright = box.Height > box.Width * 1.5;
         var across = upright ? box.Width : box.Height;
         var along = (upright ? box.Height : box.Width) - 2 * inset;
-        // a smaller size, down to the smallest readable one, if the whole id then fits; else an ellipsis at full size
-        var size = Math.Clamp(across * 0.6, LabelMin, LabelMax);
-        if (TextMetrics.Width(id, LabelMin) <= along)
-            while (size > LabelMin && TextMetrics.Width(id, size) > along) size = Math.Max(LabelMin, size - 0.1);
-        var fitted = TextMetrics.Fit(id, size, along);
-        var width = TextMetrics.Width(fitted, size);
+        var size = Math.Clamp(across / Label.Height - 0.1, LabelMin, LabelMax);
+        while (size > LabelMin && TextMetrics.Width(shown, size) > along) size = Math.Max(LabelMin, size - 0.1);
+        if (TextMetrics.Width(shown, size) > along) return null;
+        var width = TextMetrics.Width(shown, size);
         var high = size * TextMetrics.CapHeight;
+        // from the baseline: ascent 0.93 em above, descent 0.24 em below (DejaVu Sans hhea)
+        var (above, below) = (size * 0.93 - high / 2, size * 0.24 + high / 2);
         var c = box.Center;
         var label = upright
-            ? new Box(c.X - high / 2 - 0.2, c.Y - width / 2, c.X + high / 2 + 0.2, c.Y + width / 2)
-            : new Box(c.X - width / 2, c.Y - high / 2 - 0.2, c.X + width / 2, c.Y + high / 2 + 0.2);
-        if (!box.Contains(label) || fitted == "…") return null;
-        if (upright)
-        {
-            page.Rect(label, null, Ink.White);
-            page.Text(fitted, new Point(c.X + high / 2, c.Y), size, TextAnchor.Middle, ink: Ink.Black, angle: -90);
-        }
-        else
-        {
-            page.Rect(label, null, Ink.White);
-            page.Text(fitted, new Point(c.X, c.Y + high / 2), size, TextAnchor.Middle);
-        }
-        return new DrawnPiece(id, box, fitted, label);
+            ? new Box(c.X - above, c.Y - width / 2, c.X + below, c.Y + width / 2)
+            : new Box(c.X - width / 2, c.Y - above, c.X + width / 2, c.Y + below);
+        if (!box.Contains(label)) return null;
+        page.Rect(label, null, Ink.White);
+        if (upright) page.Text(shown, new Point(c.X + high / 2, c.Y), size, TextAnchor.Middle, ink: Ink.Black, angle: -90);
+        else page.Text(shown, new Point(c.X, c.Y + high / 2), size, TextAnchor.Middle);
+        return new DrawnPiece(id, box, shown, label);
     }
 
     // A bubble on the cut line, at spots every half millimetre from its ends inward: the first that covers no label,
@@ -203,7 +218,8 @@ internal static class CutPlanDrawing
         var dir = length > 0 ? (to - from) * (1 / length) : new Point(1, 0);
         var spots = along.Select(d => from + dir * d).ToList();
         Box Around(Point c) => Box.Around(c, 2 * BubbleRadius, 2 * BubbleRadius);
-        bool Free(Box b) => !taken.Any(t => t.Overlaps(b));
+        // a gap round every label and earlier bubble, so that numbers and ids never touch
+        bool Free(Box b) => !taken.Any(t => t.Overlaps(b.Inflate(Gap)));
         foreach (var c in spots)
             if (Free(Around(c)) && !pieces.Any(p => p.Overlaps(Around(c)))) return (Around(c), c);
         foreach (var c in spots)

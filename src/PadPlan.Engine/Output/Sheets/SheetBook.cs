@@ -8,6 +8,29 @@ namespace PadPlan.Output.Sheets;
 /// <summary>All printed pages of a plan, numbered: template page(s), the assembly view, then the report pages.</summary>
 public sealed record SheetBook(string Title, DateOnly Date, ValueList<Sheet> Sheets)
 {
+    /// <summary>
+    /// What the book holds, in words: the pages of each kind and the assembly view's scale, e.g. "12 pages: 1 template,
+    /// 1 assembly (scale 5 : 2), 10 report". Detail pages of the assembly view are counted with it and their scale named.
+    /// </summary>
+    public string Summary()
+    {
+        var parts = new List<string>();
+        foreach (var kind in Enum.GetValues<SheetKind>())
+        {
+            var pages = Sheets.Where(s => s.Kind == kind).ToList();
+            if (pages.Count == 0) continue;
+            var text = $"{pages.Count} {kind.ToString().ToLowerInvariant()}";
+            if (kind == SheetKind.Assembly && pages[0].View is { } view)
+            {
+                text += $" (scale {AssemblySheet.ScaleText(view.Scale)}";
+                if (pages.Count > 1 && pages[1].View is { } detail) text += $"; {pages.Count - 1} detail page{(pages.Count > 2 ? "s" : "")} at {AssemblySheet.ScaleText(detail.Scale)}";
+                text += ")";
+            }
+            parts.Add(text);
+        }
+        return $"{Sheets.Count} page{(Sheets.Count == 1 ? "" : "s")}: {string.Join(", ", parts)}";
+    }
+
     /// <summary>Why a project cannot be printed yet (no layout, no board size), or null when it can.</summary>
     public static string? Problem(Project project)
     {

@@ -19,6 +19,8 @@ internal static class TemplateSheet
     private const double MarkLength = 5;
     private const double IdSize = 1.8;
     private const double SegmentIdSize = 1.5;
+    /// <summary>Smallest pad-id lettering, for a pad in a crowd (page mm; 4 pt, still legible on a laser print).</summary>
+    private const double MinIdSize = 1.4;
     /// <summary>How far a score mark runs past each side of a strip, so it can still be seen with the strip laid on it.</summary>
     private const double ScoreOverhang = 1.5;
 
@@ -87,22 +89,27 @@ internal static class TemplateSheet
         foreach (var island in layout.Islands())
         {
             var zone = IslandZone(island, view);
-            placer.Obstacle(new BoxZone(zone.Bounds.Inflate(0.3)), island.Id);
+            placer.Obstacle(new BoxZone(zone.Bounds.Inflate(0.3)), island.Id, stopsLeaders: true);
             placer.Target(LabelTarget.Pad, island.Id, zone);
         }
         foreach (var keepout in project.Board.Keepouts) placer.Block(view.ToPage(Marks.BoundsOf(keepout)));
         foreach (var landing in GroundLandings(layout)) placer.Block(Box.Around(view.ToPage(landing), Marks.GroundSize, Marks.GroundSize).Inflate(0.2));
-        foreach (var (_, footprint, placement) in PlacedParts(project)) placer.Block(view.ToPage(Marks.BoundsOf(Marks.BodyOf(footprint, placement))));
+        foreach (var (_, footprint, placement) in PlacedParts(project))
+        {
+            var outline = new PolygonZone(Marks.BodyOf(footprint, placement).Select(view.ToPage).ToList());
+            placer.Obstacle(new BoxZone(outline.Bounds), placement.Ref);
+            placer.Target(LabelTarget.Part, placement.Ref, outline);
+        }
 
         foreach (var pad in layout.Pads)
         {
             switch (pad)
             {
                 case RoundPad r:
-                    page.Circle(view.ToPage(r.Center), r.Diameter / 2, SheetStyle.Thin);
+                    page.Circle(view.ToPage(r.Center), r.Diameter / 2, SheetStyle.Thin).Tag(ShapeTag.Pad(r.Id));
                     break;
                 case RectPad r:
-                    page.Rect(view.ToPage(Box.Around(r.Center, r.Width, r.Height)), SheetStyle.Thin);
+                    page.Rect(view.ToPage(Box.Around(r.Center, r.Width, r.Height)), SheetStyle.Thin).Tag(ShapeTag.Pad(r.Id));
                     break;
                 case StripPad s:
                     DrawStrip(page, s, view, placer);
@@ -115,13 +122,21 @@ internal static class TemplateSheet
         foreach (var pad in layout.Pads.Where(p => p is not StripPad))
         {
             var island = pad.Islands()[0];
-            var (w, h) = Label.Size(pad.Id, IdSize, FontWeight.Bold);
-            // the same rules as on the assembly view: clear of everything else, nearer its own pad than any other, else on a leader
-            var placed = placer.Place(new LabelPlacer.Request(island.Id, LabelTarget.Pad, island.Id, IslandZone(island, view), w, h));
+            // the same rules as on the assembly view: clear of everything else, nearer its own pad than any other, else on a
+            // leader that crosses no other pad; outside every part body. Where even that finds no room, smaller lettering.
+            LabelPlacer.Request Ask(double size)
+            {
+                var (w, h) = Label.Size(pad.Id, size, FontWeight.Bold);
+                return new LabelPlacer.Request(island.Id, LabelTarget.Pad, island.Id, IslandZone(island, view), w, h);
+            }
+            var size = IdSize;
+            var placed = placer.TryPlace(Ask(IdSize));
+            if (placed is null) { size = MinIdSize; placed = placer.TryPlace(Ask(size)) ?? placer.Place(Ask(size) with { LeaderMayCross = true }); }
             if (placed.LeaderFrom is { } a && placed.LeaderTo is { } b) page.Line(a, b, SheetStyle.Hair);
-            Label.Draw(page, placed.Box, pad.Id, IdSize, FontWeight.Bold);
+            Label.Draw(page, placed.Box, pad.Id, size, FontWeight.Bold);
+            page.Tag(ShapeTag.Label(pad.Id));
         }
-        foreach (var strip in layout.Pads.OfType<StripPad>()) LabelSegments(page, strip, view, placer);
+        foreach (var strip in layout.Pads.OfType<StripPad>()) LabelSegments(page, layout, strip, view, placer);
         LabelKeepouts(page, project, view, placer);
         LabelParts(page, project, view, placer);
     }
@@ -147,7 +162,7 @@ internal static class TemplateSheet
     {
         var islands = strip.Islands();
         var whole = islands.Select(IslandBox).Aggregate((a, b) => a.Union(b));
-        page.Rect(view.ToPage(whole), SheetStyle.Thin);
+        page.Rect(view.ToPage(whole), SheetStyle.Thin).Tag(ShapeTag.Pad(strip.Id));
         var along = 0.0;
         for (var i = 0; i < strip.Segments.Count - 1; i++)
         {
@@ -162,26 +177,42 @@ internal static class TemplateSheet
     }
 
     /// <summary>Segment ids beside the strip, turned across it for horizontal strips so that 2.54 mm pitch still has room; the strip's own id at its start.</summary>
-    private static void LabelSegments(PageBuilder page, StripPad strip, BoardView view, LabelPlacer placer)
+    private static IEnumerable<string> LandedOn(Layout layout, IEnumerable<string> islands)
+    {
+        var ids = islands.ToHashSet();
+        return layout.Placements.Where(p => p.Leads.Any(l => l.Pad is { } pad && ids.Contains(pad))).Select(p => p.Ref);
+    }
+
+    private static void LabelSegments(PageBuilder page, Layout layout, StripPad strip, BoardView view, LabelPlacer placer)
     {
         var islands = strip.Islands();
         var whole = view.ToPage(islands.Select(IslandBox).Aggregate((a, b) => a.Union(b)));
+        // a segment's id may stand inside the body of a part whose lead lands on that segment (a DIP over its own strips:
+        // "U1-2" names U1's pin 2), never inside another part's body
+        var landed = LandedOn(layout, islands.Select(i => i.Id)).Distinct().ToList();
         foreach (var island in islands)
         {
             var box = view.ToPage(IslandBox(island));
             var (w, h) = Label.Size(island.Id, SegmentIdSize, upward: !strip.Vertical);
             // inside its own segment where it fits (turned across a horizontal strip), else beside it on a leader
             var inside = Box.Around(box.Center, w, h);
-            var placed = placer.Place(new LabelPlacer.Request(island.Id, LabelTarget.Pad, island.Id, new BoxZone(box), w, h,
-                box.Inflate(-0.1).Contains(inside) ? [inside] : [], LeaderFrom: 0));
+            var own = LandedOn(layout, [island.Id]).ToList();
+            var request = new LabelPlacer.Request(island.Id, LabelTarget.Pad, island.Id, new BoxZone(box), w, h,
+                box.Inflate(-0.1).Contains(inside) ? [inside] : [], LeaderFrom: 0, AlsoOwns: own);
+            var placed = placer.TryPlace(request) ?? placer.Place(request with { LeaderMayCross = true });
             if (placed.LeaderFrom is { } a && placed.LeaderTo is { } b) page.Line(a, b, SheetStyle.Hair);
             Label.Draw(page, placed.Box, island.Id, SegmentIdSize, upward: !strip.Vertical);
+            page.Tag(ShapeTag.Label([island.Id, strip.Id, .. own]));
         }
         var (sw, sh) = Label.Size(strip.Id, IdSize, FontWeight.Bold);
         IReadOnlyList<Box> ends = strip.Vertical
             ? [Box.Of(whole.Center.X - sw / 2, whole.Top - 0.4 - sh, sw, sh), Box.Of(whole.Center.X - sw / 2, whole.Bottom + 0.4, sw, sh)]
             : [Box.Of(whole.Left - 0.6 - sw, whole.Center.Y - sh / 2, sw, sh), Box.Of(whole.Right + 0.6, whole.Center.Y - sh / 2, sw, sh)];
-        Label.Draw(page, placer.Place([.. ends, .. LabelPlacer.Around(whole, sw, sh, 0.4)]), strip.Id, IdSize, FontWeight.Bold);
+        var stripRequest = new LabelPlacer.Request(strip.Id, LabelTarget.Other, strip.Id, new BoxZone(whole), sw, sh, ends, AlsoOwns: landed);
+        var stripPlaced = placer.TryPlace(stripRequest) ?? placer.Place(stripRequest with { LeaderMayCross = true });
+        if (stripPlaced.LeaderFrom is { } sa && stripPlaced.LeaderTo is { } sb) page.Line(sa, sb, SheetStyle.Hair);
+        Label.Draw(page, stripPlaced.Box, strip.Id, IdSize, FontWeight.Bold);
+        page.Tag(ShapeTag.Label([strip.Id, .. landed]));
     }
 
     private static void LabelKeepouts(PageBuilder page, Project project, BoardView view, LabelPlacer placer)
@@ -197,17 +228,23 @@ internal static class TemplateSheet
     private static void DrawFaintParts(PageBuilder page, Project project, BoardView view)
     {
         foreach (var (_, footprint, placement) in PlacedParts(project))
-            page.Poly(Marks.BodyOf(footprint, placement).Select(view.ToPage), true, SheetStyle.FaintLine);
+            page.Poly(Marks.BodyOf(footprint, placement).Select(view.ToPage), true, SheetStyle.FaintLine).Tag(ShapeTag.Body(placement.Ref));
     }
 
+    /// <summary>Faint part references, for orientation only: inside or beside the body where a clear place is left, else none (the assembly view names every part).</summary>
     private static void LabelParts(PageBuilder page, Project project, BoardView view, LabelPlacer placer)
     {
         foreach (var (part, footprint, placement) in PlacedParts(project))
         {
-            var body = view.ToPage(Marks.BoundsOf(Marks.BodyOf(footprint, placement)));
+            var outline = Marks.BodyOf(footprint, placement).Select(view.ToPage).ToList();
+            var body = Marks.BoundsOf(outline);
             var (w, h) = Label.Size(part.Ref, IdSize);
-            var box = placer.Place([Box.Around(body.Center, w, h), .. LabelPlacer.Around(body, w, h, 0.2)]);
-            Label.Draw(page, box, part.Ref, IdSize, ink: SheetStyle.Faint);
+            var inside = Box.Around(body.Center, w, h);
+            var request = new LabelPlacer.Request(part.Ref, LabelTarget.Part, part.Ref, new PolygonZone(outline), w, h, body.Contains(inside) ? [inside] : []);
+            if (placer.TryPlace(request) is not { } placed) continue;
+            if (placed.LeaderFrom is { } a && placed.LeaderTo is { } b) page.Line(a, b, SheetStyle.FaintLine);
+            Label.Draw(page, placed.Box, part.Ref, IdSize, ink: SheetStyle.Faint);
+            page.Tag(ShapeTag.Label(part.Ref));
         }
     }
 

@@ -1,67 +1,134 @@
-using System.Globalization;
-using System.Text;
-using PadPlan.Model.Values;
 using PadPlan.Model;
+using PadPlan.Model.Spice;
+using PadPlan.Model.Values;
 using PadPlan.Rules.Extraction;
 
 namespace PadPlan.Output.Spice;
 
 /// <summary>
-/// Writes the circuit a placed layout builds as a SPICE deck: each element of the imported deck with its nodes taken
-/// from the geometry (the pad its lead lands in, "0" for the plane), its value and options as written, sources put
-/// back at their landings, and the deck's .model, .subckt, .param and .include lines carried over, so it simulates.
+/// The circuit a placed layout builds, as a SPICE deck (padplan export --spice, and the deck a simulation runs): each
+/// element of the imported deck with its nodes taken from the geometry (the pad its lead lands in, "0" for the plane),
+/// the project's current value for resistors, capacitors and inductors (a plain SPICE number), its other words as
+/// parsed, sources put back at their landings, and the deck's carried lines (.model, .subckt blocks, .param; .include
+/// and .lib as comments). Built from the parsed model only: see <see cref="SpiceDeck"/>.
 /// </summary>
 public static class ExtractedDeck
 {
     /// <summary>Prefix of nodes that exist only in the simulation (thermal nodes, a left-off thermal network).</summary>
     public const string SimulationOnly = "sim_";
 
-    public static string Write(Project project)
+    /// <summary>The deck as text (what export --spice writes).</summary>
+    public static string Write(Project project) => Build(project).Text;
+
+    /// <summary>The deck as a model: every line parsed and checked, in the order it is written.</summary>
+    public static SpiceDeck Build(Project project)
     {
         var nets = LayoutNets.Of(project);
         var record = project.Imported ?? ImportRecord.Empty;
-        var text = new StringBuilder();
-        var title = string.IsNullOrWhiteSpace(project.Description) ? project.Name : project.Description;
-        text.Append(Line(title)).Append('\n');
-        text.Append("* extracted by padplan export --spice from the layout of ").Append(Line(project.Name)).Append('\n');
-        text.Append("* nodes are named after the first pad of each connected piece of copper; 0 is the ground plane\n");
-        foreach (var line in record.DeckLines) text.Append(line).Append('\n');
+        var parts = project.Parts.ToDictionary(p => p.Ref, StringComparer.Ordinal);
+        var entries = new List<DeckEntry>
+        {
+            new DeckComment($"extracted by padplan export --spice from the layout of {project.Name}"),
+            new DeckComment("nodes are named after the first pad of each connected piece of copper; 0 is the ground plane"),
+        };
+        entries.AddRange(record.DeckLines.Select(l => new DeckCarried(l)));
         var written = new HashSet<string>(StringComparer.Ordinal);
         foreach (var element in record.Elements)
         {
             if (element.Ref is not null) written.Add(element.Ref);
-            text.Append(ElementLine(element, nets)).Append('\n');
+            entries.AddRange(ElementEntries(element, nets, element.Ref is null ? null : parts.GetValueOrDefault(element.Ref)));
         }
         foreach (var part in project.Parts.Where(p => !written.Contains(p.Ref)))
-            text.Append(FromPart(project, part, nets)).Append('\n');
-        text.Append(".end\n");
-        return text.ToString();
+            entries.Add(FromPart(project, part, nets));
+        var title = string.IsNullOrWhiteSpace(project.Description) ? project.Name : project.Description;
+        return new SpiceDeck(title, entries.ToValueList());
     }
 
-    private static string ElementLine(SpiceElement e, LayoutNets nets)
+    private static IEnumerable<DeckEntry> ElementEntries(SpiceElement e, LayoutNets nets, Part? part)
     {
-        var tail = e.Tail.Length == 0 ? "" : " " + e.Tail;
-        // a K line couples windings the board builds as one transformer: it stays as written
-        if (e.Ref is null && e.Nodes.Count == 0) return char.ToUpperInvariant(e.Name[0]) == 'K' ? $"{e.Name}{tail}" : $"* left off the board: {e.Name}{Line(tail)}";
-        if (e.Ref is null && char.ToUpperInvariant(e.Name[0]) is 'V' or 'I')
-            return $"* a wire on the board (nodes joined): {e.Name} {string.Join(" ", e.Nodes.Select(n => n.Net))}{Line(tail)}";
+        var words = Words(e.Tail);
+        var letter = char.ToUpperInvariant(e.Name[0]);
+        if (e.Ref is null && e.Nodes.Count == 0)
+        {
+            // a K line couples windings the board builds as one transformer: it stays, from its words
+            if (letter == 'K') yield return new DeckElement(e.Name, [], words);
+            else yield return new DeckComment($"left off the board: {e.Name} {e.Tail}");
+            yield break;
+        }
+        // a 0 V probe's two nodes were joined into one net; a source left off with its network keeps two
+        if (e.Ref is null && letter is 'V' or 'I' && e.Nodes.Select(n => n.Net).Distinct(StringComparer.Ordinal).Count() == 1)
+        {
+            yield return new DeckComment($"a wire on the board (nodes joined): {e.Name} {string.Join(" ", e.Nodes.Select(n => n.Net))} {e.Tail}");
+            yield break;
+        }
         var nodes = e.Nodes.Select(n => e.Ref is not null && n.Pin is not null ? nets.NodeOf(e.Ref, n.Pin) : OffBoard(n.Net));
-        var comment = e.Ref is null ? $"* simulation only, not on the board:\n" : "";
-        return $"{comment}{e.Name} {string.Join(" ", nodes)}{tail}";
+        if (e.Ref is null) yield return new DeckComment("simulation only, not on the board:");
+        yield return new DeckElement(e.Name, nodes, OwnValue(e, part) ? WithValue(words, part!.Value) : words);
     }
+
+    // A resistor, capacitor or inductor that is its own two-lead part (not a winding of a merged transformer) carries the part's value.
+    private static bool OwnValue(SpiceElement e, Part? part) =>
+        char.ToUpperInvariant(e.Name[0]) is 'R' or 'C' or 'L' && part is { Pins.Count: 2 } && string.Equals(part.Ref, e.Name, StringComparison.OrdinalIgnoreCase);
+
+    // The tail's words, with an expression in braces or quotes kept as one group ("{a * 2}" is three words but one value).
+    private static List<string> Words(string tail)
+    {
+        var groups = new List<string>();
+        var (depth, quoted) = (0, false);
+        foreach (var word in tail.Split(' ', StringSplitOptions.RemoveEmptyEntries))
+        {
+            if (depth > 0 || quoted) groups[^1] += " " + word;
+            else groups.Add(word);
+            foreach (var c in word)
+            {
+                if (c == '\'') quoted = !quoted;
+                else if (!quoted && c == '{') depth++;
+                else if (!quoted && c == '}') depth = Math.Max(0, depth - 1);
+            }
+        }
+        return groups;
+    }
+
+    /// <summary>
+    /// A resistor's, capacitor's or inductor's words with the project's current value in place of the imported one,
+    /// written as a plain SPICE number (4700, not 4k7, which SPICE reads as 4k), so the deck, the sheets and the BOM
+    /// agree. The value is the first positional word that is a number or an expression, or the r=/c=/l= word.
+    /// </summary>
+    private static List<string> WithValue(List<string> words, string value)
+    {
+        if (!ComponentValue.TryParse(value, ValueSyntax.SI, out var current, out _) || !(current.Number > 0)) return words;
+        var number = Plain(current.Number);
+        var result = new List<string>(words);
+        for (var i = 0; i < result.Count; i++)
+        {
+            var w = result[i];
+            var eq = w.IndexOf('=');
+            if (eq < 0 && (LooksLikeNumber(w) || w.StartsWith('{') || w.StartsWith('\'')))
+            {
+                result[i] = number;
+                return result;
+            }
+            if (eq > 0 && w[..eq].ToLowerInvariant() is "r" or "c" or "l" or "resistance" or "capacitance" or "inductance")
+            {
+                result[i] = w[..(eq + 1)] + number;
+                return result;
+            }
+        }
+        return words;
+    }
+
+    private static bool LooksLikeNumber(string w) => w.Length > 0 && (char.IsAsciiDigit(w[0]) || w[0] is '.' or '+' or '-' && w.Length > 1 && (char.IsAsciiDigit(w[1]) || w[1] == '.'));
+
+    private static string Plain(double number) => SpiceText.Number(number);
 
     private static string OffBoard(string net) => PadPlan.Import.NetNames.IsGround(net) ? LayoutNets.Plane : SimulationOnly + net;
 
     // A part with no element line (an own-format netlist): R, C and L by their values; others as a comment naming their leads.
-    private static string FromPart(Project project, Part part, LayoutNets nets)
+    private static DeckEntry FromPart(Project project, Part part, LayoutNets nets)
     {
-        var nodes = string.Join(" ", part.Pins.Select(p => nets.NodeOf(part.Ref, p.Pin)));
         var letter = char.ToUpperInvariant(part.Ref[0]);
-        // SPICE would read the IEC code 4k7 as 4k: write the plain number
-        return letter is 'R' or 'C' or 'L' && part.Pins.Count == 2 && ComponentValue.TryParse(part.Value, ValueSyntax.SI, out var value, out _) && value.Number > 0
-            ? $"{part.Ref} {nodes} {value.Number.ToString("R", CultureInfo.InvariantCulture)}"
-            : $"* no SPICE line known for {part.Ref} ({Line(part.Value)}, {project.FootprintOf(part).Name}), leads {string.Join(" ", part.Pins.Select(p => $"{p.Pin}={nets.NodeOf(part.Ref, p.Pin)}"))}";
+        return letter is 'R' or 'C' or 'L' && part.Pins.Count == 2 && SpiceText.IsElementName(part.Ref) && ComponentValue.TryParse(part.Value, ValueSyntax.SI, out var value, out _) && value.Number > 0
+            ? new DeckElement(part.Ref, part.Pins.Select(p => nets.NodeOf(part.Ref, p.Pin)), [Plain(value.Number)])
+            : new DeckComment($"no SPICE line known for {part.Ref} ({part.Value}, {project.FootprintOf(part).Name}), leads {string.Join(" ", part.Pins.Select(p => $"{p.Pin}={nets.NodeOf(part.Ref, p.Pin)}"))}");
     }
-
-    private static string Line(string text) => text.ReplaceLineEndings(" ");
 }

@@ -1,7 +1,7 @@
 namespace PadPlan.Planning;
 
 /// <summary>The adaptive cooling schedule and move-range limiter of VPR (Betz and Rose, 1997): the acceptance rate of the last temperature sets how fast to cool and how far moves may reach; the run stops when it has converged.</summary>
-internal sealed class AnnealSchedule(double startTemperature, double maxRange, double startRange)
+internal sealed class AnnealSchedule(double startTemperature, double maxRange, double startRange, double middleCooling = PlacerLimits.MiddleCooling)
 {
     private readonly double _maxRange = maxRange;
     private double _lastTotal = double.NaN;
@@ -14,12 +14,12 @@ internal sealed class AnnealSchedule(double startTemperature, double maxRange, d
     public int Step { get; private set; }
     public double Acceptance { get; private set; } = 1;
 
-    /// <summary>Cools after one temperature's moves. Cooling factors are VPR's (but 0.9 in the middle band, see docs/placement.md): slow in the productive middle, fast when nearly everything or nearly nothing is accepted.</summary>
+    /// <summary>Cools after one temperature's moves. Cooling factors are VPR's (but 0.9 in the middle band on larger circuits, see docs/placement.md): slow in the productive middle, fast when nearly everything or nearly nothing is accepted.</summary>
     /// <param name="acceptance">Share of the last temperature's moves that were kept.</param>
     /// <param name="total">Annealing cost (soft cost plus weighted violations) after the last temperature.</param>
     public void Update(double acceptance, double total)
     {
-        var alpha = acceptance > 0.96 ? 0.5 : acceptance > 0.8 ? 0.9 : acceptance > 0.15 ? PlacerLimits.MiddleCooling : 0.8;
+        var alpha = acceptance > 0.96 ? 0.5 : acceptance > 0.8 ? 0.9 : acceptance > 0.15 ? middleCooling : 0.8;
         Temperature *= alpha;
         Range = Math.Clamp(Range * (1 - PlacerLimits.TargetAcceptance + acceptance), PlacerLimits.MinRange, _maxRange);
         Step++;

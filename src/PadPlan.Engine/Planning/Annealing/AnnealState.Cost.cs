@@ -27,7 +27,7 @@ internal sealed partial class AnnealState
     }
 
     /// <summary>Cost of one net: weighted lead lengths to the islands they are given (nearest first, within capacity) and the jumpers joining its islands.</summary>
-    private void EvalNet(int n, int[] assign, double[] runBox, out double cost, out double viol)
+    private void EvalNet(int n, int[] assign, double[] lx, double[] ly, double[] runBox, out double cost, out double viol)
     {
         var net = _nets[n];
         var isl = net.Islands;
@@ -47,14 +47,17 @@ internal sealed partial class AnnealState
             if (k >= 0) _use[k]++;
         }
         var free = net.FreeLeads;
+        foreach (var l in free) lx[l] = ly[l] = double.NaN;
+        var longest = 0.0;
         if (count == 1)
         {
             for (var a = 0; a < free.Length; a++)
             {
                 var l = free[a];
-                var len = Land(l, isl[0], out var ax, out var ay, out var v);
+                var len = Land(l, isl[0], out lx[l], out ly[l], out var v);
                 cost += LeadCost(l, len);
-                viol += v + RunThroughBodies(l, ax, ay, runBox, box);
+                longest = Math.Max(longest, len);
+                viol += v + RunThroughBodies(l, lx[l], ly[l], runBox, box);
                 assign[l] = isl[0];
                 _use[0]++;
             }
@@ -67,10 +70,8 @@ internal sealed partial class AnnealState
                 _taken[a] = false;
                 for (var k = 0; k < count; k++)
                 {
-                    var len = Land(free[a], isl[k], out var ax, out var ay, out var v);
                     var id = a * count + k;
-                    _pairAx[id] = ax;
-                    _pairAy[id] = ay;
+                    var len = Land(free[a], isl[k], out _pairAx[id], out _pairAy[id], out var v);
                     _pairLen[id] = len;
                     _pairViol[id] = v;
                     _pairKey[m] = len + 1000 * v; // an island within reach always beats one out of reach
@@ -91,12 +92,15 @@ internal sealed partial class AnnealState
                 placed++;
                 var l = free[a];
                 assign[l] = isl[k];
+                (lx[l], ly[l]) = (_pairAx[id], _pairAy[id]);
                 cost += LeadCost(l, _pairLen[id]);
+                longest = Math.Max(longest, _pairLen[id]);
                 viol += _pairViol[id] + RunThroughBodies(l, _pairAx[id], _pairAy[id], runBox, box);
             }
             viol += 5.0 * (free.Length - placed);
             cost += _w.Jumper * JumperLength(isl);
         }
+        if (net.Net.Class == NetClass.Rf) cost += _w.RfLongestLead * longest;
         for (var k = 0; k < count; k++)
         {
             var over = _use[k] - _islands[isl[k]].Capacity;
@@ -313,7 +317,7 @@ internal sealed partial class AnnealState
     public double ViolationOf(int i)
     {
         EvalUnary(i, out _, out var v);
-        v += PairsOf(i, -1);
+        v += PairsOf(i, -1) + CrossingOf(i);
         foreach (var n in _items[i].Nets) v += _netViol[n];
         return v;
     }

@@ -42,6 +42,9 @@ internal sealed partial class AnnealState
         _soft = 0;
         viol += PairsOf(a, b);
         cost += _soft;
+        CollectChanged();
+        _crossBefore = CrossingOfChanged(_lx, _ly);
+        viol += _crossBefore;
         _beforeCost = cost;
         _beforeViol = viol;
     }
@@ -92,7 +95,7 @@ internal sealed partial class AnnealState
         for (var k = 0; k < _affectedCount; k++)
         {
             var n = _affected[k];
-            EvalNet(n, _leadIslandNew, _runBoxNew, out _netCostNew[n], out _netViolNew[n]);
+            EvalNet(n, _leadIslandNew, _lxNew, _lyNew, _runBoxNew, out _netCostNew[n], out _netViolNew[n]);
             cost += _netCostNew[n];
             viol += _netViolNew[n];
         }
@@ -108,6 +111,12 @@ internal sealed partial class AnnealState
         _soft = 0;
         viol += PairsOf(_ta, _tb);
         cost += _soft;
+        for (var i = 0; i < _changedCount; i++)
+        {
+            var l = _changed[i];
+            if (_leads[l].Ground || _leads[l].OwnIsland >= 0) OwnLanding(l, _lxNew, _lyNew);
+        }
+        viol += CrossingOfChanged(_lxNew, _lyNew);
         DeltaCost = cost - _beforeCost;
         DeltaViolation = viol - _beforeViol;
     }
@@ -123,6 +132,12 @@ internal sealed partial class AnnealState
             Array.Copy(_runBoxNew, 4 * n, _runBox, 4 * n, 4);
             MarkNet(n);
             foreach (var l in _nets[n].FreeLeads) _leadIsland[l] = _leadIslandNew[l];
+        }
+        for (var i = 0; i < _changedCount; i++)
+        {
+            var l = _changed[i];
+            (_lx[l], _ly[l]) = (_lxNew[l], _lyNew[l]);
+            RegisterLead(l);
         }
         _unaryCost[_ta] = _uaCost;
         _unaryViol[_ta] = _uaViol;

@@ -97,6 +97,7 @@ internal sealed partial class AnnealState
         _mstIn = new bool[maxIslands];
         _taken = new bool[_nets.Select(x => x.FreeLeads.Length).DefaultIfEmpty(1).Max() + 1];
         BuildGrid();
+        BuildCrossing();
         for (var i = 0; i < n; i++)
         {
             var item = _items[i];
@@ -144,11 +145,12 @@ internal sealed partial class AnnealState
         _crowdedCount = 0;
         for (var n = 0; n < _nets.Length; n++)
         {
-            EvalNet(n, _leadIsland, _runBox, out _netCost[n], out _netViol[n]);
+            EvalNet(n, _leadIsland, _lx, _ly, _runBox, out _netCost[n], out _netViol[n]);
             MarkNet(n);
             cost += _netCost[n];
             viol += _netViol[n];
         }
+        viol += RecomputeCrossing();
         for (var i = 0; i < _items.Length; i++)
         {
             EvalUnary(i, out _unaryCost[i], out _unaryViol[i]);

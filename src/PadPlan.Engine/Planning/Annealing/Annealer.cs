@@ -18,7 +18,9 @@ internal sealed class Annealer
         var items = state.Problem.Items;
         _parts = [.. items.Where(i => !i.Fixed && i.IsPart).Select(i => i.Index)];
         _pads = [.. items.Where(i => !i.Fixed && !i.IsPart).Select(i => i.Index)];
-        _grounded = [.. _parts.Where(i => items[i].GroundLeads.Length > 0)];
+        // A held part keeps its place, but where its ground leads meet the plane may still change: the annealer keeps them off the
+        // new pads around it (a swap or --keep-existing). With nothing held this is the parts' own list, so layouts stay the same.
+        _grounded = [.. items.Where(i => i.IsPart && i.GroundLeads.Length > 0).Select(i => i.Index)];
         var table = new List<(MoveKind, double)>();
         if (_parts.Length > 0) table.AddRange([(MoveKind.ShiftPart, 0.3), (MoveKind.TurnPart, 0.08), (MoveKind.PartToPads, 0.1)]);
         if (_parts.Length > 1) table.Add((MoveKind.SwapParts, 0.07));
@@ -49,6 +51,18 @@ internal sealed class Annealer
     {
         _startCell = SpringLayout.Place(_s, _parts, _rng);
         PadsToLeads();
+    }
+
+    /// <summary>
+    /// Starts from a finished layout (the best of the runs so far) to anneal it again cool and close by, as after the spring
+    /// start: at one standard deviation of the cost change of moves within half a cell, with a move range of two cells (a cell
+    /// being the spring start's share of area per part), so neighbours can trade places and the layout can leave its local minimum.
+    /// </summary>
+    public void Resume(AnnealState from)
+    {
+        _s.CopyFrom(from);
+        var p = _s.Problem;
+        _startCell = Math.Sqrt(PlacerLimits.SpringSpreadArea * p.RawArea / Math.Max(1, _parts.Length));
     }
 
     /// <summary>Movable items scattered over the region; pads then sent to the middle of their nets' leads.</summary>
@@ -94,7 +108,8 @@ internal sealed class Annealer
         var start = _startCell > 0
             ? PlacerLimits.SpringStartSigmas * CostChangeSpread(perTemperature, PlacerLimits.SpringProbeCells * _startCell, softOnly: true)
             : PlacerLimits.StartTemperatureSigmas * CostChangeSpread(perTemperature, startRange, softOnly: false);
-        var schedule = new AnnealSchedule(start, maxRange, startRange);
+        var steady = _s.Problem.Project.Parts.Count <= PlacerSettings.SteadyCircuit;
+        var schedule = new AnnealSchedule(start, maxRange, startRange, steady ? PlacerLimits.SteadyCooling : PlacerLimits.MiddleCooling);
         var nets = Math.Max(1, _s.Problem.Nets.Length + _grounded.Length);
         while (!schedule.Done(_s.Cost, _s.Violation, nets))
         {

@@ -17,7 +17,7 @@ internal sealed class PlacementProblem
     public required RuleSettings Rules;
     public ValueList<Keepout> Keepouts => Project.Board.Keepouts;
 
-    /// <summary>Sum of body and pad areas: the floor under any used area (mm^2).</summary>
+    /// <summary>Sum of body and pad areas: the floor under any used area (mm²).</summary>
     public double RawArea
     {
         get

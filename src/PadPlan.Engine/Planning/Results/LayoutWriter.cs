@@ -11,6 +11,8 @@ internal static class LayoutWriter
         var stock = p.Project.Toolkit.StockThickness;
         var pads = new List<Pad>();
         var placements = new List<Placement>();
+        var made = MadeIslands(s);
+        var ids = Ids(s, made);
         foreach (var item in p.Items)
         {
             var i = item.Index;
@@ -18,21 +20,36 @@ internal static class LayoutWriter
             if (item.KeptPad is not null) { pads.Add(item.KeptPad); continue; }
             if (item.Pad is { } planned)
             {
+                if (!made[item.Islands[0]]) continue;
                 var island = p.Islands[item.Islands[0]];
                 pads.Add(planned.Shape == PlannedShape.Round
-                    ? new RoundPad(island.Id, planned.Net, at, planned.Width, stock)
+                    ? new RoundPad(ids[item.Islands[0]], planned.Net, at, planned.Width, stock)
                     : s.Rot[i] == 1 && item.CanTurn
-                        ? new RectPad(island.Id, planned.Net, at, planned.Height, planned.Width, stock)
-                        : new RectPad(island.Id, planned.Net, at, planned.Width, planned.Height, stock));
+                        ? new RectPad(ids[item.Islands[0]], planned.Net, at, planned.Height, planned.Width, stock)
+                        : new RectPad(ids[item.Islands[0]], planned.Net, at, planned.Width, planned.Height, stock));
                 continue;
             }
             pads.AddRange(Strips(s, item, at));
-            placements.Add(new Placement(item.Part!.Ref, at, (Rotation)(s.Rot[i] * 90), Landings(s, item, shiftX, shiftY)));
+            placements.Add(new Placement(item.Part!.Ref, at, (Rotation)(s.Rot[i] * 90), Landings(s, item, ids, shiftX, shiftY)));
         }
-        return new Layout(pads.ToValueList(), placements.ToValueList(), Jumpers(s).ToValueList());
+        return new Layout(pads.ToValueList(), placements.ToValueList(), Jumpers(s, made, ids).ToValueList());
     }
 
-    private static ValueList<LeadLanding> Landings(AnnealState s, ProblemItem item, double shiftX, double shiftY)
+    /// <summary>
+    /// The islands the layout makes: every strip segment and kept pad, and each planned pad that a lead lands on. A planned
+    /// pad the run left with no lead (its net's leads all found room on nearer pads) would be reached only by a wire link
+    /// and join nothing, so it is not made.
+    /// </summary>
+    private static bool[] MadeIslands(AnnealState s)
+    {
+        var p = s.Problem;
+        var made = p.Islands.Select(island => p.Items[island.Item].Pad is null).ToArray();
+        for (var l = 0; l < p.Leads.Length; l++)
+            if (!p.Leads[l].Ground && p.Leads[l].Net >= 0 && s.IslandOf(l) is var island and >= 0) made[island] = true;
+        return made;
+    }
+
+    private static ValueList<LeadLanding> Landings(AnnealState s, ProblemItem item, string[] ids, double shiftX, double shiftY)
     {
         var p = s.Problem;
         var landings = new List<LeadLanding>();
@@ -55,7 +72,7 @@ internal static class LayoutWriter
             {
                 var island = s.IslandOf(l);
                 s.Land(l, island, out x, out y, out _);
-                pad = p.Islands[island].Id;
+                pad = ids[island];
             }
             landings.Add(new LeadLanding(lead.Pin, pad, new Point(R(x + shiftX), R(y + shiftY))));
         }
@@ -82,14 +99,30 @@ internal static class LayoutWriter
         }
     }
 
-    /// <summary>For every net on several islands, the shortest tree of straight jumpers between them (Prim, from the first island).</summary>
-    private static IEnumerable<Jumper> Jumpers(AnnealState s)
+    /// <summary>The id each island is written with: planned pads numbered again in order over the pads made (as the problem
+    /// builder numbered them, skipping the ids of strips and kept pads), so a pad not made leaves no gap.</summary>
+    private static string[] Ids(AnnealState s, bool[] made)
+    {
+        var p = s.Problem;
+        var used = new HashSet<string>(p.Islands.Where(i => p.Items[i.Item].Pad is null).Select(i => i.Id), StringComparer.Ordinal);
+        var number = 0;
+        return p.Islands.Select((island, k) =>
+        {
+            if (p.Items[island.Item].Pad is null || !made[k]) return island.Id;
+            string id;
+            do id = GeneratedIds.Pad(++number); while (!used.Add(id));
+            return id;
+        }).ToArray();
+    }
+
+    /// <summary>For every net on several made islands, the shortest tree of straight jumpers between them (Prim, from the first island).</summary>
+    private static IEnumerable<Jumper> Jumpers(AnnealState s, bool[] made, string[] ids)
     {
         var p = s.Problem;
         var count = 0;
         foreach (var net in p.Nets)
         {
-            var isl = net.Islands;
+            var isl = net.Islands.Where(i => made[i]).ToArray();
             if (isl.Length < 2) continue;
             var inTree = new bool[isl.Length];
             inTree[0] = true;
@@ -109,7 +142,7 @@ internal static class LayoutWriter
                     }
                 }
                 inTree[best.To] = true;
-                yield return new Jumper(GeneratedIds.Strap(++count), p.Islands[isl[best.From]].Id, p.Islands[isl[best.To]].Id);
+                yield return new Jumper(GeneratedIds.Jumper(++count), ids[isl[best.From]], ids[isl[best.To]]);
             }
         }
     }

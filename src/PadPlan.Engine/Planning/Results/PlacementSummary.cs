@@ -27,15 +27,19 @@ public sealed record PlacementSummary(
     int Seed,
     Effort Effort)
 {
+    /// <summary>The longest lead on an RF net, 0 when no net is marked RF.</summary>
+    public double LongestRfLead { get; init; }
+    public string LongestRfLeadName { get; init; } = "-";
+
     /// <summary>The summary as lines for the console.</summary>
     public IEnumerable<string> Lines()
     {
         var c = CultureInfo.InvariantCulture;
         yield return string.Create(c, $"board: {BoardWidth:0.##} x {BoardHeight:0.##} mm{(BoardChosen ? " (chosen by the placer; written into the project)" : "")}");
-        yield return string.Create(c, $"area used: {UsedArea:0} mm^2 ({100 * UsedArea / (BoardWidth * BoardHeight):0}% of the board)");
+        yield return string.Create(c, $"area used: {UsedArea:0} mm² ({100 * UsedArea / (BoardWidth * BoardHeight):0}% of the board)");
         yield return $"pads: {Pads} cut or punched{(Strips > 0 ? $", {Strips} scored strips with {Segments} segments" : "")}";
         foreach (var line in PadsBySize) yield return "  " + line;
-        yield return string.Create(c, $"leads: total {TotalLead:0.0} mm, longest {LongestLead:0.0} mm ({LongestLeadName})");
+        yield return string.Create(c, $"leads: total {TotalLead:0.0} mm, longest {LongestLead:0.0} mm ({LongestLeadName}){(LongestRfLead > 0 ? $", longest on an RF net {LongestRfLead:0.0} mm ({LongestRfLeadName})" : "")}");
         yield return string.Create(c, $"jumpers: {Jumpers}{(Jumpers > 0 ? $", {JumperLength:0.0} mm of wire" : "")}");
         yield return string.Create(c, $"time: {Time.TotalSeconds:0.00} s, {Moves} moves in {Runs} run{(Runs == 1 ? "" : "s")}, seed {Seed}, effort {Effort.ToString().ToLowerInvariant()}");
     }
@@ -68,6 +72,10 @@ public sealed record PlacementSummary(
             figures.TotalLead, figures.LongestLead, figures.LongestLeadName, s.Problem.LeadLengthFloor,
             layout.Jumpers.Count, jumperLength,
             project.Board.Width!.Value, project.Board.Height!.Value, boardChosen,
-            extent.Width * extent.Height, s.Problem.RawArea, s.Cost, moves, runs, time, settings.Seed, settings.Effort);
+            extent.Width * extent.Height, s.Problem.RawArea, s.Cost, moves, runs, time, settings.Seed, settings.Effort)
+        {
+            LongestRfLead = figures.LongestRfLead,
+            LongestRfLeadName = figures.LongestRfLeadName,
+        };
     }
 }

@@ -9,6 +9,10 @@ public static class InputLimits
 {
     /// <summary>Largest JSON file read (bytes).</summary>
     public const int MaxFileBytes = 16 * 1024 * 1024;
+    /// <summary>Largest netlist read (bytes): a 500-part deck with its models is well under a megabyte.</summary>
+    public const int MaxNetlistBytes = 4 * 1024 * 1024;
+    /// <summary>Longest netlist line (characters), a SPICE line with its '+' continuations joined: what the project keeps of a line (<see cref="MaxNoteLength"/>) must hold it.</summary>
+    public const int MaxNetlistLineLength = MaxNoteLength;
 
     public const int MaxParts = 500;
     public const int MaxNets = 2000;

@@ -27,7 +27,7 @@ public static class Polygons
     {
         var best = double.PositiveInfinity;
         for (int i = 0, j = polygon.Count - 1; i < polygon.Count; j = i++)
-            best = Math.Min(best, SegmentDistance(polygon[j], polygon[i], p));
+            best = Math.Min(best, Segments.ToPoint(polygon[j], polygon[i], p));
         return best;
     }
 
@@ -58,9 +58,7 @@ public static class Polygons
         for (int i = 0, j = polygon.Count - 1; i < polygon.Count; j = i++)
         {
             if (ProperlyCross(polygon[j], polygon[i], a, b)) return true;
-            var gap = Math.Min(Math.Min(SegmentDistance(a, b, polygon[i]), SegmentDistance(a, b, polygon[j])),
-                Math.Min(SegmentDistance(polygon[j], polygon[i], a), SegmentDistance(polygon[j], polygon[i], b)));
-            if (gap < radius - Tolerance) return true;
+            if (Segments.Distance(polygon[j], polygon[i], a, b) < radius - Tolerance) return true;
         }
         return false;
     }
@@ -128,14 +126,6 @@ public static class Polygons
         var probes = new List<Point>(inner) { Centre(inner) };
         for (int i = 0, j = inner.Count - 1; i < inner.Count; j = i++) probes.Add((inner[i] + inner[j]) * 0.5);
         return probes.Any(p => Contains(outer, p) && DistanceToBoundary(outer, p) > Tolerance);
-    }
-
-    private static double SegmentDistance(Point a, Point b, Point p)
-    {
-        var ab = b - a;
-        var len2 = ab.X * ab.X + ab.Y * ab.Y;
-        var t = len2 < 1e-18 ? 0 : Math.Clamp(((p.X - a.X) * ab.X + (p.Y - a.Y) * ab.Y) / len2, 0, 1);
-        return p.DistanceTo(a + ab * t);
     }
 
     private static double Cross(Point u, Point v) => u.X * v.Y - u.Y * v.X;

@@ -1,0 +1,184 @@
+namespace PadPlan.Planning;
+
+/// <summary>
+/// Bare leads of two nets whose paths (exit to landing, plan view) cross or pass nearer than the lead gap: the placer's
+/// own version of the checker's lead-crossing rule. Each lead keeps its committed landing point; a move re-measures the
+/// pairs of the leads it can change (those of the moved items and the free leads of their nets), found through a grid
+/// of lead paths.
+/// </summary>
+internal sealed partial class AnnealState
+{
+    private const double LeadCellSize = 4.0;
+    private bool[] _crosses = [];
+    private double[] _lx = [], _ly = [], _lxNew = [], _lyNew = [];
+    private int[] _changed = [], _changedStamp = [], _leadSeen = [], _leadCellBox = [];
+    private int _changedCount, _leadSeenStamp, _leadCols, _leadRows;
+    private List<int>[] _leadCells = [];
+    private double _leadReach, _crossBefore;
+
+    private void BuildCrossing()
+    {
+        var n = _leads.Length;
+        _crosses = new bool[n];
+        var widest = 0.0;
+        for (var l = 0; l < n; l++)
+        {
+            var lead = _leads[l];
+            // the wires of a wire landing come in insulated; an unconnected lead is cut off short
+            _crosses[l] = !_items[lead.Item].IsLanding && (lead.Ground || lead.Net >= 0);
+            if (_crosses[l]) widest = Math.Max(widest, lead.Diameter);
+        }
+        _leadReach = _p.Rules.LeadGap + widest;
+        _lx = new double[n]; _ly = new double[n]; _lxNew = new double[n]; _lyNew = new double[n];
+        Array.Fill(_lx, double.NaN);
+        Array.Fill(_ly, double.NaN);
+        _changed = new int[n];
+        _changedStamp = new int[n];
+        _leadSeen = new int[n];
+        _leadCellBox = new int[4 * n];
+        Array.Fill(_leadCellBox, -1);
+        var r = _p.Region;
+        _leadCols = Math.Max(1, (int)Math.Ceiling((r.Width + 2 * GridApron) / LeadCellSize));
+        _leadRows = Math.Max(1, (int)Math.Ceiling((r.Height + 2 * GridApron) / LeadCellSize));
+        _leadCells = new List<int>[_leadCols * _leadRows];
+        for (var k = 0; k < _leadCells.Length; k++) _leadCells[k] = new List<int>(CellRoom);
+    }
+
+    private int LeadCol(double x) => Math.Clamp((int)Math.Floor((x - _gridX0) / LeadCellSize), 0, _leadCols - 1);
+    private int LeadRow(double y) => Math.Clamp((int)Math.Floor((y - _gridY0) / LeadCellSize), 0, _leadRows - 1);
+
+    /// <summary>The landing of a lead that is fixed by its own item: its ground landing or the strip segment beneath it.</summary>
+    private void OwnLanding(int l, double[] lx, double[] ly)
+    {
+        var lead = _leads[l];
+        if (lead.Ground) (lx[l], ly[l]) = (_gX[l], _gY[l]);
+        else if (lead.OwnIsland >= 0) { Land(l, lead.OwnIsland, out var ax, out var ay, out _); (lx[l], ly[l]) = (ax, ay); }
+    }
+
+    /// <summary>Files a lead's committed path under the lead cells it touches.</summary>
+    private void RegisterLead(int l)
+    {
+        var b = 4 * l;
+        int c0 = -1, r0 = -1, c1 = -1, r1 = -1;
+        if (!double.IsNaN(_lx[l]))
+        {
+            (c0, c1) = (LeadCol(Math.Min(_exX[l], _lx[l])), LeadCol(Math.Max(_exX[l], _lx[l])));
+            (r0, r1) = (LeadRow(Math.Min(_exY[l], _ly[l])), LeadRow(Math.Max(_exY[l], _ly[l])));
+        }
+        if (_leadCellBox[b] == c0 && _leadCellBox[b + 1] == r0 && _leadCellBox[b + 2] == c1 && _leadCellBox[b + 3] == r1) return;
+        if (_leadCellBox[b] >= 0)
+            for (var c = _leadCellBox[b]; c <= _leadCellBox[b + 2]; c++)
+                for (var r = _leadCellBox[b + 1]; r <= _leadCellBox[b + 3]; r++)
+                    _leadCells[r * _leadCols + c].Remove(l);
+        if (c0 >= 0)
+            for (var c = c0; c <= c1; c++)
+                for (var r = r0; r <= r1; r++)
+                    _leadCells[r * _leadCols + c].Add(l);
+        (_leadCellBox[b], _leadCellBox[b + 1], _leadCellBox[b + 2], _leadCellBox[b + 3]) = (c0, r0, c1, r1);
+    }
+
+    /// <summary>All lead-crossing violations from scratch, after the nets have set every free lead's landing.</summary>
+    private double RecomputeCrossing()
+    {
+        for (var l = 0; l < _leads.Length; l++)
+        {
+            if (!_crosses[l]) continue;
+            OwnLanding(l, _lx, _ly);
+            RegisterLead(l);
+        }
+        _stamp++;
+        var v = 0.0;
+        for (var p = 0; p < _leads.Length; p++)
+        {
+            if (!_crosses[p]) continue;
+            _changedStamp[p] = _stamp; // pairs are counted once: from the first lead of each
+            v += CrossingNear(p, _lx, _ly);
+        }
+        return v;
+    }
+
+    /// <summary>The crossing violations an item's leads take part in, for the legaliser's choice of what to move.</summary>
+    private double CrossingOf(int i)
+    {
+        _stamp++;
+        var v = 0.0;
+        foreach (var l in _items[i].Leads)
+            if (_crosses[l]) v += CrossingNear(l, _lx, _ly);
+        return v;
+    }
+
+    /// <summary>Collects the leads the open move can change: every lead of the moved items, and the free leads of their nets.</summary>
+    private void CollectChanged()
+    {
+        _changedCount = 0;
+        void Add(int l)
+        {
+            if (!_crosses[l] || _changedStamp[l] == _stamp) return;
+            _changedStamp[l] = _stamp;
+            _changed[_changedCount++] = l;
+        }
+        foreach (var l in _items[_ta].Leads) Add(l);
+        if (_tb >= 0) foreach (var l in _items[_tb].Leads) Add(l);
+        for (var k = 0; k < _affectedCount; k++)
+            foreach (var l in _nets[_affected[k]].FreeLeads) Add(l);
+    }
+
+    /// <summary>Violations of every pair with a changed lead, measured with the changed leads' landings in lx, ly.</summary>
+    private double CrossingOfChanged(double[] lx, double[] ly)
+    {
+        var v = 0.0;
+        for (var i = 0; i < _changedCount; i++)
+        {
+            var p = _changed[i];
+            v += CrossingNear(p, lx, ly);
+            for (var j = i + 1; j < _changedCount; j++) v += CrossPair(p, _changed[j], lx[p], ly[p], lx[_changed[j]], ly[_changed[j]]);
+        }
+        return v;
+    }
+
+    /// <summary>Violations between lead p (landing px, py) and every unchanged lead whose committed path is near.</summary>
+    private double CrossingNear(int p, double[] lx, double[] ly)
+    {
+        var (px, py) = (lx[p], ly[p]);
+        if (double.IsNaN(px)) return 0;
+        var reach = _leadReach + _slack;
+        var c0 = LeadCol(Math.Min(_exX[p], px) - reach);
+        var c1 = LeadCol(Math.Max(_exX[p], px) + reach);
+        var r0 = LeadRow(Math.Min(_exY[p], py) - reach);
+        var r1 = LeadRow(Math.Max(_exY[p], py) + reach);
+        _leadSeenStamp++;
+        var v = 0.0;
+        for (var c = c0; c <= c1; c++)
+            for (var r = r0; r <= r1; r++)
+            {
+                var cell = _leadCells[r * _leadCols + c];
+                for (var k = 0; k < cell.Count; k++)
+                {
+                    var q = cell[k];
+                    if (_leadSeen[q] == _leadSeenStamp || _changedStamp[q] == _stamp) continue;
+                    _leadSeen[q] = _leadSeenStamp;
+                    v += CrossPair(p, q, px, py, _lx[q], _ly[q]);
+                }
+            }
+        return v;
+    }
+
+    /// <summary>How much nearer than allowed two lead paths come (mm): the lead gap between two parts; within one part at most half the gap its package leaves at the body.</summary>
+    private double CrossPair(int p, int q, double px, double py, double qx, double qy)
+    {
+        var (a, b) = (_leads[p], _leads[q]);
+        if (double.IsNaN(px) || double.IsNaN(qx) || (a.Ground && b.Ground) || (a.Net >= 0 && a.Net == b.Net)) return 0;
+        if (a.OwnIsland >= 0 && b.OwnIsland >= 0 && a.Item == b.Item) return 0; // pins over one part's strip: fixed geometry
+        var radii = (a.Diameter + b.Diameter) / 2;
+        var gap = _p.Rules.LeadGap;
+        if (a.Item == b.Item)
+        {
+            var ex = _exX[p] - _exX[q];
+            var ey = _exY[p] - _exY[q];
+            gap = Math.Min(gap, (Math.Sqrt(ex * ex + ey * ey) - radii) / 2);
+        }
+        var need = radii + gap + PlacerLimits.Safety + _slack;
+        var d = Geometry.SegmentGap(_exX[p], _exY[p], px, py, _exX[q], _exY[q], qx, qy, need);
+        return d < need ? need - d : 0;
+    }
+}
