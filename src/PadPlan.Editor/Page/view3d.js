@@ -1,6 +1,6 @@
 // PadPlan bench, the 3D view: the same glTF model `padplan export --model` writes, fetched from this editor and drawn
 // with three.js (vendored beside this file with its licence; nothing is fetched from outside). Drag to turn the board,
-// use the wheel to zoom, click a part, pad or wire link to choose it: the choice is shared with the flat bench through
+// use the wheel to zoom, click a part, pad or jumper to choose it: the choice is shared with the flat bench through
 // two events, "bench:changed" (from editor.js: a new plan or choice) and "bench:choose" (to editor.js).
 "use strict";
 
