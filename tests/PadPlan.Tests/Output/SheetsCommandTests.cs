@@ -22,7 +22,7 @@ public class SheetsCommandTests
         using var png = RenderedImage.FromPng(File.ReadAllBytes(Path.Combine(dir, "template-1.png")));
         Assert.Equal(331, png.Bitmap.Width);
         // it says what it wrote: pages of each kind, counted against the files, and the assembly view's scale as printed on it
-        Assert.Contains("5 pages: 1 template, 1 assembly (scale 3 : 1), 3 report", result.Err);
+        Assert.Contains("6 pages: 1 template, 1 assembly (scale 3 : 1), 4 report", result.Err);
         Assert.Contains("scale 3 : 1", File.ReadAllText(Path.Combine(dir, "assembly-1.svg")));
     }
 
