@@ -8,13 +8,15 @@ namespace PadPlan.Planning;
 /// </summary>
 internal sealed partial class AnnealState
 {
+    /// <summary>Smallest cell of the lead-path grid (mm); a region sized by large numbers in the file gets larger cells, not more (<see cref="MaxCellsPerSide"/>).</summary>
     private const double LeadCellSize = 4.0;
     private bool[] _crosses = [];
     private double[] _lx = [], _ly = [], _lxNew = [], _lyNew = [];
     private int[] _changed = [], _changedStamp = [], _leadSeen = [], _leadCellBox = [];
     private int _changedCount, _leadSeenStamp, _leadCols, _leadRows;
     private List<int>[] _leadCells = [];
-    private double _leadReach, _crossBefore;
+    private double _leadReach, _crossBefore, _leadCellSize = LeadCellSize;
+    private readonly List<int> _wideLeads = [];
 
     private void BuildCrossing()
     {
@@ -38,14 +40,18 @@ internal sealed partial class AnnealState
         _leadCellBox = new int[4 * n];
         Array.Fill(_leadCellBox, -1);
         var r = _p.Region;
-        _leadCols = Math.Max(1, (int)Math.Ceiling((r.Width + 2 * GridApron) / LeadCellSize));
-        _leadRows = Math.Max(1, (int)Math.Ceiling((r.Height + 2 * GridApron) / LeadCellSize));
+        var (width, height) = (r.Width + 2 * GridApron, r.Height + 2 * GridApron);
+        _leadCellSize = Math.Max(LeadCellSize, Math.Max(width, height) / MaxCellsPerSide);
+        _leadCols = Math.Clamp((int)Math.Ceiling(width / _leadCellSize), 1, MaxCellsPerSide);
+        _leadRows = Math.Clamp((int)Math.Ceiling(height / _leadCellSize), 1, MaxCellsPerSide);
+        _wideLeads.Clear();
+        _wideLeads.Capacity = n;
         _leadCells = new List<int>[_leadCols * _leadRows];
         for (var k = 0; k < _leadCells.Length; k++) _leadCells[k] = new List<int>(CellRoom);
     }
 
-    private int LeadCol(double x) => Math.Clamp((int)Math.Floor((x - _gridX0) / LeadCellSize), 0, _leadCols - 1);
-    private int LeadRow(double y) => Math.Clamp((int)Math.Floor((y - _gridY0) / LeadCellSize), 0, _leadRows - 1);
+    private int LeadCol(double x) => Math.Clamp((int)Math.Floor((x - _gridX0) / _leadCellSize), 0, _leadCols - 1);
+    private int LeadRow(double y) => Math.Clamp((int)Math.Floor((y - _gridY0) / _leadCellSize), 0, _leadRows - 1);
 
     /// <summary>The landing of a lead that is fixed by its own item: its ground landing, or its exit over the strip segment beneath it.</summary>
     private void OwnLanding(int l, double[] lx, double[] ly)
@@ -55,7 +61,10 @@ internal sealed partial class AnnealState
         else if (lead.OwnIsland >= 0) (lx[l], ly[l]) = (_exX[l], _exY[l]); // a pin over its strip segment lands where it leaves the body, as written
     }
 
-    /// <summary>Files a lead's committed path under the lead cells it touches.</summary>
+    /// <summary>
+    /// Files a lead's committed path under the lead cells it touches; a path over more than <see cref="MaxCellsPerItem"/>
+    /// cells (a lead of a huge body) goes on the wide list that every search reads, so one move never walks thousands of cells.
+    /// </summary>
     private void RegisterLead(int l)
     {
         var b = 4 * l;
@@ -64,13 +73,16 @@ internal sealed partial class AnnealState
         {
             (c0, c1) = (LeadCol(Math.Min(_exX[l], _lx[l])), LeadCol(Math.Max(_exX[l], _lx[l])));
             (r0, r1) = (LeadRow(Math.Min(_exY[l], _ly[l])), LeadRow(Math.Max(_exY[l], _ly[l])));
+            if ((c1 - c0 + 1) * (r1 - r0 + 1) > MaxCellsPerItem) c0 = r0 = c1 = r1 = WideMark;
         }
         if (_leadCellBox[b] == c0 && _leadCellBox[b + 1] == r0 && _leadCellBox[b + 2] == c1 && _leadCellBox[b + 3] == r1) return;
-        if (_leadCellBox[b] >= 0)
+        if (_leadCellBox[b] == WideMark) _wideLeads.Remove(l);
+        else if (_leadCellBox[b] >= 0)
             for (var c = _leadCellBox[b]; c <= _leadCellBox[b + 2]; c++)
                 for (var r = _leadCellBox[b + 1]; r <= _leadCellBox[b + 3]; r++)
                     _leadCells[r * _leadCols + c].Remove(l);
-        if (c0 >= 0)
+        if (c0 == WideMark) _wideLeads.Add(l);
+        else if (c0 >= 0)
             for (var c = c0; c <= c1; c++)
                 for (var r = r0; r <= r1; r++)
                     _leadCells[r * _leadCols + c].Add(l);
@@ -136,7 +148,7 @@ internal sealed partial class AnnealState
         return v;
     }
 
-    /// <summary>Violations between lead p (landing px, py) and every unchanged lead whose committed path is near.</summary>
+    /// <summary>Violations between lead p (landing px, py) and every unchanged lead whose committed path is near (a search over more than <see cref="MaxCellsPerItem"/> cells reads every lead instead).</summary>
     private double CrossingNear(int p, double[] lx, double[] ly)
     {
         var (px, py) = (lx[p], ly[p]);
@@ -148,17 +160,23 @@ internal sealed partial class AnnealState
         var r1 = LeadRow(Math.Max(_exY[p], py) + reach);
         _leadSeenStamp++;
         var v = 0.0;
+        double Near(int q)
+        {
+            if (_leadSeen[q] == _leadSeenStamp || _changedStamp[q] == _stamp || !_crosses[q]) return 0;
+            _leadSeen[q] = _leadSeenStamp;
+            return CrossPair(p, q, px, py, _lx[q], _ly[q]);
+        }
+        if ((c1 - c0 + 1) * (r1 - r0 + 1) > MaxCellsPerItem)
+        {
+            for (var q = 0; q < _leads.Length; q++) v += Near(q);
+            return v;
+        }
+        for (var k = 0; k < _wideLeads.Count; k++) v += Near(_wideLeads[k]);
         for (var c = c0; c <= c1; c++)
             for (var r = r0; r <= r1; r++)
             {
                 var cell = _leadCells[r * _leadCols + c];
-                for (var k = 0; k < cell.Count; k++)
-                {
-                    var q = cell[k];
-                    if (_leadSeen[q] == _leadSeenStamp || _changedStamp[q] == _stamp) continue;
-                    _leadSeen[q] = _leadSeenStamp;
-                    v += CrossPair(p, q, px, py, _lx[q], _ly[q]);
-                }
+                for (var k = 0; k < cell.Count; k++) v += Near(cell[k]);
             }
         return v;
     }
