@@ -3,7 +3,7 @@ using Microsoft.Playwright;
 namespace PadPlan.Editor.Tests;
 
 /// <summary>One headless Debian chromium for all browser tests of a class (Playwright cannot download its own browser here).</summary>
-public sealed class BrowserFixture : IAsyncLifetime
+public class BrowserFixture : IAsyncLifetime
 {
     private IPlaywright? _playwright;
     private IBrowser? _browser;
@@ -19,13 +19,16 @@ public sealed class BrowserFixture : IAsyncLifetime
         {
             ExecutablePath = ChromiumFactAttribute.ChromiumPath,
             Headless = true,
-            Args =
-            [
-                "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking",
-                "--disable-component-update", "--disable-sync",
-            ],
+            Args = Args,
         });
     }
+
+    /// <summary>Chromium's command-line switches for this fixture's browser.</summary>
+    protected virtual string[] Args =>
+    [
+        "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking",
+        "--disable-component-update", "--disable-sync",
+    ];
 
     public async Task DisposeAsync()
     {

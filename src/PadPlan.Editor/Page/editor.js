@@ -105,7 +105,12 @@ function show(plan) {
   draw();
   controls();
   $("status").textContent = `revision ${plan.revision}; checked in ${plan.checkMilliseconds} ms; ${plan.errors} errors, ${plan.warnings} warnings`;
+  told();
 }
+
+// The 3D view (view3d.js) hears of every new plan and choice, and may choose in turn.
+function told() { document.dispatchEvent(new CustomEvent("bench:changed", { detail: { plan: state.plan, chosen: state.chosen } })); }
+document.addEventListener("bench:choose", e => choose(e.detail));
 
 function exists(c) {
   const g = state.plan.geometry;
@@ -447,6 +452,7 @@ function choose(c) {
   state.chosen = c;
   controls();
   light();
+  told();
 }
 
 function setTool(t) {

@@ -13,6 +13,7 @@ using Microsoft.Extensions.Logging;
 using PadPlan.Editor.Edits;
 using PadPlan.Editor.Sessions;
 using PadPlan.Editor.View;
+using PadPlan.Model3D;
 using PadPlan.Planning;
 
 namespace PadPlan.Editor.Serving;
@@ -86,6 +87,7 @@ public sealed class EditorServer : IAsyncDisposable
             app.MapGet("/" + name, () => Results.Text(text, type));
         }
         app.MapGet("/api/plan", () => View());
+        app.MapGet("/api/model.glb", () => Model());
         app.MapPost("/api/edit", async (HttpRequest request) =>
         {
             var edit = await ReadJson<EditRequest>(request);
@@ -127,6 +129,14 @@ public sealed class EditorServer : IAsyncDisposable
         view.CanUndo = _session.CanUndo;
         view.CanRedo = _session.CanRedo;
         return Results.Json(view, Json);
+    }
+
+    /// <summary>The 3D model of the plan as it stands, as binary glTF: the same file `padplan export --model` writes.</summary>
+    private IResult Model()
+    {
+        var project = _session.Current;
+        if (project.Layout is null || project.Board.IsAuto) return Refused("the plan has no layout on a board of known size yet, so there is no 3D model.");
+        return Results.Bytes(GlbFile.Write(BoardModel.Of(project)), "model/gltf-binary");
     }
 
     /// <summary>

@@ -9,6 +9,10 @@ internal static class PageFiles
     {
         ["editor.js"] = "text/javascript; charset=utf-8",
         ["editor.css"] = "text/css; charset=utf-8",
+        ["view3d.js"] = "text/javascript; charset=utf-8",
+        // three.js r170 from the npm registry (package "three", build/three.module.min.js), MIT: its licence beside it.
+        ["three.module.min.js"] = "text/javascript; charset=utf-8",
+        ["three.LICENSE.txt"] = "text/plain; charset=utf-8",
     };
 
     public static string Read(string name)

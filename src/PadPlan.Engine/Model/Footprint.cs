@@ -73,7 +73,8 @@ public sealed record Rating(double? Volts = null, double? Watts = null, double? 
 /// <summary>A physical package: plan-view body, height, leads and pin orders.</summary>
 public sealed record Footprint
 {
-    public Footprint(string name, string family, string description, ValueList<Point> body, double height, ValueList<FootprintLead> leads, MountStyle mount, string source, ValueList<PinVariant>? variants = null, ValueList<FootprintMark>? marks = null)
+    public Footprint(string name, string family, string description, ValueList<Point> body, double height, ValueList<FootprintLead> leads, MountStyle mount, string source, ValueList<PinVariant>? variants = null, ValueList<FootprintMark>? marks = null,
+        BodyShape? shape = null, double? leadBend = null, string? outsideLead = null)
     {
         Name = Guard.Name(name, "footprint name");
         Family = family ?? "";
@@ -92,6 +93,16 @@ public sealed record Footprint
             if (v.Pins.Count != leads.Count)
                 throw new ArgumentException($"Footprint {name}: variant '{v.Name}' names {v.Pins.Count} pins for {leads.Count} leads.", nameof(variants));
         Marks = marks ?? ValueList<FootprintMark>.Empty;
+        Shape = shape ?? DefaultShape(mount);
+        LeadBend = leadBend is { } bend
+            ? (double.IsFinite(bend) && bend >= 0 && bend <= Height ? bend
+                : throw new ArgumentOutOfRangeException(nameof(leadBend), bend, $"Footprint {name}: the lead bend height must be from 0 to the body height ({Height} mm)."))
+            : DefaultLeadBend(Shape, Height);
+        if (outsideLead is not null && !leads.Any(l => string.Equals(l.Name, outsideLead, StringComparison.Ordinal)))
+            throw new ArgumentException($"Footprint {name}: the outside lead '{outsideLead}' is not one of its leads; use one of {string.Join(", ", leads.Select(l => l.Name))}.", nameof(outsideLead));
+        if (outsideLead is not null && mount != MountStyle.Upright)
+            throw new ArgumentException($"Footprint {name}: only an upright part has a lead running down the outside of its body.", nameof(outsideLead));
+        OutsideLead = outsideLead;
         foreach (var m in Marks)
             if (!leads.Any(l => string.Equals(l.Name, m.Lead, StringComparison.Ordinal)))
                 throw new ArgumentException($"Footprint {name}: the {m.Kind.ToString().ToLowerInvariant()} mark names lead '{m.Lead}', which the footprint does not have; use one of {string.Join(", ", leads.Select(l => l.Name))}.", nameof(marks));
@@ -102,7 +113,14 @@ public sealed record Footprint
     public string Description { get; init; }
     /// <summary>Body outline in plan view, footprint coordinates (mm), part origin at (0,0).</summary>
     public ValueList<Point> Body { get; init; }
+    /// <summary>Height of the body's top above the surface the part stands on (the pad tops), mm.</summary>
     public double Height { get; init; }
+    /// <summary>The body's solid in the 3D model.</summary>
+    public BodyShape Shape { get; }
+    /// <summary>Height above the pad tops where the leads leave the body and bend toward their pads, mm: the lead axis of a lying part, the underside of a standing one.</summary>
+    public double LeadBend { get; }
+    /// <summary>For an upright part mounted like a hairpin: the lead that leaves the top of the body and runs down its outside; null otherwise.</summary>
+    public string? OutsideLead { get; }
     public ValueList<FootprintLead> Leads { get; init; }
     public MountStyle Mount { get; init; }
     /// <summary>Where the dimensions come from: a JEDEC outline, or "typical, common practice".</summary>
@@ -112,6 +130,21 @@ public sealed record Footprint
     public ValueList<FootprintMark> Marks { get; init; }
     /// <summary>The package's typical rating (voltage, power, forward current); a part's own rating overrides it.</summary>
     public Rating Rating { get; init; } = Rating.None;
+
+    /// <summary>Height of the body's underside above the pad tops, mm: a lying body is centred on its lead axis, any other sits on its lead bend.</summary>
+    public double BodyBottom => Shape == BodyShape.Lying ? Math.Max(0, 2 * LeadBend - Height) : LeadBend;
+
+    /// <summary>The shape a footprint without one is drawn as: its mount's usual body.</summary>
+    public static BodyShape DefaultShape(MountStyle mount) => mount switch
+    {
+        MountStyle.Axial => BodyShape.Lying,
+        MountStyle.Strip => BodyShape.Dip,
+        MountStyle.Landing => BodyShape.Wires,
+        _ => BodyShape.Box,
+    };
+
+    /// <summary>The lead bend height a footprint without one gets: the axis of a lying body, otherwise on the pad tops (the lowest a body can sit).</summary>
+    public static double DefaultLeadBend(BodyShape shape, double height) => shape == BodyShape.Lying ? height / 2 : 0;
 
     /// <summary>What builders are told wherever a footprint's figures are nominal.</summary>
     public const string NominalWarning = "typical size, check your part";

@@ -7,7 +7,7 @@ public sealed record RuleSettings
     public double PadGap { get; init; } = 1.0;
     /// <summary>Pad edge to a ground landing point (mm).</summary>
     public double GroundGap { get; init; } = 1.0;
-    /// <summary>Bare lead to bare lead of another net, surface to surface along their paths (mm).</summary>
+    /// <summary>Least room around a bare lead (mm), surface to surface: to a bare lead of another net along their paths, and to the underside of another part's body it passes under.</summary>
     public double LeadGap { get; init; } = 0.5;
     public double MaxLeadRf { get; init; } = 5.0;
     public double MaxLeadAudio { get; init; } = 15.0;

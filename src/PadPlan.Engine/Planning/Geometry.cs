@@ -48,6 +48,28 @@ internal static class Geometry
     }
 
     /// <summary>How deep two boxes (min/max corners) reach into each other's clearance zone; 0 when they keep the gap.</summary>
+    /// <summary>Length of the segment (x0,y0)-(x1,y1) inside the box (Liang-Barsky clipping); 0 when it misses.</summary>
+    public static double ClippedLength(double x0, double y0, double x1, double y1, double minX, double minY, double maxX, double maxY)
+    {
+        double t0 = 0, t1 = 1;
+        var (dx, dy) = (x1 - x0, y1 - y0);
+        if (!Clip(-dx, x0 - minX, ref t0, ref t1) || !Clip(dx, maxX - x0, ref t0, ref t1)
+            || !Clip(-dy, y0 - minY, ref t0, ref t1) || !Clip(dy, maxY - y0, ref t0, ref t1)) return 0;
+        var len = Math.Sqrt(dx * dx + dy * dy);
+        // A run that is only a point (the lead drops straight down) inside the box still counts: by how far it is inside.
+        if (len < 1e-9) return Math.Max(0, Math.Min(Math.Min(x0 - minX, maxX - x0), Math.Min(y0 - minY, maxY - y0)));
+        return (t1 - t0) * len;
+    }
+
+    private static bool Clip(double p, double q, ref double t0, ref double t1)
+    {
+        if (Math.Abs(p) < 1e-12) return q >= 0;
+        var t = q / p;
+        if (p < 0) { if (t > t1) return false; if (t > t0) t0 = t; }
+        else { if (t < t0) return false; if (t < t1) t1 = t; }
+        return true;
+    }
+
     public static double BoxIntrusion(double aMinX, double aMinY, double aMaxX, double aMaxY, double bMinX, double bMinY, double bMaxX, double bMaxY, double gap)
     {
         var ox = Math.Min(aMaxX, bMaxX) - Math.Max(aMinX, bMinX) + gap;

@@ -165,7 +165,9 @@ internal sealed partial class DtoReader(string file, byte[] text)
         }).ToValueList();
         var mount = Enum(Need(f.Mount, $"{path}.mount", "mount style"), $"{path}.mount", "mount style", MountStyle.Axial);
         var rating = Rating(f.RatedVoltage, f.RatedPower, f.RatedCurrent, path);
-        return Build(path, () => new Footprint(name, f.Family ?? family ?? "", f.Description ?? "", body, Need(f.Height, $"{path}.height", "body height"), leads, mount, f.Source ?? "", variants, marks) { Rating = rating });
+        BodyShape? shape = f.Shape is null ? null : Enum(f.Shape, $"{path}.shape", "body shape", BodyShape.Box);
+        return Build(path, () => new Footprint(name, f.Family ?? family ?? "", f.Description ?? "", body, Need(f.Height, $"{path}.height", "body height"), leads, mount, f.Source ?? "", variants, marks,
+            shape, f.LeadBend, f.OutsideLead) { Rating = rating });
     }
 
     public Layout Layout(LayoutDto l, string path)

@@ -121,6 +121,12 @@ public sealed class FootprintDto
     public double? RatedCurrent { get; set; }
     public string? Mount { get; set; }
     public double? Height { get; set; }
+    /// <summary>Body shape in the 3D model: lying, cylinder, disc, box, to92, dip, toroid, can, trimmer, wires; default from the mount.</summary>
+    public string? Shape { get; set; }
+    /// <summary>Height above the pad tops where the leads leave the body, mm; default from the shape.</summary>
+    public double? LeadBend { get; set; }
+    /// <summary>Upright parts mounted like a hairpin: the lead that runs down the outside of the body.</summary>
+    public string? OutsideLead { get; set; }
     public string? Source { get; set; }
     /// <summary>Plan-view outline as [x, y] points in mm, part origin at (0, 0).</summary>
     public List<double[]>? Body { get; set; }

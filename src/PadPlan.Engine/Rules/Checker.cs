@@ -23,6 +23,7 @@ public static class Checker
             .Concat(LeadCheck.Run(ctx))
             .Concat(LeadCrossingCheck.Run(ctx))
             .Concat(PlacementCheck.Run(ctx))
+            .Concat(HeightCheck.Run(ctx))
             .Concat(ElectricalCheck.Run(ctx))
             .Concat(OperatingCheck.Run(project, options.Simulation))));
         return Report(findings, ParasiticEstimates.Run(ctx));

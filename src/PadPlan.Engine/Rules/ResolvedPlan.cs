@@ -56,6 +56,14 @@ public sealed class ResolvedPlan
     /// <summary>The net as the copper sees it: every ground net is the one plane, so all of them map to one name.</summary>
     public string? Canonical(string? net) => IsGround(net) ? GroundName : net;
 
+    /// <summary>The islands whose copper holds a point (or lies within <paramref name="tolerance"/> of it), deepest first; empty on the bare plane.</summary>
+    public IReadOnlyList<PadCopper> CopperAt(Point at, double tolerance) => Copper
+        .Select(c => (Copper: c, Distance: Shapes.CopperGeometry.SignedDistance(c.Island, at)))
+        .Where(x => x.Distance <= tolerance)
+        .OrderBy(x => x.Distance)
+        .Select(x => x.Copper)
+        .ToList();
+
     /// <summary>A pad or segment by id; null when the id names a whole strip or nothing.</summary>
     public PadCopper? CopperById(string id) => _copperById.GetValueOrDefault(id);
 

@@ -34,6 +34,7 @@ public static class RuleIds
     // Parts and board
     public const string BodyOverlap = "body-overlap";
     public const string BodyOverPad = "body-over-pad";
+    public const string LeadMeetsBody = "lead-meets-body";
     public const string BoardMargin = "board-margin";
     public const string Keepout = "keepout";
 
@@ -57,7 +58,7 @@ public static class RuleIds
         LayoutMissing, BoardSize, PartUnplaced, LeadUnplaced, SingleConnection,
         Open, Short, LeadWrongPad, LeadOffPad, GroundOnPad, PadShort, JumperShort, JumperEnd, LandingMismatch, PadUnused,
         PadGap, GroundGap, LeadEdge, LeadReach, LeadLength, PadCapacity, LeadCrossing,
-        BodyOverlap, BodyOverPad, BoardMargin, Keepout,
+        BodyOverlap, BodyOverPad, LeadMeetsBody, BoardMargin, Keepout,
         HvSpacing, HvCreepage, HvCaution, StripCurrent,
         OperatingPoint, CapReversed, CapVoltage, ResistorPower, DevicePower, ForwardCurrent,
     ];

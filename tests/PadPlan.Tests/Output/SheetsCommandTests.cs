@@ -15,13 +15,14 @@ public class SheetsCommandTests
         var result = CliRunner.Run("sheets", TestPaths.TinyBuffer, "-o", dir, "--date", "2025-03-01", "--dpi", "40");
         Assert.Equal(0, result.ExitCode);
         var names = Directory.GetFiles(dir).Select(Path.GetFileName).Where(n => n != OutputSet.ListName).Order().ToList();
-        // The report (cautions, check, cut list, the 100 x 160 mm stock drawn 1 : 1, BOM, build order, test plan) takes three pages for this board.
-        Assert.Equal(["assembly-1.png", "assembly-1.svg", "report-1.png", "report-1.svg", "report-2.png", "report-2.svg", "report-3.png", "report-3.svg", "sheets.pdf", "template-1.png", "template-1.svg"], names);
+        // The report (cautions, check, the picture of the finished board, cut list, the 100 x 160 mm stock drawn 1 : 1, BOM,
+        // build order, test plan) takes four pages for this board.
+        Assert.Equal(["assembly-1.png", "assembly-1.svg", "report-1.png", "report-1.svg", "report-2.png", "report-2.svg", "report-3.png", "report-3.svg", "report-4.png", "report-4.svg", "sheets.pdf", "template-1.png", "template-1.svg"], names);
         // 210 mm at 40 dpi = 330.7 px
         using var png = RenderedImage.FromPng(File.ReadAllBytes(Path.Combine(dir, "template-1.png")));
         Assert.Equal(331, png.Bitmap.Width);
         // it says what it wrote: pages of each kind, counted against the files, and the assembly view's scale as printed on it
-        Assert.Contains("5 pages: 1 template, 1 assembly (scale 3 : 1), 3 report", result.Err);
+        Assert.Contains("6 pages: 1 template, 1 assembly (scale 3 : 1), 4 report", result.Err);
         Assert.Contains("scale 3 : 1", File.ReadAllText(Path.Combine(dir, "assembly-1.svg")));
     }
 

@@ -182,8 +182,9 @@ public class FaultInjectionTests
     [Fact]
     public void Bodies_overlap()
     {
-        var report = Check(Tiny.MovePart("J2", 39, 18));
-        Expect(report, RuleIds.BodyOverlap, "C2", "J2");
+        // R3 slid onto R2: two resistors lying on the same pads meet along their length.
+        var report = Check(Tiny.MovePart("R3", 21, 27));
+        Expect(report, RuleIds.BodyOverlap, "R2", "R3");
     }
 
     [Fact]

@@ -29,6 +29,7 @@ public static class FootprintText
         sb.Append(CultureInfo.InvariantCulture, $"  family   {f.Family}\n");
         sb.Append(CultureInfo.InvariantCulture, $"  mount    {f.Mount.ToString().ToLowerInvariant()}\n");
         sb.Append(CultureInfo.InvariantCulture, $"  body     {Mm(w)} x {Mm(h)} mm in plan ({f.Body.Count}-point outline), {Mm(f.Height)} mm high{(f.IsNominal ? $" ({Footprint.NominalWarning})" : "")}\n");
+        sb.Append(CultureInfo.InvariantCulture, $"  shape    {f.Shape.ToString().ToLowerInvariant()}; leads leave the body {Mm(f.LeadBend)} mm up, its underside {Mm(f.BodyBottom)} mm up{(f.OutsideLead is { } o ? $"; lead {o} runs down the outside" : "")}\n");
         sb.Append(CultureInfo.InvariantCulture, $"  source   {f.Source}\n");
         sb.Append("  leads    name  exit x, y (mm)    diameter  reach min-max (mm)\n");
         foreach (var l in f.Leads)

@@ -30,6 +30,7 @@ internal static class ReportSheets
         {
             DrawCheck(flow, check);
         }
+        ModelPicture.Draw(flow, project);
         if (ImportSummaryTable.For(project) is { } imported) TableBlock.Draw(flow, imported);
         TableBlock.Draw(flow, LeadTable.For(project));
         if (tables.Count == 0)

@@ -28,6 +28,8 @@ internal sealed partial class AnnealState
         _affectedCount = 0;
         AddNets(a);
         if (b >= 0) AddNets(b);
+        AddRunNets(a, countBefore: false);
+        if (b >= 0) AddRunNets(b, countBefore: false);
         double cost = 0, viol = 0;
         for (var k = 0; k < _affectedCount; k++)
         {
@@ -57,6 +59,23 @@ internal sealed partial class AnnealState
         }
     }
 
+    /// <summary>Adds the nets whose lead runs pass over the item's body as it stands: moving the body changes what those runs pass through.</summary>
+    private void AddRunNets(int item, bool countBefore)
+    {
+        if (!_items[item].KeepsOffPads) return;
+        for (var n = 0; n < _nets.Length; n++)
+        {
+            if (_netStamp[n] == _stamp) continue;
+            var box = 4 * n;
+            if (_runBox[box] > _bMaxX[item] || _runBox[box + 2] < _bMinX[item] || _runBox[box + 1] > _bMaxY[item] || _runBox[box + 3] < _bMinY[item]) continue;
+            _netStamp[n] = _stamp;
+            _affected[_affectedCount++] = n;
+            if (!countBefore) continue;
+            _beforeCost += _netCost[n];
+            _beforeViol += _netViol[n];
+        }
+    }
+
     /// <summary>Changes which ground landing one ground lead of the open move's part uses.</summary>
     public void SetGroundChoice(int lead, int choice)
     {
@@ -70,11 +89,13 @@ internal sealed partial class AnnealState
     {
         UpdateGeometry(_ta);
         if (_tb >= 0) UpdateGeometry(_tb);
+        AddRunNets(_ta, countBefore: true);
+        if (_tb >= 0) AddRunNets(_tb, countBefore: true);
         double cost = 0, viol = 0;
         for (var k = 0; k < _affectedCount; k++)
         {
             var n = _affected[k];
-            EvalNet(n, _leadIslandNew, _lxNew, _lyNew, out _netCostNew[n], out _netViolNew[n]);
+            EvalNet(n, _leadIslandNew, _lxNew, _lyNew, _runBoxNew, out _netCostNew[n], out _netViolNew[n]);
             cost += _netCostNew[n];
             viol += _netViolNew[n];
         }
@@ -108,6 +129,7 @@ internal sealed partial class AnnealState
             var n = _affected[k];
             _netCost[n] = _netCostNew[n];
             _netViol[n] = _netViolNew[n];
+            Array.Copy(_runBoxNew, 4 * n, _runBox, 4 * n, 4);
             MarkNet(n);
             foreach (var l in _nets[n].FreeLeads) _leadIsland[l] = _leadIslandNew[l];
         }

@@ -28,6 +28,8 @@ internal sealed partial class AnnealState
 
     private readonly double[] _netCost, _netViol, _unaryCost, _unaryViol;
     private readonly int[] _leadIsland;
+    // Per net, the box around its leads' level runs (minX, minY, maxX, maxY): a body moving into or out of it changes the net's violation.
+    private readonly double[] _runBox, _runBoxNew;
 
     public PlacementProblem Problem => _p;
     public double Cost { get; private set; }
@@ -88,6 +90,7 @@ internal sealed partial class AnnealState
         foreach (var net in _nets) maxPairs = Math.Max(maxPairs, net.FreeLeads.Length * Math.Max(1, net.Islands.Length));
         _pairKey = new double[maxPairs]; _pairId = new int[maxPairs]; _pairLen = new double[maxPairs]; _pairViol = new double[maxPairs];
         _pairAx = new double[maxPairs]; _pairAy = new double[maxPairs];
+        _runBox = new double[4 * _nets.Length]; _runBoxNew = new double[4 * _nets.Length];
         var maxIslands = _nets.Select(x => x.Islands.Length).DefaultIfEmpty(1).Max() + 1;
         _use = new int[maxIslands];
         _mstDist = new double[maxIslands];
@@ -142,7 +145,7 @@ internal sealed partial class AnnealState
         _crowdedCount = 0;
         for (var n = 0; n < _nets.Length; n++)
         {
-            EvalNet(n, _leadIsland, _lx, _ly, out _netCost[n], out _netViol[n]);
+            EvalNet(n, _leadIsland, _lx, _ly, _runBox, out _netCost[n], out _netViol[n]);
             MarkNet(n);
             cost += _netCost[n];
             viol += _netViol[n];

@@ -31,6 +31,8 @@ internal static class ProblemBuilder
                 item.StartY = placement.Position.Y;
                 item.StartRot = (int)placement.Rotation / 90;
             }
+            item.BodyBottom = footprint.BodyBottom;
+            item.LeadLevel = footprint.Leads.Max(l => Math.Max(footprint.Shape == BodyShape.Wires ? footprint.Height : footprint.LeadBend, l.Diameter) + l.Diameter / 2);
             item.BodyMinX = footprint.Body.Min(p => p.X);
             item.BodyMaxX = footprint.Body.Max(p => p.X);
             item.BodyMinY = footprint.Body.Min(p => p.Y);
@@ -100,6 +102,14 @@ internal static class ProblemBuilder
                 throw new PlacementImpossibleException(new PlacementFailure(
                     $"net {net.Net.Name} has {netLeads.Length} leads but its kept pads hold only {capacity}.",
                     "Unlock or remove the net's kept pads so the placer can size them, or run without --keep-existing."));
+        }
+
+        // A body over an island must clear the highest lead that may land there (the placer's own form of lead-meets-body).
+        foreach (var island in islands) island.Clearance = items[island.Item].LeadLevel + rules.LeadGap;
+        foreach (var net in nets)
+        {
+            var level = net.Leads.Select(l => items[leads[l].Item].LeadLevel).DefaultIfEmpty(0).Max();
+            foreach (var s in net.Islands) islands[s].Clearance = Math.Max(islands[s].Clearance, level + rules.LeadGap);
         }
 
         foreach (var item in items)

@@ -9,6 +9,8 @@ internal sealed class ProblemIsland
     public bool Round;
     public double LocalX, LocalY, HalfW, HalfH;
     public int Capacity;
+    /// <summary>How high above the pad tops a body over this island must start (mm): the highest lead of its net that may land here, plus the lead gap.</summary>
+    public double Clearance;
     /// <summary>Islands of one strip share a group; neighbours in it need no gap (the score isolates them).</summary>
     public int StripGroup = -1;
     public int StripIndex;

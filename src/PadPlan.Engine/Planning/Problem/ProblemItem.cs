@@ -26,6 +26,8 @@ internal sealed class ProblemItem
     public bool KeepsOffPads;
     /// <summary>An axial part lying on the board: its body would rest on any pad beneath it.</summary>
     public bool LiesFlat;
+    /// <summary>Height of the body's underside above the pad tops (mm), and the highest a lead of this part runs (its lead bend, at least one lead diameter, plus half a diameter).</summary>
+    public double BodyBottom, LeadLevel;
     /// <summary>-1 pulled to the left edge (input), +1 to the right edge (output), 0 neither.</summary>
     public int Flow;
     /// <summary>Rectangular free pads may be turned a quarter.</summary>

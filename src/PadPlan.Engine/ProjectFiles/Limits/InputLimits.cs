@@ -140,7 +140,8 @@ public static class InputLimits
     private static void Footprint(Builder t, string f) =>
         t.Text($"{f}.name", MaxNameLength).Text($"{f}.family", MaxNameLength).Text($"{f}.mount", MaxNameLength)
             .Text($"{f}.description", MaxNoteLength).Text($"{f}.source", MaxNoteLength)
-            .Number($"{f}.height", Size)
+            .Number($"{f}.height", Size).Text($"{f}.shape", MaxNameLength).Number($"{f}.leadBend", new NumberRange(0, 1000, "mm"))
+            .Text($"{f}.outsideLead", MaxNameLength)
             .Number($"{f}.ratedVoltage", RatedVoltage).Number($"{f}.ratedPower", RatedPower).Number($"{f}.ratedCurrent", RatedCurrent)
             .List($"{f}.body", 200).List($"{f}.body[*]", 2).Number($"{f}.body[*][*]", PartCoordinate)
             .List($"{f}.leads", MaxLeadsPerPart).Text($"{f}.leads[*].name", MaxNameLength)

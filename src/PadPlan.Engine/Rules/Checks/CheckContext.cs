@@ -29,18 +29,17 @@ internal sealed class CheckContext
         foreach (var lead in plan.Leads)
         {
             if (lead.Landing is null) continue;
-            var under = plan.Copper
-                .Select(c => (Copper: c, Distance: CopperGeometry.SignedDistance(c.Island, lead.Landing.At)))
-                .Where(x => x.Distance <= Eps)
-                .OrderBy(x => x.Distance)
-                .Select(x => x.Copper)
-                .ToList();
+            var under = plan.CopperAt(lead.Landing.At, Eps);
             _under[lead] = under;
             foreach (var c in under) _leadsOn[c].Add(lead);
         }
         foreach (var c in plan.Copper) _netOf[c] = IntendedNet(c);
         Pairs = NearPairs(plan.Copper);
     }
+
+    /// <summary>Every placed part raised into 3D (in plan order): body heights and lead paths, for the height rules.</summary>
+    public IReadOnlyList<PartSolid> Solids => _solids ??= Shapes.Solids.Of(Plan, lead => Under(lead) is { Count: > 0 } u ? u[0] : null);
+    private IReadOnlyList<PartSolid>? _solids;
 
     public ResolvedPlan Plan { get; }
     public CheckOptions Options { get; }

@@ -17,12 +17,13 @@ internal static class PlacementCheck
             for (var q = p + 1; q < order.Length && boxes[order[q]].Left < boxes[order[p]].Right; q++)
             {
                 var (i, k) = (Math.Min(order[p], order[q]), Math.Max(order[p], order[q]));
-                if (boxes[i].Overlaps(boxes[k]) && Polygons.Overlap(parts[i].Body, parts[k].Body)) overlaps.Add((i, k));
+                if (boxes[i].Overlaps(boxes[k]) && ctx.Solids[i].SharesHeight(ctx.Solids[k])
+                    && Polygons.Overlap(parts[i].Body, parts[k].Body)) overlaps.Add((i, k));
             }
         overlaps.Sort();
         foreach (var (i, k) in overlaps)
             yield return Findings.Error(RuleIds.BodyOverlap,
-                $"the bodies of {parts[i].Ref} and {parts[k].Ref} overlap.",
+                $"the bodies of {parts[i].Ref} and {parts[k].Ref} meet: they overlap seen from above and both reach {Text.Mm(Math.Max(ctx.Solids[i].Bottom, ctx.Solids[k].Bottom))} to {Text.Mm(Math.Min(ctx.Solids[i].Top, ctx.Solids[k].Top))} above the plane.",
                 "Move or turn one of the parts.", Polygons.Centre(parts[i].Body), parts[i].Ref, parts[k].Ref);
 
         var copperBoxes = ctx.Plan.Copper.Select(c => Bounds.Of(c.Island)).ToArray();
@@ -35,8 +36,11 @@ internal static class PlacementCheck
                 var c = ctx.Plan.Copper[k];
                 var net = ctx.NetOf(c);
                 if (net is null || own.Contains(net) || !boxes[i].Overlaps(copperBoxes[k]) || !Polygons.Overlap(part.Body, c.Island)) continue;
+                // A body held well clear of the pad's joints (a standing part on its leads) hides nothing and presses on nothing.
+                var clear = ctx.Solids[i].Bottom - c.StockThickness;
+                if (clear >= JointHeight - CheckContext.Eps) continue;
                 yield return Findings.Warning(RuleIds.BodyOverPad,
-                    $"the body of {part.Ref} lies over pad {c.Id} of net {net}, which it does not connect to.",
+                    $"the body of {part.Ref} lies over pad {c.Id} of net {net}, which it does not connect to, {Text.Mm(Math.Max(0, clear))} above its top.",
                     "Fine for an insulated body lying flat; otherwise move the part so nothing presses on the joint.",
                     c.Island.Center, part.Ref, c.Id);
             }
@@ -44,6 +48,9 @@ internal static class PlacementCheck
 
         foreach (var f in Board(ctx)) yield return f;
     }
+
+    /// <summary>How far a soldered joint stands above its pad (mm): a body whose underside is at least this high above a pad clears the joints on it (common practice, no source).</summary>
+    public const double JointHeight = 1.0;
 
     private static IEnumerable<Finding> Board(CheckContext ctx)
     {

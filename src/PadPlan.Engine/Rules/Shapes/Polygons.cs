@@ -50,6 +50,19 @@ public static class Polygons
         return Contains(polygon, island.Center) || DistanceToBoundary(polygon, island.Center) < r - Tolerance;
     }
 
+    /// <summary>Whether a wire of the given radius, running straight from a to b in plan, reaches into the polygon's interior.</summary>
+    public static bool WireMeets(IReadOnlyList<Point> polygon, Point a, Point b, double radius)
+    {
+        if (Contains(polygon, a) && DistanceToBoundary(polygon, a) > Tolerance) return true;
+        if (Contains(polygon, b) && DistanceToBoundary(polygon, b) > Tolerance) return true;
+        for (int i = 0, j = polygon.Count - 1; i < polygon.Count; j = i++)
+        {
+            if (ProperlyCross(polygon[j], polygon[i], a, b)) return true;
+            if (Segments.Distance(polygon[j], polygon[i], a, b) < radius - Tolerance) return true;
+        }
+        return false;
+    }
+
     /// <summary>The mean of the vertices: a point to report a polygon's position by.</summary>
     public static Point Centre(IReadOnlyList<Point> polygon) =>
         new(polygon.Average(p => p.X), polygon.Average(p => p.Y));
