@@ -47,7 +47,6 @@ internal static class Geometry
         return Math.Sqrt(dx * dx + dy * dy) - hw;
     }
 
-    /// <summary>How deep two boxes (min/max corners) reach into each other's clearance zone; 0 when they keep the gap.</summary>
     /// <summary>Length of the segment (x0,y0)-(x1,y1) inside the box (Liang-Barsky clipping); 0 when it misses.</summary>
     public static double ClippedLength(double x0, double y0, double x1, double y1, double minX, double minY, double maxX, double maxY)
     {
@@ -70,6 +69,7 @@ internal static class Geometry
         return true;
     }
 
+    /// <summary>How deep two boxes (min/max corners) reach into each other's clearance zone; 0 when they keep the gap.</summary>
     public static double BoxIntrusion(double aMinX, double aMinY, double aMaxX, double aMaxY, double bMinX, double bMinY, double bMaxX, double bMaxY, double gap)
     {
         var ox = Math.Min(aMaxX, bMaxX) - Math.Max(aMinX, bMinX) + gap;

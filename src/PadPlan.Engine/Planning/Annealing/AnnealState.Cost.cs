@@ -16,18 +16,18 @@ internal sealed partial class AnnealState
     /// <summary>Work counters for the profile: nets evaluated, lead landings found, item pairs tested.</summary>
     public long NetEvaluations, LandingsFound, PairTests;
 
-    /// <summary>Lead length to an island for one lead, with its landing point and any broken reach limit.</summary>
+    /// <summary>Lead length to an island for one lead, with its landing point (on the island's bare copper) and any broken reach limit.</summary>
     public double Land(int l, int s, out double ax, out double ay, out double violation)
     {
         var lead = _leads[l];
         var island = _islands[s];
         LandingsFound++;
-        return Landing.Find(_exX[l], _exY[l], _ouX[l], _ouY[l], island.Round, _isX[s], _isY[s], _isHW[s], _isHH[s],
+        return Landing.Find(_exX[l], _exY[l], _ouX[l], _ouY[l], island.Round, _laX[s], _laY[s], _laHW[s], _laHH[s],
             lead.Diameter + 2 * _slack, lead.MinReach, lead.MaxReach - _slack, out ax, out ay, out violation);
     }
 
     /// <summary>Cost of one net: weighted lead lengths to the islands they are given (nearest first, within capacity) and the jumpers joining its islands.</summary>
-    private void EvalNet(int n, int[] assign, double[] lx, double[] ly, double[] runBox, out double cost, out double viol)
+    private void EvalNet(int n, int[] assign, double[] lx, double[] ly, out double cost, out double viol)
     {
         var net = _nets[n];
         var isl = net.Islands;
@@ -35,8 +35,6 @@ internal sealed partial class AnnealState
         NetEvaluations++;
         cost = 0;
         viol = 0;
-        var box = 4 * n;
-        (runBox[box], runBox[box + 1], runBox[box + 2], runBox[box + 3]) = (double.MaxValue, double.MaxValue, double.MinValue, double.MinValue);
         if (count == 0) { viol = 10 * net.Leads.Length; return; }
         for (var k = 0; k < count; k++) _use[k] = 0;
         foreach (var l in net.Leads)
@@ -57,7 +55,7 @@ internal sealed partial class AnnealState
                 var len = Land(l, isl[0], out lx[l], out ly[l], out var v);
                 cost += LeadCost(l, len);
                 longest = Math.Max(longest, len);
-                viol += v + RunThroughBodies(l, lx[l], ly[l], runBox, box);
+                viol += v;
                 assign[l] = isl[0];
                 _use[0]++;
             }
@@ -95,7 +93,7 @@ internal sealed partial class AnnealState
                 (lx[l], ly[l]) = (_pairAx[id], _pairAy[id]);
                 cost += LeadCost(l, _pairLen[id]);
                 longest = Math.Max(longest, _pairLen[id]);
-                viol += _pairViol[id] + RunThroughBodies(l, _pairAx[id], _pairAy[id], runBox, box);
+                viol += _pairViol[id];
             }
             viol += 5.0 * (free.Length - placed);
             cost += _w.Jumper * JumperLength(isl);
@@ -106,37 +104,6 @@ internal sealed partial class AnnealState
             var over = _use[k] - _islands[isl[k]].Capacity;
             if (over > 0) viol += 5.0 * over;
         }
-    }
-
-    /// <summary>How far a lead's level run, from its exit to above its landing, passes through or too close under other parts' bodies
-    /// (the placer's own form of lead-meets-body, on body boxes); also widens the net's run box by the run.</summary>
-    private double RunThroughBodies(int l, double ax, double ay, double[] runBox, int box)
-    {
-        var lead = _leads[l];
-        var (ex, ey) = (_exX[l], _exY[l]);
-        var r = lead.Diameter / 2 + _slack;
-        var (x0, y0, x1, y1) = (Math.Min(ex, ax) - r, Math.Min(ey, ay) - r, Math.Max(ex, ax) + r, Math.Max(ey, ay) + r);
-        runBox[box] = Math.Min(runBox[box], x0); runBox[box + 1] = Math.Min(runBox[box + 1], y0);
-        runBox[box + 2] = Math.Max(runBox[box + 2], x1); runBox[box + 3] = Math.Max(runBox[box + 3], y1);
-        var need = _items[lead.Item].LeadLevel + _p.Rules.LeadGap;
-        var v = 0.0;
-        _seenStamp++;
-        _seen[lead.Item] = _seenStamp;
-        for (var c = Col(x0); c <= Col(x1); c++)
-            for (var row = Row(y0); row <= Row(y1); row++)
-            {
-                var cell = _cells[row * _cols + c];
-                for (var k = 0; k < cell.Count; k++)
-                {
-                    var j = cell[k];
-                    if (_seen[j] == _seenStamp) continue;
-                    _seen[j] = _seenStamp;
-                    var item = _items[j];
-                    if (!item.KeepsOffPads || item.BodyBottom >= need) continue;
-                    v += Geometry.ClippedLength(ex, ey, ax, ay, _bMinX[j] - r, _bMinY[j] - r, _bMaxX[j] + r, _bMaxY[j] + r);
-                }
-            }
-        return v;
     }
 
     /// <summary>A lead costs more per millimetre the longer it is, so the search evens out long leads instead of trading one long lead for several short ones.</summary>
@@ -249,8 +216,6 @@ internal sealed partial class AnnealState
         var v = 0.0;
         if (a.KeepsOffPads) _soft += (a.LiesFlat ? _w.FlatBodyOverPad : _w.UprightBodyOverPad) * BodyOverIslands(i, b);
         if (b.KeepsOffPads) _soft += (b.LiesFlat ? _w.FlatBodyOverPad : _w.UprightBodyOverPad) * BodyOverIslands(j, a);
-        if (a.KeepsOffPads) v += LowBodyOverLeads(i, b);
-        if (b.KeepsOffPads) v += LowBodyOverLeads(j, a);
         if (a.HasBody && b.HasBody)
             v += Geometry.BoxIntrusion(_bMinX[i], _bMinY[i], _bMaxX[i], _bMaxY[i], _bMinX[j], _bMinY[j], _bMaxX[j], _bMaxY[j], _bodyNeed);
         foreach (var s in a.Islands)
@@ -286,25 +251,6 @@ internal sealed partial class AnnealState
         return depth;
     }
 
-    /// <summary>How deep a body reaches over another item's islands and ground landings that leads come down onto, where the body sits too low to clear those leads by the lead gap.</summary>
-    private double LowBodyOverLeads(int body, ProblemItem other)
-    {
-        var bottom = _items[body].BodyBottom;
-        var depth = 0.0;
-        foreach (var t in other.Islands)
-            if (bottom < _islands[t].Clearance)
-                depth += Geometry.BoxIntrusion(_bMinX[body], _bMinY[body], _bMaxX[body], _bMaxY[body], _isX[t] - _isHW[t], _isY[t] - _isHH[t], _isX[t] + _isHW[t], _isY[t] + _isHH[t], _slack);
-        if (bottom < other.LeadLevel + _p.Rules.LeadGap)
-            foreach (var l in other.GroundLeads)
-            {
-                // The ground lead's level run from its exit to above its landing, then its drop onto the plane.
-                var r = _leads[l].Diameter / 2 + _slack;
-                depth += Geometry.ClippedLength(_exX[l], _exY[l], _gX[l], _gY[l], _bMinX[body] - r, _bMinY[body] - r, _bMaxX[body] + r, _bMaxY[body] + r);
-                depth += Geometry.BoxIntrusion(_bMinX[body], _bMinY[body], _bMaxX[body], _bMaxY[body], _gX[l] - r, _gY[l] - r, _gX[l] + r, _gY[l] + r, 0);
-            }
-        return depth;
-    }
-
     /// <summary>Pair violations between item a (and b, when two move together) and every other item.</summary>
     private double PairsOf(int a, int b)
     {
@@ -313,11 +259,11 @@ internal sealed partial class AnnealState
         return v;
     }
 
-    /// <summary>All violations an item takes part in: its own, its pairs, and the reach problems of its nets.</summary>
+    /// <summary>All violations an item takes part in: its own, its pairs, its leads' crossings and runs under bodies, and the reach problems of its nets.</summary>
     public double ViolationOf(int i)
     {
         EvalUnary(i, out _, out var v);
-        v += PairsOf(i, -1) + CrossingOf(i);
+        v += PairsOf(i, -1) + CrossingOf(i) + RunsOf(i);
         foreach (var n in _items[i].Nets) v += _netViol[n];
         return v;
     }

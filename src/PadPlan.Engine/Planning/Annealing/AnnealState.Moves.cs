@@ -28,8 +28,6 @@ internal sealed partial class AnnealState
         _affectedCount = 0;
         AddNets(a);
         if (b >= 0) AddNets(b);
-        AddRunNets(a, countBefore: false);
-        if (b >= 0) AddRunNets(b, countBefore: false);
         double cost = 0, viol = 0;
         for (var k = 0; k < _affectedCount; k++)
         {
@@ -45,6 +43,7 @@ internal sealed partial class AnnealState
         CollectChanged();
         _crossBefore = CrossingOfChanged(_lx, _ly);
         viol += _crossBefore;
+        viol += BeginRuns(a, b);
         _beforeCost = cost;
         _beforeViol = viol;
     }
@@ -56,23 +55,6 @@ internal sealed partial class AnnealState
             if (_netStamp[n] == _stamp) continue;
             _netStamp[n] = _stamp;
             _affected[_affectedCount++] = n;
-        }
-    }
-
-    /// <summary>Adds the nets whose lead runs pass over the item's body as it stands: moving the body changes what those runs pass through.</summary>
-    private void AddRunNets(int item, bool countBefore)
-    {
-        if (!_items[item].KeepsOffPads) return;
-        for (var n = 0; n < _nets.Length; n++)
-        {
-            if (_netStamp[n] == _stamp) continue;
-            var box = 4 * n;
-            if (_runBox[box] > _bMaxX[item] || _runBox[box + 2] < _bMinX[item] || _runBox[box + 1] > _bMaxY[item] || _runBox[box + 3] < _bMinY[item]) continue;
-            _netStamp[n] = _stamp;
-            _affected[_affectedCount++] = n;
-            if (!countBefore) continue;
-            _beforeCost += _netCost[n];
-            _beforeViol += _netViol[n];
         }
     }
 
@@ -89,13 +71,11 @@ internal sealed partial class AnnealState
     {
         UpdateGeometry(_ta);
         if (_tb >= 0) UpdateGeometry(_tb);
-        AddRunNets(_ta, countBefore: true);
-        if (_tb >= 0) AddRunNets(_tb, countBefore: true);
         double cost = 0, viol = 0;
         for (var k = 0; k < _affectedCount; k++)
         {
             var n = _affected[k];
-            EvalNet(n, _leadIslandNew, _lxNew, _lyNew, _runBoxNew, out _netCostNew[n], out _netViolNew[n]);
+            EvalNet(n, _leadIslandNew, _lxNew, _lyNew, out _netCostNew[n], out _netViolNew[n]);
             cost += _netCostNew[n];
             viol += _netViolNew[n];
         }
@@ -117,6 +97,7 @@ internal sealed partial class AnnealState
             if (_leads[l].Ground || _leads[l].OwnIsland >= 0) OwnLanding(l, _lxNew, _lyNew);
         }
         viol += CrossingOfChanged(_lxNew, _lyNew);
+        viol += EvaluateRuns();
         DeltaCost = cost - _beforeCost;
         DeltaViolation = viol - _beforeViol;
     }
@@ -129,7 +110,6 @@ internal sealed partial class AnnealState
             var n = _affected[k];
             _netCost[n] = _netCostNew[n];
             _netViol[n] = _netViolNew[n];
-            Array.Copy(_runBoxNew, 4 * n, _runBox, 4 * n, 4);
             MarkNet(n);
             foreach (var l in _nets[n].FreeLeads) _leadIsland[l] = _leadIslandNew[l];
         }
@@ -139,6 +119,7 @@ internal sealed partial class AnnealState
             (_lx[l], _ly[l]) = (_lxNew[l], _lyNew[l]);
             RegisterLead(l);
         }
+        CommitRuns();
         _unaryCost[_ta] = _uaCost;
         _unaryViol[_ta] = _uaViol;
         if (_tb >= 0) { _unaryCost[_tb] = _ubCost; _unaryViol[_tb] = _ubViol; }

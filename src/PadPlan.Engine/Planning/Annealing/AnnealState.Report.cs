@@ -11,6 +11,9 @@ internal sealed partial class AnnealState
         for (var n = 0; n < _nets.Length; n++)
             if (_netViol[n] > 1e-9)
                 found.Add((_netViol[n], string.Create(CultureInfo.InvariantCulture, $"net {_nets[n].Net.Name}: not every lead reaches a pad within its limit ({_nets[n].MaxLead:0.#} mm) or the pads are full")));
+        for (var l = 0; l < _leads.Length; l++)
+            if (_runs[l] && RunNear(l, _lx[l], _ly[l]) is var run && run > 1e-9)
+                found.Add((run, $"lead {_items[_leads[l].Item].Name}.{_leads[l].Pin} runs through or too close under another part's body"));
         for (var i = 0; i < _items.Length; i++)
         {
             if (_unaryViol[i] > 1e-9)

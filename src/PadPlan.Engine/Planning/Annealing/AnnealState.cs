@@ -22,14 +22,14 @@ internal sealed partial class AnnealState
 
     // board geometry of the current positions
     private readonly double[] _isX, _isY, _isHW, _isHH;
+    // where leads from other items land on each island (its bare copper)
+    private readonly double[] _laX, _laY, _laHW, _laHH;
     private readonly double[] _bMinX, _bMinY, _bMaxX, _bMaxY;
     private readonly double[] _eMinX, _eMinY, _eMaxX, _eMaxY;
     private readonly double[] _exX, _exY, _ouX, _ouY, _gX, _gY;
 
     private readonly double[] _netCost, _netViol, _unaryCost, _unaryViol;
     private readonly int[] _leadIsland;
-    // Per net, the box around its leads' level runs (minX, minY, maxX, maxY): a body moving into or out of it changes the net's violation.
-    private readonly double[] _runBox, _runBoxNew;
 
     public PlacementProblem Problem => _p;
     public double Cost { get; private set; }
@@ -69,6 +69,7 @@ internal sealed partial class AnnealState
         X = new double[n]; Y = new double[n]; Rot = new int[n];
         GroundChoice = new int[_leads.Length];
         _isX = new double[_islands.Length]; _isY = new double[_islands.Length]; _isHW = new double[_islands.Length]; _isHH = new double[_islands.Length];
+        _laX = new double[_islands.Length]; _laY = new double[_islands.Length]; _laHW = new double[_islands.Length]; _laHH = new double[_islands.Length];
         _bMinX = new double[n]; _bMinY = new double[n]; _bMaxX = new double[n]; _bMaxY = new double[n];
         _eMinX = new double[n]; _eMinY = new double[n]; _eMaxX = new double[n]; _eMaxY = new double[n];
         _exX = new double[_leads.Length]; _exY = new double[_leads.Length]; _ouX = new double[_leads.Length]; _ouY = new double[_leads.Length];
@@ -90,7 +91,6 @@ internal sealed partial class AnnealState
         foreach (var net in _nets) maxPairs = Math.Max(maxPairs, net.FreeLeads.Length * Math.Max(1, net.Islands.Length));
         _pairKey = new double[maxPairs]; _pairId = new int[maxPairs]; _pairLen = new double[maxPairs]; _pairViol = new double[maxPairs];
         _pairAx = new double[maxPairs]; _pairAy = new double[maxPairs];
-        _runBox = new double[4 * _nets.Length]; _runBoxNew = new double[4 * _nets.Length];
         var maxIslands = _nets.Select(x => x.Islands.Length).DefaultIfEmpty(1).Max() + 1;
         _use = new int[maxIslands];
         _mstDist = new double[maxIslands];
@@ -98,6 +98,7 @@ internal sealed partial class AnnealState
         _taken = new bool[_nets.Select(x => x.FreeLeads.Length).DefaultIfEmpty(1).Max() + 1];
         BuildGrid();
         BuildCrossing();
+        BuildRuns();
         for (var i = 0; i < n; i++)
         {
             var item = _items[i];
@@ -145,12 +146,13 @@ internal sealed partial class AnnealState
         _crowdedCount = 0;
         for (var n = 0; n < _nets.Length; n++)
         {
-            EvalNet(n, _leadIsland, _lx, _ly, _runBox, out _netCost[n], out _netViol[n]);
+            EvalNet(n, _leadIsland, _lx, _ly, out _netCost[n], out _netViol[n]);
             MarkNet(n);
             cost += _netCost[n];
             viol += _netViol[n];
         }
         viol += RecomputeCrossing();
+        viol += RecomputeRuns();
         for (var i = 0; i < _items.Length; i++)
         {
             EvalUnary(i, out _unaryCost[i], out _unaryViol[i]);
@@ -208,6 +210,9 @@ internal sealed partial class AnnealState
             var (lx, ly) = item.IsPart ? Geometry.Rotate(rot, island.LocalX, island.LocalY) : (island.LocalX, island.LocalY);
             _isX[s] = x + lx; _isY[s] = y + ly;
             (_isHW[s], _isHH[s]) = turned ? (island.HalfH, island.HalfW) : (island.HalfW, island.HalfH);
+            var (ax, ay) = item.IsPart ? Geometry.Rotate(rot, island.LandX, island.LandY) : (island.LandX, island.LandY);
+            _laX[s] = x + ax; _laY[s] = y + ay;
+            (_laHW[s], _laHH[s]) = turned ? (island.LandHalfH, island.LandHalfW) : (island.LandHalfW, island.LandHalfH);
             minX = Math.Min(minX, _isX[s] - _isHW[s]); maxX = Math.Max(maxX, _isX[s] + _isHW[s]);
             minY = Math.Min(minY, _isY[s] - _isHH[s]); maxY = Math.Max(maxY, _isY[s] + _isHH[s]);
         }

@@ -40,10 +40,13 @@ internal static class Legaliser
     private static void Repair(AnnealState s)
     {
         var items = s.Problem.Items;
+        var last = double.PositiveInfinity;
         for (var pass = 0; pass < Passes; pass++)
         {
             s.Recompute();
-            if (s.Violation <= Clean) return;
+            // A pass that mended nothing leaves the next one the same searches from nearly the same layout: stop.
+            if (s.Violation <= Clean || s.Violation >= last - Clean) return;
+            last = s.Violation;
             var bad = Enumerable.Range(0, items.Length).Where(i => !items[i].Fixed)
                 .Select(i => (Item: i, V: s.ViolationOf(i))).Where(x => x.V > Clean)
                 .OrderByDescending(x => x.V).ThenBy(x => x.Item).Select(x => x.Item).ToList();

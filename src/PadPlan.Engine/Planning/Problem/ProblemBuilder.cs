@@ -104,13 +104,7 @@ internal static class ProblemBuilder
                     "Unlock or remove the net's kept pads so the placer can size them, or run without --keep-existing."));
         }
 
-        // A body over an island must clear the highest lead that may land there (the placer's own form of lead-meets-body).
-        foreach (var island in islands) island.Clearance = items[island.Item].LeadLevel + rules.LeadGap;
-        foreach (var net in nets)
-        {
-            var level = net.Leads.Select(l => items[leads[l].Item].LeadLevel).DefaultIfEmpty(0).Max();
-            foreach (var s in net.Islands) islands[s].Clearance = Math.Max(islands[s].Clearance, level + rules.LeadGap);
-        }
+        foreach (var island in islands) BareCopper(island, items[island.Item]);
 
         foreach (var item in items)
         {
@@ -131,6 +125,20 @@ internal static class ProblemBuilder
         var board = project.Board;
         var region = board.IsAuto ? AutoRegion(problem, board.Margin, PlacerLimits.AutoAreaFactor(project.Parts.Count)) : Region.OfBoard(board.Width!.Value, board.Height!.Value, board.Margin);
         return problem.WithRegion(region);
+    }
+
+    /// <summary>Sets where leads from elsewhere land on an island: the largest piece of it that its own item's body leaves bare, or all of it.</summary>
+    private static void BareCopper(ProblemIsland s, ProblemItem owner)
+    {
+        (s.LandX, s.LandY, s.LandHalfW, s.LandHalfH) = (s.LocalX, s.LocalY, s.HalfW, s.HalfH);
+        var (x0, y0, x1, y1) = (s.LocalX - s.HalfW, s.LocalY - s.HalfH, s.LocalX + s.HalfW, s.LocalY + s.HalfH);
+        var (bx0, by0, bx1, by1) = (owner.BodyMinX, owner.BodyMinY, owner.BodyMaxX, owner.BodyMaxY);
+        if (s.Round || !owner.IsPart || !owner.HasBody || bx0 >= x1 || bx1 <= x0 || by0 >= y1 || by1 <= y0) return;
+        // the bare pieces beside the body, each the island's full width or height
+        (double X0, double Y0, double X1, double Y1)[] pieces = [(x0, y0, bx0, y1), (bx1, y0, x1, y1), (x0, y0, x1, by0), (x0, by1, x1, y1)];
+        var best = pieces.Where(p => p.X1 > p.X0 && p.Y1 > p.Y0).OrderByDescending(p => (p.X1 - p.X0) * (p.Y1 - p.Y0)).FirstOrDefault();
+        if (best == default) return; // all under the body: the check judges what lands there
+        (s.LandX, s.LandY, s.LandHalfW, s.LandHalfH) = ((best.X0 + best.X1) / 2, (best.Y0 + best.Y1) / 2, (best.X1 - best.X0) / 2, (best.Y1 - best.Y0) / 2);
     }
 
     private static string NextId(HashSet<string> used, ref int number)

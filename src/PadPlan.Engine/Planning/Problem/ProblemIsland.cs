@@ -8,9 +8,9 @@ internal sealed class ProblemIsland
     public int Net;
     public bool Round;
     public double LocalX, LocalY, HalfW, HalfH;
+    /// <summary>The box a lead from another item lands in: the whole island, or for a strip segment partly under its own part's body the largest piece the body leaves bare (a joint under a body can be neither made nor seen, and the lead would come down through the body).</summary>
+    public double LandX, LandY, LandHalfW, LandHalfH;
     public int Capacity;
-    /// <summary>How high above the pad tops a body over this island must start (mm): the highest lead of its net that may land here, plus the lead gap.</summary>
-    public double Clearance;
     /// <summary>Islands of one strip share a group; neighbours in it need no gap (the score isolates them).</summary>
     public int StripGroup = -1;
     public int StripIndex;
