@@ -9,10 +9,6 @@ namespace PadPlan.Fuzz;
 /// </summary>
 public sealed class FuzzTests(ITestOutputHelper output)
 {
-    // Skipped on the merged main of stop 19: with the steadier placer, the crossing-leads term and the simulation merged,
-    // the edge cases at the limits go past the 1 GB / 60 s bounds (tiny-buffer with every body at +-500 mm: quick
-    // placement over 300 s; the CW filter's copy: out of memory, exit 3), and every case's peak memory reads over 1 GB.
-    // The harness passed on its own branch (docs/limits.md); this is open work, said in the closing note, not a pass.
     [Fact]
     public void Damaged_inputs_never_crash_hang_blow_up_or_change_the_input()
     {
