@@ -61,4 +61,11 @@ internal static class Landing
         violation += Math.Max(0, len - (maxReach - PlacerLimits.Safety));
         return len;
     }
+
+    /// <summary>How far a lead of this length breaks its reach limits (mm): shorter than its minimum bend, or longer than its maximum.</summary>
+    public static double ReachViolation(double len, double minReach, double maxReach)
+    {
+        var min = minReach > 0 ? minReach + PlacerLimits.Safety : 0;
+        return Math.Max(0, min - len) + Math.Max(0, len - (maxReach - PlacerLimits.Safety));
+    }
 }

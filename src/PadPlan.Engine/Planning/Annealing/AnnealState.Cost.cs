@@ -22,8 +22,40 @@ internal sealed partial class AnnealState
         var lead = _leads[l];
         var island = _islands[s];
         LandingsFound++;
-        return Landing.Find(_exX[l], _exY[l], _ouX[l], _ouY[l], island.Round, _laX[s], _laY[s], _laHW[s], _laHH[s],
+        var len = Landing.Find(_exX[l], _exY[l], _ouX[l], _ouY[l], island.Round, _laX[s], _laY[s], _laHW[s], _laHH[s],
             lead.Diameter + 2 * _slack, lead.MinReach, lead.MaxReach - _slack, out ax, out ay, out violation);
+        return island.Covered ? PastOwnBody(l, s, len, ref ax, ref ay, ref violation) : len;
+    }
+
+    /// <summary>
+    /// A lead landing on a strip segment beside its own part's body comes in past that body: when the run to the nearest
+    /// point would graze the body (its corner, mostly), the nearest corner of the bare copper whose run clears it is taken
+    /// instead, if there is one.
+    /// </summary>
+    private double PastOwnBody(int l, int s, double len, ref double ax, ref double ay, ref double violation)
+    {
+        var j = _islands[s].Item;
+        var lead = _leads[l];
+        if (!_lowBody[j] || _items[j].BodyBottom >= _runNeed[l]) return len;
+        // with the annealing's slack whatever the slack now, so the legaliser and the polish land the lead where the annealing did
+        var r = lead.Diameter / 2 + PlacerLimits.AnnealSlack;
+        var (x0, y0, x1, y1) = (_bMinX[j] - r, _bMinY[j] - r, _bMaxX[j] + r, _bMaxY[j] + r);
+        var (ex, ey) = (_exX[l], _exY[l]);
+        if (Geometry.ClippedLength(ex, ey, ax, ay, x0, y0, x1, y1) <= 0) return len;
+        var inset = r + PlacerLimits.Safety;
+        var (rw, rh) = (Math.Max(0, _laHW[s] - inset), Math.Max(0, _laHH[s] - inset));
+        var best = double.MaxValue;
+        var (bx, by) = (ax, ay);
+        for (var k = 0; k < 4; k++)
+        {
+            var (cx, cy) = (_laX[s] + ((k & 1) == 0 ? -rw : rw), _laY[s] + ((k & 2) == 0 ? -rh : rh));
+            var d = Math.Sqrt((cx - ex) * (cx - ex) + (cy - ey) * (cy - ey));
+            if (d < best && Geometry.ClippedLength(ex, ey, cx, cy, x0, y0, x1, y1) <= 0) (best, bx, by) = (d, cx, cy);
+        }
+        if (best == double.MaxValue) return len;
+        (ax, ay) = (bx, by);
+        violation = Landing.ReachViolation(best, lead.MinReach, lead.MaxReach - _slack);
+        return best;
     }
 
     /// <summary>Cost of one net: weighted lead lengths to the islands they are given (nearest first, within capacity) and the jumpers joining its islands.</summary>

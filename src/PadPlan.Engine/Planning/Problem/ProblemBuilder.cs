@@ -139,6 +139,7 @@ internal static class ProblemBuilder
         var best = pieces.Where(p => p.X1 > p.X0 && p.Y1 > p.Y0).OrderByDescending(p => (p.X1 - p.X0) * (p.Y1 - p.Y0)).FirstOrDefault();
         if (best == default) return; // all under the body: the check judges what lands there
         (s.LandX, s.LandY, s.LandHalfW, s.LandHalfH) = ((best.X0 + best.X1) / 2, (best.Y0 + best.Y1) / 2, (best.X1 - best.X0) / 2, (best.Y1 - best.Y0) / 2);
+        s.Covered = true;
     }
 
     private static string NextId(HashSet<string> used, ref int number)

@@ -10,6 +10,8 @@ internal sealed class ProblemIsland
     public double LocalX, LocalY, HalfW, HalfH;
     /// <summary>The box a lead from another item lands in: the whole island, or for a strip segment partly under its own part's body the largest piece the body leaves bare (a joint under a body can be neither made nor seen, and the lead would come down through the body).</summary>
     public double LandX, LandY, LandHalfW, LandHalfH;
+    /// <summary>Its own item's body covers part of it, so the land box is smaller than the island.</summary>
+    public bool Covered;
     public int Capacity;
     /// <summary>Islands of one strip share a group; neighbours in it need no gap (the score isolates them).</summary>
     public int StripGroup = -1;
