@@ -19,4 +19,14 @@ public class PlacementPropertyTests
         var problems = CheckerVerdict.Check(result.Project!);
         return (problems.Count == 0).Label(string.Join("\n", problems));
     }
+
+    /// <summary>Cases the property once found broken: seed 28 with 10 parts put a transistor's lead across an unconnected DIP pin on its strip segment, which the placer's crossing term did not see.</summary>
+    [Theory]
+    [InlineData(28, 10)]
+    public void Found_cases_place_without_violations(int seed, int parts)
+    {
+        var result = Placer.Place(TestCircuits.Random(seed, parts), new PlacerSettings(Seed: seed, Effort: Effort.Quick));
+        Assert.True(result.Succeeded, result.Failure?.Message);
+        Assert.Empty(CheckerVerdict.Check(result.Project!));
+    }
 }

@@ -26,8 +26,9 @@ internal sealed partial class AnnealState
         for (var l = 0; l < n; l++)
         {
             var lead = _leads[l];
-            // the wires of a wire landing come in insulated; an unconnected lead is cut off short
-            _crosses[l] = !_items[lead.Item].IsLanding && (lead.Ground || lead.Net >= 0);
+            // the wires of a wire landing come in insulated; an unconnected lead is cut off short, but an unconnected DIP pin
+            // still stands on its strip segment
+            _crosses[l] = !_items[lead.Item].IsLanding && (lead.Ground || lead.Net >= 0 || lead.OwnIsland >= 0);
             if (_crosses[l]) widest = Math.Max(widest, lead.Diameter);
         }
         _leadReach = _p.Rules.LeadGap + widest;
