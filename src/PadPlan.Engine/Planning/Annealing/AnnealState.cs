@@ -113,6 +113,8 @@ internal sealed partial class AnnealState
     public (double X, double Y) Outward(int lead) => (_ouX[lead], _ouY[lead]);
     public (double X, double Y) GroundPoint(int lead) => (_gX[lead], _gY[lead]);
     public (double X, double Y, double HalfW, double HalfH) IslandBox(int island) => (_isX[island], _isY[island], _isHW[island], _isHH[island]);
+    /// <summary>The middle of the copper leads from elsewhere land on (an island's bare copper).</summary>
+    public (double X, double Y) LandCentre(int island) => (_laX[island], _laY[island]);
 
     /// <summary>Extent of everything placed: bodies, islands and ground landings.</summary>
     public Region Extent()

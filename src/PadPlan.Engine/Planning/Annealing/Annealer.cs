@@ -315,6 +315,21 @@ internal sealed class Annealer
         // The lead's part toward the island, or the part that carries the island (an IC on its strip) toward the lead: along
         // the line between them, until the exit is half the lead's reach limit from the island.
         var (ex, ey) = _s.Exit(lead);
+        if (!moveHolder && p.Islands[island].Covered)
+        {
+            // A strip segment partly under its own part's body: take the lead's part round to the bare copper's side, out
+            // beyond it by half the reach, so its lead need not cross that body.
+            var (bx, by) = _s.LandCentre(island);
+            var (ux, uy) = (bx - ix, by - iy);
+            var u = Math.Sqrt(ux * ux + uy * uy);
+            if (u > 1e-9)
+            {
+                var reach = p.Leads[lead].MaxReach / 2;
+                var (tx, ty) = (bx + ux / u * reach, by + uy / u * reach);
+                JumpNear(partItem, (_s.X[partItem] + tx - ex, _s.Y[partItem] + ty - ey), range, r);
+                return true;
+            }
+        }
         var d = Math.Sqrt((ex - ix) * (ex - ix) + (ey - iy) * (ey - iy));
         var shift = d < 1e-9 ? 0 : Math.Max(0, d - p.Leads[lead].MaxReach / 2) / d;
         var (dx, dy) = ((ix - ex) * shift, (iy - ey) * shift);
