@@ -28,6 +28,8 @@ internal static class ModelPicture
         double minV = faces.Min(f => f.Corners.Min(c => c.Y)), maxV = faces.Max(f => f.Corners.Max(c => c.Y));
         var scale = Math.Min(flow.Body.Width / (maxU - minU), MaxHeight / (maxV - minV));
         var height = (maxV - minV) * scale;
+        // The heading and its note stay on the page with the picture (about 16 mm for the two).
+        if (!flow.Fits(height + 4 + 16)) flow.NewPage();
         flow.Heading("The finished board", SheetStyle.TextHeading);
         flow.Paragraph("An isometric view of the 3D model (padplan export --model), seen from the front-left corner: part bodies at their footprint heights, leads bent down to their landings. Not to scale with the template.", SheetStyle.TextSmall);
         var top = flow.Take(height + 4);
