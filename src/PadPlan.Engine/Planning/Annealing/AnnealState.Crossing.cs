@@ -105,7 +105,9 @@ internal sealed partial class AnnealState
         {
             if (!_crosses[p]) continue;
             _changedStamp[p] = _stamp; // pairs are counted once: from the first lead of each
-            v += CrossingNear(p, _lx, _ly);
+            var near = CrossingNear(p, _lx, _ly);
+            if (near > 0) MarkCrowded(_leads[p].Item); // so the annealer's mending moves pick it
+            v += near;
         }
         return v;
     }
