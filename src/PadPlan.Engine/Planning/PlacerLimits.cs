@@ -80,7 +80,7 @@ internal static class PlacerLimits
     /// <summary>Smallest move range (mm).</summary>
     public const double MinRange = 0.5;
     /// <summary>Violation (mm per item) after annealing beyond which the legaliser does not try: such a run is not legal, and another run or a larger region is the remedy.</summary>
-    public const double HopelessViolationPerItem = 0.01;
+    public const double HopelessViolationPerItem = 0.05;
     /// <summary>Times the automatic board region may grow when a layout does not fit.</summary>
     public const int AutoGrowTries = 4;
     /// <summary>Growth of the automatic region per try.</summary>
