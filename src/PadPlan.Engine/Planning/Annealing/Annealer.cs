@@ -344,28 +344,7 @@ internal sealed class Annealer
         var count = _s.CrowdedCount;
         if (count == 0) return false;
         var i = _s.Crowded(_rng.Next(count));
-        var items = _s.Problem.Items;
-        if (items[i].Fixed) return false;
-        if (items[i].IsPart)
-        {
-            var pick = _rng.NextDouble();
-            if (pick < 1.0 / 3)
-            {
-                // a half turn in place swaps where its leads leave: it untangles two leads that cross on their way out
-                _s.Begin(i);
-                _s.Rot[i] = (_s.Rot[i] + 2) & 3;
-                return true;
-            }
-            var j = _s.Crowded(_rng.Next(count));
-            if (pick < 2.0 / 3 && j != i && items[j].IsPart && !items[j].Fixed)
-            {
-                // two crowded parts trade places: the other way to undo crossed leads between neighbours
-                _s.Begin(i, j);
-                (_s.X[i], _s.X[j]) = (_s.X[j], _s.X[i]);
-                (_s.Y[i], _s.Y[j]) = (_s.Y[j], _s.Y[i]);
-                return true;
-            }
-        }
+        if (_s.Problem.Items[i].Fixed) return false;
         Shift(i, Math.Max(range, PlacerLimits.MendCrowdingShift), 0.25, 0.25, r);
         return true;
     }
