@@ -11,14 +11,10 @@ internal sealed partial class AnnealState
         for (var n = 0; n < _nets.Length; n++)
             if (_netViol[n] > 1e-9)
                 found.Add((_netViol[n], string.Create(CultureInfo.InvariantCulture, $"net {_nets[n].Net.Name}: not every lead reaches a pad within its limit ({_nets[n].MaxLead:0.#} mm) or the pads are full")));
-        _stamp++;
-        for (var l = 0; l < _leads.Length; l++)
+        CommittedCrossings((l, cross) =>
         {
-            if (!_crosses[l]) continue;
-            _changedStamp[l] = _stamp; // each pair once, from its first lead
-            if (CrossingNear(l, _lx, _ly) is var cross && cross > 1e-9)
-                found.Add((cross, $"lead {_items[_leads[l].Item].Name}.{_leads[l].Pin} crosses or passes too near a bare lead of another net"));
-        }
+            if (cross > 1e-9) found.Add((cross, $"lead {_items[_leads[l].Item].Name}.{_leads[l].Pin} crosses or passes too near a bare lead of another net"));
+        });
         for (var i = 0; i < _items.Length; i++)
         {
             if (_unaryViol[i] > 1e-9)
