@@ -99,14 +99,20 @@ internal sealed partial class AnnealState
             OwnLanding(l, _lx, _ly);
             RegisterLead(l);
         }
+        return CommittedCrossings((l, _) => MarkCrowded(_leads[l].Item)); // so the annealer's mending moves pick it
+    }
+
+    /// <summary>The committed lead-crossing violations, each pair counted once (from its first lead); <paramref name="perLead"/> hears each lead's share that is not zero.</summary>
+    private double CommittedCrossings(Action<int, double>? perLead)
+    {
         _stamp++;
         var v = 0.0;
         for (var p = 0; p < _leads.Length; p++)
         {
             if (!_crosses[p]) continue;
-            _changedStamp[p] = _stamp; // pairs are counted once: from the first lead of each
+            _changedStamp[p] = _stamp;
             var near = CrossingNear(p, _lx, _ly);
-            if (near > 0) MarkCrowded(_leads[p].Item); // so the annealer's mending moves pick it
+            if (near > 0) perLead?.Invoke(p, near);
             v += near;
         }
         return v;

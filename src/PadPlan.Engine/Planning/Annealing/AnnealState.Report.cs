@@ -14,14 +14,10 @@ internal sealed partial class AnnealState
         for (var l = 0; l < _leads.Length; l++)
             if (_runs[l] && RunNear(l, _lx[l], _ly[l]) is var run && run > 1e-9)
                 found.Add((run, $"lead {_items[_leads[l].Item].Name}.{_leads[l].Pin} runs through or too close under another part's body"));
-        _stamp++;
-        for (var l = 0; l < _leads.Length; l++)
+        CommittedCrossings((l, cross) =>
         {
-            if (!_crosses[l]) continue;
-            _changedStamp[l] = _stamp; // each pair once, from its first lead
-            if (CrossingNear(l, _lx, _ly) is var cross && cross > 1e-9)
-                found.Add((cross, $"lead {_items[_leads[l].Item].Name}.{_leads[l].Pin} crosses or passes too near a bare lead of another net"));
-        }
+            if (cross > 1e-9) found.Add((cross, $"lead {_items[_leads[l].Item].Name}.{_leads[l].Pin} crosses or passes too near a bare lead of another net"));
+        });
         for (var i = 0; i < _items.Length; i++)
         {
             if (_unaryViol[i] > 1e-9)
