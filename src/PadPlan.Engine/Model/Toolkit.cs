@@ -59,12 +59,11 @@ public sealed record Toolkit
     }
 
     /// <summary>Leads a rectangle takes: one per lead spacing in each direction, and never fewer than two. Common practice, no source.</summary>
-    public int RectCapacity(double width, double height)
-    {
-        var across = Math.Max(1, (int)Math.Floor(width / LeadSpacing + 1e-9));
-        var along = Math.Max(1, (int)Math.Floor(height / LeadSpacing + 1e-9));
-        return Math.Max(2, across * along);
-    }
+    public int RectCapacity(double width, double height) => Math.Max(2, LeadsOn(width, height));
+
+    /// <summary>Leads a piece of copper takes side by side: one per lead spacing in each direction, at least one. Common practice, no source.</summary>
+    public int LeadsOn(double width, double height) =>
+        Math.Max(1, (int)Math.Floor(width / LeadSpacing + 1e-9)) * Math.Max(1, (int)Math.Floor(height / LeadSpacing + 1e-9));
 
     /// <summary>Leads one copper island takes: round pads by the table, rectangles and strip segments by <see cref="RectCapacity"/>.</summary>
     public int CapacityOf(Island island) => island.Shape == IslandShape.Round

@@ -82,6 +82,11 @@ public static class Placer
             else annealer.Resume(best!.State);
             annealer.Run(settings.MovesFactor, (step, cost, violation) => progress?.Report(new PlacerProgress(k + 1, "annealing", step, cost, violation)));
             var legal = Legaliser.Finish(state);
+            for (var rework = 0; !legal && rework < PlacerLimits.ReworkTries && state.Violation <= PlacerLimits.HopelessViolationPerItem * problem.Items.Length; rework++)
+            {
+                annealer.Rework(settings.MovesFactor, rework);
+                legal = Legaliser.Finish(state);
+            }
             if (legal)
             {
                 var kept = new AnnealState(problem);

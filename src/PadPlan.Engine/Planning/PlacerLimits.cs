@@ -73,6 +73,12 @@ internal static class PlacerLimits
     public const double RunsAgree = 0.03;
     /// <summary>Extra temperature steps at the final temperature while rules are still broken.</summary>
     public const int CleanupSteps = 12;
+    /// <summary>Times a run the legaliser leaves short (but not hopeless) is annealed a little more and legalised again.</summary>
+    public const int ReworkTries = 3;
+    /// <summary>Temperature steps of each such rework.</summary>
+    public const int ReworkSteps = 4;
+    /// <summary>Temperature of a rework after the first, as a fraction of the run's final temperature: warm enough for a trade of places to pass, cool enough to keep the legal rest (at the full final temperature the layout broke open again by 8-12 mm on a 300-resistor ring).</summary>
+    public const double ReworkCooling = 0.1;
     /// <summary>Share of trial moves aimed at a net that breaks its reach (before the table is normalised; the other kinds sum to about 1.15). While no net is broken such a move is an ordinary shift.</summary>
     public const double MendShare = 0.1;
     /// <summary>Smallest shift (mm) of a move aimed at crowding: about a pad and its gap, enough to step past a neighbour.</summary>

@@ -13,7 +13,9 @@ internal sealed partial class AnnealState
     private bool[] _crosses = [];
     private double[] _lx = [], _ly = [], _lxNew = [], _lyNew = [];
     private int[] _changed = [], _changedStamp = [], _leadSeen = [], _leadCellBox = [];
-    private int _changedCount, _leadSeenStamp, _leadCols, _leadRows;
+    private int _changedCount, _leadSeenStamp, _leadCols, _leadRows, _tangledCount, _nearWorst;
+    private int[] _tangled = [];
+    private double _nearWorstV;
     private List<int>[] _leadCells = [];
     private double _leadReach, _crossBefore, _leadCellSize = LeadCellSize;
     private readonly List<int> _wideLeads = [];
@@ -36,6 +38,7 @@ internal sealed partial class AnnealState
         Array.Fill(_lx, double.NaN);
         Array.Fill(_ly, double.NaN);
         _changed = new int[n];
+        _tangled = new int[2 * n];
         _changedStamp = new int[n];
         _leadSeen = new int[n];
         _leadCellBox = new int[4 * n];
@@ -99,8 +102,24 @@ internal sealed partial class AnnealState
             OwnLanding(l, _lx, _ly);
             RegisterLead(l);
         }
-        return CommittedCrossings((l, _) => MarkCrowded(_leads[l].Item)); // so the annealer's mending moves pick it
+        _tangledCount = 0;
+        return CommittedCrossings((l, _) =>
+        {
+            MarkCrowded(_leads[l].Item); // so the annealer's mending moves pick it
+            if (_nearWorst < 0) return;
+            _tangled[2 * _tangledCount] = l;
+            _tangled[2 * _tangledCount++ + 1] = _nearWorst;
+        });
     }
+
+    /// <summary>Pairs of leads that crossed at the last full recount.</summary>
+    public int TangledCount => _tangledCount;
+
+    /// <summary>The k-th pair of leads that crossed at the last full recount: a lead, and the lead it crossed most.</summary>
+    public (int A, int B) Tangled(int k) => (_tangled[2 * k], _tangled[2 * k + 1]);
+
+    /// <summary>The item that carries the pad a lead lands on (-1 when it lands on none).</summary>
+    public int HolderOf(int l) => IslandOf(l) is var island and >= 0 ? _islands[island].Item : -1;
 
     /// <summary>The committed lead-crossing violations, each pair counted once (from its first lead); <paramref name="perLead"/> hears each lead's share that is not zero.</summary>
     private double CommittedCrossings(Action<int, double>? perLead)
@@ -116,6 +135,15 @@ internal sealed partial class AnnealState
             v += near;
         }
         return v;
+    }
+
+    /// <summary>How far one lead's committed path breaks the crossing rule, and the lead of another net it comes nearest to (-1 when none): for the legaliser's choice of what to move.</summary>
+    public (double V, int Other) CrossingAt(int l)
+    {
+        if (!_crosses[l]) return (0, -1);
+        _stamp++;
+        var v = CrossingNear(l, _lx, _ly);
+        return (v, _nearWorst);
     }
 
     /// <summary>The crossing violations an item's leads take part in, for the legaliser's choice of what to move.</summary>
@@ -168,12 +196,15 @@ internal sealed partial class AnnealState
         var r0 = LeadRow(Math.Min(_exY[p], py) - reach);
         var r1 = LeadRow(Math.Max(_exY[p], py) + reach);
         _leadSeenStamp++;
+        (_nearWorst, _nearWorstV) = (-1, 0.0);
         var v = 0.0;
         double Near(int q)
         {
             if (_leadSeen[q] == _leadSeenStamp || _changedStamp[q] == _stamp || !_crosses[q]) return 0;
             _leadSeen[q] = _leadSeenStamp;
-            return CrossPair(p, q, px, py, _lx[q], _ly[q]);
+            var c = CrossPair(p, q, px, py, _lx[q], _ly[q]);
+            if (c > _nearWorstV) (_nearWorst, _nearWorstV) = (q, c);
+            return c;
         }
         if ((c1 - c0 + 1) * (r1 - r0 + 1) > MaxCellsPerItem)
         {

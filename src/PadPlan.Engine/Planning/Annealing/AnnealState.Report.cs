@@ -13,7 +13,7 @@ internal sealed partial class AnnealState
                 found.Add((_netViol[n], string.Create(CultureInfo.InvariantCulture, $"net {_nets[n].Net.Name}: not every lead reaches a pad within its limit ({_nets[n].MaxLead:0.#} mm) or the pads are full")));
         for (var l = 0; l < _leads.Length; l++)
             if (_runs[l] && RunNear(l, _lx[l], _ly[l]) is var run && run > 1e-9)
-                found.Add((run, $"lead {_items[_leads[l].Item].Name}.{_leads[l].Pin} runs through or too close under another part's body"));
+                found.Add((run, $"lead {_items[_leads[l].Item].Name}.{_leads[l].Pin} runs through or too close under the body of {string.Join(", ", BodiesOverRun(l).Select(j => _items[j].Name).DefaultIfEmpty("another part"))}"));
         CommittedCrossings((l, cross) =>
         {
             if (cross > 1e-9) found.Add((cross, $"lead {_items[_leads[l].Item].Name}.{_leads[l].Pin} crosses or passes too near a bare lead of another net"));

@@ -88,11 +88,17 @@ internal sealed partial class AnnealState
     {
         MarkCrowded(_leads[l].Item);
         if (IslandOf(l) is var s and >= 0) MarkCrowded(_islands[s].Item);
+        foreach (var j in BodiesOverRun(l)) MarkCrowded(j);
+    }
+
+    /// <summary>The items whose low bodies lead l's committed run passes through or too close under (a scan of every item: for the recount and the failure message, not for moves).</summary>
+    private IEnumerable<int> BodiesOverRun(int l)
+    {
         var r = _leads[l].Diameter / 2 + _slack;
         for (var j = 0; j < _items.Length; j++)
             if (j != _leads[l].Item && _lowBody[j] && _items[j].BodyBottom < _runNeed[l]
                 && Geometry.ClippedLength(_exX[l], _exY[l], _lx[l], _ly[l], _bMinX[j] - r, _bMinY[j] - r, _bMaxX[j] + r, _bMaxY[j] + r) > 0)
-                MarkCrowded(j);
+                yield return j;
     }
 
     /// <summary>Opens the run term of a move of item a (and b): collects the runs it can change (every lead of the moved items,

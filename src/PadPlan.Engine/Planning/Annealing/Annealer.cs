@@ -120,6 +120,7 @@ internal sealed class Annealer
             report?.Invoke(schedule.Step, _s.Total, _s.Violation);
         }
         Stats.Temperatures = schedule.Step;
+        _lastTemperature = schedule.Temperature;
         // Clean-up: while rules are still broken, keep the last temperature and double the penalty, so the layout can
         // still climb out of the last overlaps instead of freezing with them.
         for (var extra = 0; extra < PlacerLimits.CleanupSteps && _s.Violation > 1e-9; extra++)
@@ -176,6 +177,33 @@ internal sealed class Annealer
         Stats.InnerLoopBytes += GC.GetAllocatedBytesForCurrentThread() - before;
         Stats.InnerLoopMoves += count;
         return kept;
+    }
+
+    private double _lastTemperature;
+
+    /// <summary>
+    /// For a run the legaliser left a little short, from the legaliser's layout. The first time: greedy moves with no slack
+    /// and the legaliser's penalty, which clear a lead a few hundredths too near another where every neighbour already
+    /// touches its limit (a nudge of one item breaks another rule; two small moves in turn do not). Later times: a few steps
+    /// at a tenth of the final temperature with the annealing's slack and clean-up penalty, for crossed leads that only
+    /// a pad or part trading places, or a part turned half round, undo. Either is far cheaper than a new run on a larger region.
+    /// </summary>
+    public void Rework(double movesFactor, int attempt)
+    {
+        if (!HasMoves) return;
+        var greedy = attempt == 0;
+        _s.Slack = greedy ? 0 : PlacerLimits.AnnealSlack;
+        _s.Penalty = greedy ? Legaliser.Penalty : _s.Problem.Weights.PenaltyEnd * 64;
+        _s.Recompute();
+        var perTemperature = MovesPerTemperature(movesFactor);
+        var temperature = greedy ? 0 : _lastTemperature * PlacerLimits.ReworkCooling;
+        for (var step = 0; step < PlacerLimits.ReworkSteps && _s.Violation > 1e-9; step++)
+        {
+            Moves(perTemperature, temperature, greedy ? 1.0 : 2.0);
+            _s.Recompute();
+        }
+        Moves(perTemperature, 0, PlacerLimits.MinRange * 2);
+        _s.Recompute();
     }
 
     /// <summary>After legalising: greedy moves with no slack and a prohibitive penalty, so leads shrink into the room the annealing slack kept free while no rule may break.</summary>
@@ -343,9 +371,36 @@ internal sealed class Annealer
     {
         var count = _s.CrowdedCount;
         if (count == 0) return false;
+        if (_s.TangledCount > 0 && _rng.NextDouble() < 0.5) return Untangle();
         var i = _s.Crowded(_rng.Next(count));
         if (_s.Problem.Items[i].Fixed) return false;
         Shift(i, Math.Max(range, PlacerLimits.MendCrowdingShift), 0.25, 0.25, r);
+        return true;
+    }
+
+    /// <summary>
+    /// Opens a move that can undo two crossed leads, which small shifts rarely do: the two parts trading places, the two pads
+    /// the leads land on trading places, or one of the two parts turned half round in place (its leads leave from the other
+    /// ends). False when the chosen items may not move.
+    /// </summary>
+    private bool Untangle()
+    {
+        var (l, q) = _s.Tangled(_rng.Next(_s.TangledCount));
+        var p = _s.Problem;
+        var pick = _rng.Next(3);
+        if (pick < 2)
+        {
+            var (a, b) = pick == 0 ? (p.Leads[l].Item, p.Leads[q].Item) : (_s.HolderOf(l), _s.HolderOf(q));
+            if (a < 0 || b < 0 || a == b || p.Items[a].Fixed || p.Items[b].Fixed) return false;
+            _s.Begin(a, b);
+            (_s.X[a], _s.X[b]) = (_s.X[b], _s.X[a]);
+            (_s.Y[a], _s.Y[b]) = (_s.Y[b], _s.Y[a]);
+            return true;
+        }
+        var i = p.Leads[_rng.NextDouble() < 0.5 ? l : q].Item;
+        if (p.Items[i].Fixed) return false;
+        _s.Begin(i);
+        _s.Rot[i] = (_s.Rot[i] + 2) & 3;
         return true;
     }
 

@@ -131,15 +131,21 @@ internal static class ProblemBuilder
     private static void BareCopper(ProblemIsland s, ProblemItem owner)
     {
         (s.LandX, s.LandY, s.LandHalfW, s.LandHalfH) = (s.LocalX, s.LocalY, s.HalfW, s.HalfH);
+        if (BarePiece(s, owner) is not { } bare) return;
+        (s.LandX, s.LandY, s.LandHalfW, s.LandHalfH) = ((bare.X0 + bare.X1) / 2, (bare.Y0 + bare.Y1) / 2, (bare.X1 - bare.X0) / 2, (bare.Y1 - bare.Y0) / 2);
+        s.Covered = true;
+    }
+
+    /// <summary>The largest piece of a strip segment that its own part's body leaves bare (part coordinates), when the body covers some of it; null when the body leaves it all bare or covers it all (the check judges what lands there).</summary>
+    private static (double X0, double Y0, double X1, double Y1)? BarePiece(ProblemIsland s, ProblemItem owner)
+    {
         var (x0, y0, x1, y1) = (s.LocalX - s.HalfW, s.LocalY - s.HalfH, s.LocalX + s.HalfW, s.LocalY + s.HalfH);
         var (bx0, by0, bx1, by1) = (owner.BodyMinX, owner.BodyMinY, owner.BodyMaxX, owner.BodyMaxY);
-        if (s.Round || !owner.IsPart || !owner.HasBody || bx0 >= x1 || bx1 <= x0 || by0 >= y1 || by1 <= y0) return;
+        if (s.Round || !owner.IsPart || !owner.HasBody || bx0 >= x1 || bx1 <= x0 || by0 >= y1 || by1 <= y0) return null;
         // the bare pieces beside the body, each the island's full width or height
         (double X0, double Y0, double X1, double Y1)[] pieces = [(x0, y0, bx0, y1), (bx1, y0, x1, y1), (x0, y0, x1, by0), (x0, by1, x1, y1)];
         var best = pieces.Where(p => p.X1 > p.X0 && p.Y1 > p.Y0).OrderByDescending(p => (p.X1 - p.X0) * (p.Y1 - p.Y0)).FirstOrDefault();
-        if (best == default) return; // all under the body: the check judges what lands there
-        (s.LandX, s.LandY, s.LandHalfW, s.LandHalfH) = ((best.X0 + best.X1) / 2, (best.Y0 + best.Y1) / 2, (best.X1 - best.X0) / 2, (best.Y1 - best.Y0) / 2);
-        s.Covered = true;
+        return best == default ? null : best;
     }
 
     private static string NextId(HashSet<string> used, ref int number)
@@ -251,6 +257,9 @@ internal static class ProblemBuilder
                     HalfW = run.Vertical ? run.Width / 2 : (to - from) / 2, HalfH = run.Vertical ? (to - from) / 2 : run.Width / 2,
                     Capacity = capacityInner, StripGroup = group, StripIndex = k, Id = $"{item.Part!.Ref}-{pin.Pin}",
                 };
+                // Leads from elsewhere land only on the copper the body leaves bare: the segment takes its own pin and what fits there.
+                if (BarePiece(island, item) is { } bare)
+                    island.Capacity = Math.Min(island.Capacity, 1 + project.Toolkit.LeadsOn(bare.X1 - bare.X0, bare.Y1 - bare.Y0));
                 leads[byPin[pin.Pin]].OwnIsland = islands.Count;
                 own.Add(islands.Count);
                 islands.Add(island);
