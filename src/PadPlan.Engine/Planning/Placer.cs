@@ -82,7 +82,7 @@ public static class Placer
             else annealer.Resume(best!.State);
             annealer.Run(settings.MovesFactor, (step, cost, violation) => progress?.Report(new PlacerProgress(k + 1, "annealing", step, cost, violation)));
             var legal = Legaliser.Finish(state);
-            for (var rework = 0; !legal && rework < PlacerLimits.ReworkTries && state.Violation <= PlacerLimits.HopelessViolationPerItem * problem.Items.Length; rework++)
+            for (var rework = 0; !legal && rework < PlacerLimits.ReworkTries && state.Violation <= PlacerLimits.ReworkViolationPerItem * problem.Items.Length; rework++)
             {
                 annealer.Rework(settings.MovesFactor, rework);
                 legal = Legaliser.Finish(state);

@@ -73,8 +73,14 @@ internal static class PlacerLimits
     public const double RunsAgree = 0.03;
     /// <summary>Extra temperature steps at the final temperature while rules are still broken.</summary>
     public const int CleanupSteps = 12;
-    /// <summary>Times a run the legaliser leaves short (but not hopeless) is annealed a little more and legalised again.</summary>
+    /// <summary>Times a run the legaliser leaves a little short is annealed a little more and legalised again.</summary>
     public const int ReworkTries = 3;
+    /// <summary>
+    /// Broken rules (mm per item) after the legaliser up to which a run is reworked: a few knots in a large layout (a
+    /// 300- or 500-resistor ring: 0.002 mm per item or less), not a small layout that is broken all over (a failed run of
+    /// the crystal oscillator: 0.01 mm per item, never mended by rework, and 0.3 s of its 1 s went on trying).
+    /// </summary>
+    public const double ReworkViolationPerItem = 0.005;
     /// <summary>Temperature steps of each such rework.</summary>
     public const int ReworkSteps = 4;
     /// <summary>Temperature of a rework after the first, as a fraction of the run's final temperature: warm enough for a trade of places to pass, cool enough to keep the legal rest (at the full final temperature the layout broke open again by 8-12 mm on a 300-resistor ring).</summary>

@@ -41,7 +41,7 @@ internal static class PlacementCheck
                 if (clear >= JointHeight - CheckContext.Eps) continue;
                 yield return Findings.Warning(RuleIds.BodyOverPad,
                     $"the body of {part.Ref} lies over pad {c.Id} of net {net}, which it does not connect to, {Text.Mm(Math.Max(0, clear))} above its top.",
-                    "Fine for an insulated body lying flat; otherwise move the part so nothing presses on the joint.",
+                    "Fine where no joint is soldered under it and the body is insulated; otherwise move the part, or stand it higher on its leads, so nothing presses on a joint.",
                     c.Island.Center, part.Ref, c.Id);
             }
         }
