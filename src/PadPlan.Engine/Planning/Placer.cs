@@ -131,16 +131,38 @@ public static class Placer
     private static RunOutcome PlaceOnAutoBoard(PlacementProblem problem, PlacerSettings settings, IProgress<PlacerProgress>? progress)
     {
         var region = problem.Region;
+        var ownPads = new SortedSet<string>(StringComparer.Ordinal);
         RunOutcome? outcome = null;
         for (var attempt = 0; attempt <= PlacerLimits.AutoGrowTries; attempt++)
         {
             outcome = RunAll(problem.WithRegion(region), settings, progress);
             if (outcome.Legal) return outcome;
+            if (WithOwnPads(ref problem, outcome, ownPads, settings))
+            {
+                outcome = RunAll(problem.WithRegion(region), settings, progress);
+                if (outcome.Legal) return outcome;
+            }
             region = region with { MaxX = region.MinX + region.Width * PlacerLimits.AutoGrowFactor, MaxY = region.MinY + region.Height * PlacerLimits.AutoGrowFactor };
         }
         throw new PlacementImpossibleException(new PlacementFailure(
             "no legal layout found even on a generous automatic board: " + string.Join("; ", outcome!.State.Problems().Take(3)) + ".",
             "Check the named nets' lead limits (maxLead, rules.maxLead*) and pad gaps; try --effort thorough or another --seed."));
+    }
+
+    /// <summary>
+    /// After a failed try: the nets it left broken at an IC's strip segments (a lead that does not reach one, or runs under a
+    /// body to get there) join <paramref name="ownPads"/>, and the problem is planned again with pads of their own for every
+    /// lead from elsewhere, so such a lead can land beside its part and a wire link joins the pad to the segment. False when
+    /// no new net is named (the problem stays as it was). Only a failing try changes anything, so layouts that place
+    /// without it stay the same.
+    /// </summary>
+    private static bool WithOwnPads(ref PlacementProblem problem, RunOutcome failed, SortedSet<string> ownPads, PlacerSettings settings)
+    {
+        var before = ownPads.Count;
+        ownPads.UnionWith(failed.State.NetsShortAtStrips());
+        if (ownPads.Count == before) return false;
+        problem = ProblemBuilder.Build(problem.Project, settings, problem.Weights, ownPads);
+        return true;
     }
 
     private static RunOutcome PlaceOnBoard(PlacementProblem problem, PlacerSettings settings, IProgress<PlacerProgress>? progress)
@@ -151,6 +173,11 @@ public static class Placer
         {
             var outcome = RunAll(problem, settings, progress);
             if (outcome.Legal) return outcome;
+            if (WithOwnPads(ref problem, outcome, new SortedSet<string>(StringComparer.Ordinal), settings))
+            {
+                outcome = RunAll(problem, settings, progress);
+                if (outcome.Legal) return outcome;
+            }
         }
         // Find how big the board would have to be, keeping its proportions, with a quick search.
         var quick = settings with { Effort = Effort.Quick };

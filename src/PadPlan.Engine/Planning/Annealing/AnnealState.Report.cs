@@ -31,6 +31,25 @@ internal sealed partial class AnnealState
         return found.OrderByDescending(f => f.V).Select(f => f.Text);
     }
 
+    /// <summary>
+    /// Nets the layout still breaks at an IC's strip segments: a lead that does not reach, or whose run passes under a body,
+    /// on a net that lands on strip segments. Planned again with pads of their own, such leads can land beside their parts,
+    /// and a wire link joins the pad to the segment, instead of going round or under the IC.
+    /// </summary>
+    public IReadOnlyCollection<string> NetsShortAtStrips()
+    {
+        var found = new SortedSet<string>(StringComparer.Ordinal);
+        bool OnStrips(int n) => _nets[n].Islands.Any(s => _islands[s].StripGroup >= 0 && _items[_islands[s].Item].IsPart);
+        for (var n = 0; n < _nets.Length; n++)
+            if (_netViol[n] > 1e-9 && OnStrips(n)) found.Add(_nets[n].Net.Name);
+        for (var l = 0; l < _leads.Length; l++)
+        {
+            var net = _leads[l].Net;
+            if (_runs[l] && net >= 0 && _leads[l].OwnIsland < 0 && RunNear(l, _lx[l], _ly[l]) > 1e-9 && OnStrips(net)) found.Add(_nets[net].Net.Name);
+        }
+        return found;
+    }
+
     /// <summary>Total length of all leads as they land now (mm).</summary>
     public double LeadTotal()
     {

@@ -5,7 +5,8 @@ namespace PadPlan.Planning;
 /// <summary>Compiles a project into a <see cref="PlacementProblem"/>: which items move, which stay, the strips under DIPs, the planned pads of every net and the ground landing choices of every ground lead.</summary>
 internal static class ProblemBuilder
 {
-    public static PlacementProblem Build(Project project, PlacerSettings settings, CostWeights weights)
+    /// <param name="ownPadNets">Nets whose strip segments are not counted as room for leads from elsewhere: every such lead gets room on a pad of its own (an earlier try left the net broken at a strip).</param>
+    public static PlacementProblem Build(Project project, PlacerSettings settings, CostWeights weights, IReadOnlySet<string>? ownPadNets = null)
     {
         var rules = project.Rules;
         var toolkit = project.Toolkit;
@@ -72,8 +73,10 @@ internal static class ProblemBuilder
         {
             var netLeads = leads.Select((l, i) => (l, i)).Where(x => x.l.Net == index).Select(x => x.i).ToArray();
             var spare = 0;
+            var ownPads = ownPadNets?.Contains(net.Net.Name) == true;
             foreach (var island in islands.Where(s => s.Net == index))
             {
+                if (ownPads && items[island.Item].IsPart) continue;
                 var room = island.Capacity - netLeads.Count(l => leads[l].OwnIsland >= 0 && islands[leads[l].OwnIsland] == island);
                 // A strip segment is counted for one extra lead only: crowding every lead of a net onto IC segments pins the IC down.
                 spare += items[island.Item].IsPart ? Math.Min(1, room) : room;
