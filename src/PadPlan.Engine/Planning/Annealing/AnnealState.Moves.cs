@@ -16,6 +16,14 @@ internal sealed partial class AnnealState
     public double DeltaCost { get; private set; }
     public double DeltaViolation { get; private set; }
 
+    /// <summary>Opens a move in which items a and b trade places (each keeps its turn).</summary>
+    public void BeginTrade(int a, int b)
+    {
+        Begin(a, b);
+        (X[a], X[b]) = (X[b], X[a]);
+        (Y[a], Y[b]) = (Y[b], Y[a]);
+    }
+
     /// <summary>Opens a move of item a (and b, when two move together): remembers where they are and what their terms cost now.</summary>
     public void Begin(int a, int b = -1)
     {

@@ -297,10 +297,7 @@ internal sealed class Annealer
                 var ia = _rng.Next(_parts.Length);
                 var ib = _rng.Next(_parts.Length - 1);
                 if (ib >= ia) ib++;
-                var (a, b) = (_parts[ia], _parts[ib]);
-                _s.Begin(a, b);
-                (_s.X[a], _s.X[b]) = (_s.X[b], _s.X[a]);
-                (_s.Y[a], _s.Y[b]) = (_s.Y[b], _s.Y[a]);
+                _s.BeginTrade(_parts[ia], _parts[ib]);
                 break;
             }
             default:
@@ -392,9 +389,7 @@ internal sealed class Annealer
         {
             var (a, b) = pick == 0 ? (p.Leads[l].Item, p.Leads[q].Item) : (_s.HolderOf(l), _s.HolderOf(q));
             if (a < 0 || b < 0 || a == b || p.Items[a].Fixed || p.Items[b].Fixed) return false;
-            _s.Begin(a, b);
-            (_s.X[a], _s.X[b]) = (_s.X[b], _s.X[a]);
-            (_s.Y[a], _s.Y[b]) = (_s.Y[b], _s.Y[a]);
+            _s.BeginTrade(a, b);
             return true;
         }
         var i = p.Leads[_rng.NextDouble() < 0.5 ? l : q].Item;

@@ -98,9 +98,7 @@ internal static class Legaliser
     {
         var items = s.Problem.Items;
         if (a < 0 || b < 0 || a == b || items[a].Fixed || items[b].Fixed) return false;
-        s.Begin(a, b);
-        (s.X[a], s.X[b]) = (s.X[b], s.X[a]);
-        (s.Y[a], s.Y[b]) = (s.Y[b], s.Y[a]);
+        s.BeginTrade(a, b);
         s.Evaluate();
         if (s.DeltaViolation < -Clean) { s.Commit(); return true; }
         s.Rollback();
