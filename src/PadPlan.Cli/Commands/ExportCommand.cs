@@ -16,7 +16,8 @@ public static class ExportCommand
         var geometry = new Option<FileInfo?>("--geometry") { Description = "Write the resolved geometry (pads, parts, leads, jumpers, rules) as JSON to this file." };
         var spice = new Option<FileInfo?>("--spice") { Description = "Write the circuit as the layout builds it (nets from pads, strips, jumpers and the plane) as a SPICE deck to this file." };
         var model = new Option<FileInfo?>("--model") { Description = "Write a 3D model of the planned board (board, pads, part bodies at their heights, bent leads) as binary glTF 2.0 (.glb) to this file." };
-        var command = new Command("export", "Write the resolved geometry of a plan as JSON, the circuit the layout builds as a SPICE deck, or a 3D model of the board as glTF.") { project, geometry, spice, model };
+        var force = new Option<bool>("--force") { Description = "Replace an existing output file even when padplan did not write it." };
+        var command = new Command("export", "Write the resolved geometry of a plan as JSON, the circuit the layout builds as a SPICE deck, or a 3D model of the board as glTF.") { project, geometry, spice, model, force };
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
@@ -30,6 +31,10 @@ public static class ExportCommand
             foreach (var target in new[] { geometryFile, spiceFile, modelFile }.OfType<FileInfo>())
                 if (Path.GetFullPath(target.FullName) == Path.GetFullPath(file.FullName))
                     throw new UsageException("the export file would overwrite the project; choose another name.");
+            var replace = parse.GetValue(force);
+            if (geometryFile is not null) OutputGuard.EnsureReplaceable(geometryFile, replace, "a geometry export", head => GeometryExport.IsOwn(head));
+            if (spiceFile is not null) OutputGuard.EnsureReplaceable(spiceFile, replace, "a SPICE deck", head => ExtractedDeck.IsOwn(head));
+            if (modelFile is not null) OutputGuard.EnsureReplaceable(modelFile, replace, "a 3D model", head => GlbFile.IsOwn(head));
             if (geometryFile is not null)
             {
                 GeometryExport.Write(plan, geometryFile.FullName);

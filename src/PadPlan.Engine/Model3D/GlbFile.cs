@@ -13,10 +13,14 @@ namespace PadPlan.Model3D;
 /// "R1.2 joint"), each jumper id.</remarks>
 public static class GlbFile
 {
+    /// <summary>The asset's generator field: names PadPlan (so an export can tell its own files) and the library that writes them.</summary>
+    public const string Generator = "PadPlan (SharpGLTF)";
+
     /// <summary>The glb bytes of the model: the same model gives the same bytes.</summary>
     public static byte[] Write(BoardModel model)
     {
         var root = ModelRoot.CreateModel();
+        root.Asset.Generator = Generator;
         var scene = root.UseScene(model.Name);
         var materials = new Dictionary<Finish, Material>();
         foreach (var node in model.Nodes) Add(root, materials, scene.CreateNode(node.Name), node);
@@ -24,6 +28,10 @@ public static class GlbFile
         root.WriteGLB(stream);
         return stream.ToArray();
     }
+
+    /// <summary>The first bytes of a file are a binary glTF that PadPlan wrote: the glb magic, and its generator in the JSON chunk that follows.</summary>
+    public static bool IsOwn(ReadOnlySpan<byte> head) =>
+        head.StartsWith("glTF"u8) && head.IndexOf(System.Text.Encoding.UTF8.GetBytes($"\"generator\":\"{Generator}\"")) >= 0;
 
     /// <summary>A point of the board model in the file's frame (metres, Y up).</summary>
     public static Vector3 ToFile(Point3 p) => new((float)(p.X / 1000), (float)(p.Z / 1000), (float)(p.Y / 1000));

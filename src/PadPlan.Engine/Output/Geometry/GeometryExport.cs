@@ -14,6 +14,9 @@ public static class GeometryExport
 {
     public const string FormatTag = "padplan-geometry/1";
 
+    /// <summary>The first bytes of a file are a geometry export of PadPlan's (any version of the format).</summary>
+    public static bool IsOwn(ReadOnlySpan<byte> head) => head.IndexOf("\"format\": \"padplan-geometry/"u8) >= 0;
+
     /// <summary>Builds the document; the project must have a layout and a board of known size.</summary>
     public static GeometryDocument Build(Project project)
     {

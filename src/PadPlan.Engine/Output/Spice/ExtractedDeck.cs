@@ -20,6 +20,9 @@ public static class ExtractedDeck
     /// <summary>The deck as text (what export --spice writes).</summary>
     public static string Write(Project project) => Build(project).Text;
 
+    /// <summary>The first bytes of a file are a deck PadPlan wrote: its title line.</summary>
+    public static bool IsOwn(ReadOnlySpan<byte> head) => head.StartsWith(System.Text.Encoding.UTF8.GetBytes(PadPlan.Model.Spice.SpiceDeck.TitlePrefix));
+
     /// <summary>The deck as a model: every line parsed and checked, in the order it is written.</summary>
     public static SpiceDeck Build(Project project)
     {

@@ -1,0 +1,22 @@
+namespace PadPlan.Cli.Commands;
+
+/// <summary>
+/// Output files never cost the builder a file of their own: one that exists is replaced only when PadPlan wrote it
+/// (recognised by its first bytes, as its format marks it), or when the builder gives --force.
+/// </summary>
+internal static class OutputGuard
+{
+    /// <summary>Bytes read from the start of an existing file to recognise it.</summary>
+    private const int HeadBytes = 4096;
+
+    /// <summary>Throws (exit 2, nothing written) when <paramref name="target"/> exists, holds something, and is not a <paramref name="kind"/> PadPlan wrote.</summary>
+    public static void EnsureReplaceable(FileInfo target, bool force, string kind, Func<byte[], bool> isOwn)
+    {
+        target.Refresh();
+        if (force || !target.Exists || target.Length == 0) return;
+        var head = new byte[(int)Math.Min(HeadBytes, target.Length)];
+        using (var stream = target.OpenRead()) stream.ReadExactly(head);
+        if (isOwn(head)) return;
+        throw new UsageException($"{target.FullName} already exists and is not {kind} that padplan wrote, so it is left alone. Give another file name, or --force to replace it.");
+    }
+}
