@@ -12,12 +12,13 @@ public static class BomCommand
     {
         var project = SharedOptions.ProjectArgument();
         var csv = SharedOptions.CsvOption();
+        var force = SharedOptions.ForceOutput();
         var wide = SharedOptions.Wide();
         var buildOrder = new Option<bool>("--build-order")
         {
             Description = "Also print the build order: numbered steps from input to output (needs a placed project).",
         };
-        var command = new Command("bom", "List the parts to gather, grouped by value and footprint.") { project, csv, buildOrder, wide };
+        var command = new Command("bom", "List the parts to gather, grouped by value and footprint.") { project, csv, buildOrder, wide, force };
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
@@ -27,7 +28,7 @@ public static class BomCommand
             if (withOrder) tables.Add(("build-order", BuildOrderTable.Table(loaded)));
             TableOutput.Print(context, tables.Select(t => t.Table), SharedOptions.TableWidth(context, parse, wide));
             var csvFile = parse.GetValue(csv);
-            if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, tables);
+            if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, tables, parse.GetValue(force));
             return ExitCodes.Success;
         }));
         return command;

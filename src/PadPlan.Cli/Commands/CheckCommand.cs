@@ -13,6 +13,7 @@ public static class CheckCommand
     {
         var project = SharedOptions.ProjectArgument();
         var json = new Option<FileInfo?>("--json") { Description = "Also write the findings as JSON to this file." };
+        var force = SharedOptions.ForceOutput();
         var strict = new Option<bool>("--strict") { Description = "Fail (exit 1) on warnings too, not only on errors." };
         var parasitics = new Option<bool>("--parasitics") { Description = "Estimate pad capacitance and lead inductance for every net, not only rf nets." };
         var quiet = SharedOptions.Quiet();
@@ -20,7 +21,7 @@ public static class CheckCommand
         var wide = SharedOptions.Wide();
         var command = new Command("check", "Check a plan against its circuit: connectivity, spacing, reach, high voltage; polarity and ratings at the simulated operating point; estimate parasitics.")
         {
-            project, json, strict, parasitics, quiet, ngspice, wide,
+            project, json, strict, parasitics, quiet, ngspice, wide, force,
         };
         command.SetAction(parse => context.Guarded(() =>
         {
@@ -31,6 +32,7 @@ public static class CheckCommand
             var report = Checker.Check(plan, new CheckOptions(parse.GetValue(parasitics), simulation));
             if (parse.GetValue(json) is { } jsonFile)
             {
+                OutputGuard.EnsureReplaceable(jsonFile, parse.GetValue(force), "a check report", head => CheckReportJson.IsOwn(head));
                 AtomicFile.WriteAllBytes(jsonFile.FullName, CheckReportJson.ToBytes(plan.Name, report, isStrict));
                 context.Err.WriteLine($"Wrote {jsonFile.FullName}");
             }

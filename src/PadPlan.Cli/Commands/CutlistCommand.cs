@@ -22,8 +22,9 @@ public static class CutlistCommand
             DefaultValueFactory = _ => CutOptions.Default.Kerf,
         };
         var csv = SharedOptions.CsvOption();
+        var force = SharedOptions.ForceOutput();
         var wide = SharedOptions.Wide();
-        var command = new Command("cutlist", "List the pads to punch and cut, with a cutting plan for your stock.") { project, stock, kerf, csv, wide };
+        var command = new Command("cutlist", "List the pads to punch and cut, with a cutting plan for your stock.") { project, stock, kerf, csv, wide, force };
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
@@ -37,7 +38,7 @@ public static class CutlistCommand
             TableOutput.Print(context, tables, SharedOptions.TableWidth(context, parse, wide));
             var csvFile = parse.GetValue(csv);
             if (csvFile is not null)
-                TableOutput.WriteCsv(context, csvFile, [("rounds", tables[0]), ("pieces", tables[1]), ("plan", tables[2])]);
+                TableOutput.WriteCsv(context, csvFile, [("rounds", tables[0]), ("pieces", tables[1]), ("plan", tables[2])], parse.GetValue(force));
             if (list.Plan.Complete) return ExitCodes.Success;
             context.Err.WriteLine($"error: the stock is too small: {list.Plan.Unplaced.Count} piece(s) do not fit ({string.Join(", ", list.Plan.Unplaced.Select(p => p.Id))}). Give more or larger stock with --stock WxH.");
             return ExitCodes.RuleViolations;

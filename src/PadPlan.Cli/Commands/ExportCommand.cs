@@ -16,7 +16,7 @@ public static class ExportCommand
         var geometry = new Option<FileInfo?>("--geometry") { Description = "Write the resolved geometry (pads, parts, leads, jumpers, rules) as JSON to this file." };
         var spice = new Option<FileInfo?>("--spice") { Description = "Write the circuit as the layout builds it (nets from pads, strips, jumpers and the plane) as a SPICE deck to this file." };
         var model = new Option<FileInfo?>("--model") { Description = "Write a 3D model of the planned board (board, pads, part bodies at their heights, bent leads) as binary glTF 2.0 (.glb) to this file." };
-        var force = new Option<bool>("--force") { Description = "Replace an existing output file even when padplan did not write it." };
+        var force = SharedOptions.ForceOutput();
         var command = new Command("export", "Write the resolved geometry of a plan as JSON, the circuit the layout builds as a SPICE deck, or a 3D model of the board as glTF.") { project, geometry, spice, model, force };
         command.SetAction(parse => context.Guarded(() =>
         {

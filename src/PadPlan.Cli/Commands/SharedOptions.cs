@@ -19,6 +19,9 @@ public static class SharedOptions
         AllowMultipleArgumentsPerToken = false,
     };
 
+    /// <summary>--force for commands that write output files: replace one even when padplan did not write it (<see cref="OutputGuard"/>).</summary>
+    public static Option<bool> ForceOutput() => new("--force") { Description = "Replace an existing output file even when padplan did not write it." };
+
     public static Option<FileInfo?> CsvOption() => new("--csv")
     {
         Description = "Also write the table as CSV to this file.",

@@ -24,15 +24,28 @@ public static class TableOutput
     /// <summary>
     /// Writes each table as CSV: the first to the file named, the others beside it with the table's name added
     /// ("bom.csv", "bom-build-order.csv"), so each file is one plain table a spreadsheet opens. The files are written as
-    /// one set: all of them, or (on a failure) none.
+    /// one set: all of them, or (on a failure) none. A file that exists is replaced only when it is padplan's CSV of the
+    /// same table (its header row is the table's), or with <paramref name="force"/>.
     /// </summary>
-    public static void WriteCsv(CommandContext context, FileInfo file, IReadOnlyList<(string Suffix, ReportTable Table)> tables)
+    public static void WriteCsv(CommandContext context, FileInfo file, IReadOnlyList<(string Suffix, ReportTable Table)> tables, bool force)
     {
         var dir = file.DirectoryName ?? ".";
         var stem = Path.GetFileNameWithoutExtension(file.Name);
         var ext = file.Extension.Length > 0 ? file.Extension : ".csv";
         var files = tables.Select((t, i) => (Path: i == 0 ? file.FullName : Path.Combine(dir, $"{stem}-{t.Suffix}{ext}"), Bytes: new System.Text.UTF8Encoding(false).GetBytes(TableText.ToCsv(t.Table)))).ToList();
+        foreach (var (path, bytes) in files)
+        {
+            var header = HeaderRow(bytes);
+            OutputGuard.EnsureReplaceable(new FileInfo(path), force, "a table", head => HeaderRow(head).SequenceEqual(header));
+        }
         AtomicFile.WriteAll(files);
         foreach (var (path, _) in files) context.Err.WriteLine($"wrote {path}");
+    }
+
+    /// <summary>The first line of CSV bytes (the header row), without its line end.</summary>
+    private static byte[] HeaderRow(byte[] bytes)
+    {
+        var end = Array.IndexOf(bytes, (byte)'\n');
+        return (end < 0 ? bytes : bytes[..end]).ToArray();
     }
 }

@@ -11,6 +11,7 @@ public static class TestplanCommand
     {
         var project = SharedOptions.ProjectArgument();
         var csv = SharedOptions.CsvOption();
+        var force = SharedOptions.ForceOutput();
         var wide = SharedOptions.Wide();
         var threshold = new Option<double>("--beep-below")
         {
@@ -18,7 +19,7 @@ public static class TestplanCommand
             DefaultValueFactory = _ => DcPaths.DefaultThreshold,
         };
         var ngspice = SharedOptions.Ngspice();
-        var command = new Command("testplan", "Write a continuity test sheet for checking the finished board, and the power-up steps.") { project, csv, threshold, ngspice, wide };
+        var command = new Command("testplan", "Write a continuity test sheet for checking the finished board, and the power-up steps.") { project, csv, threshold, ngspice, wide, force };
         command.SetAction(parse => context.Guarded(() =>
         {
             var placed = TableOutput.ReadPlaced(parse.GetValue(project)!);
@@ -28,7 +29,7 @@ public static class TestplanCommand
             var tables = TestPlanTables.Tables(placed, ohms, simulation);
             TableOutput.Print(context, tables, SharedOptions.TableWidth(context, parse, wide));
             var csvFile = parse.GetValue(csv);
-            if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, [("tests", tables[0]), ("paths", tables[1]), ("power-up", tables[2])]);
+            if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, [("tests", tables[0]), ("paths", tables[1]), ("power-up", tables[2])], parse.GetValue(force));
             return ExitCodes.Success;
         }));
         return command;

@@ -9,6 +9,9 @@ public static class CheckReportJson
 {
     public const string FormatTag = "padplan-check/1";
 
+    /// <summary>The first bytes of a file are a check report of PadPlan's (any version of the format).</summary>
+    public static bool IsOwn(ReadOnlySpan<byte> head) => head.IndexOf("\"format\": \"padplan-check/"u8) >= 0;
+
     public static CheckReportDto ToDto(string project, CheckReport report, bool strict) => new()
     {
         Project = project,

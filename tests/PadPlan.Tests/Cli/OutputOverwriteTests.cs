@@ -3,11 +3,11 @@ using Xunit;
 namespace PadPlan.Tests.Cli;
 
 /// <summary>
-/// `padplan export` never costs the builder a file of their own: an existing file under the output name is replaced only
-/// when padplan wrote it (a geometry export, a deck, a model: each recognised by its own first bytes), or with --force.
-/// The project rule "never overwrite or lose a user's file"; no outside source.
+/// Output files never cost the builder a file of their own: an existing file under an output name is replaced only when
+/// padplan wrote it (a geometry export, a deck, a model, a check report: each recognised by its own first bytes; a CSV
+/// table by its header row), or with --force. The project rule "never overwrite or lose a user's file"; no outside source.
 /// </summary>
-public class ExportOverwriteTests
+public class OutputOverwriteTests
 {
     [Theory]
     [InlineData("--geometry", "g.json")]
@@ -50,5 +50,31 @@ public class ExportOverwriteTests
         File.WriteAllText(Path.Combine(dir, "d.cir"), "* someone else's deck\n");
         Assert.Equal(0, CliRunner.Run("export", project, "--spice", Path.Combine(dir, "d.cir"), "--force").ExitCode);
         Assert.StartsWith("padplan deck: ", File.ReadAllText(Path.Combine(dir, "d.cir")));
+    }
+
+    [Theory]
+    [InlineData("check", "--json", "c.json")]
+    [InlineData("bom", "--csv", "b.csv")]
+    [InlineData("cutlist", "--csv", "k.csv")]
+    public void Reports_and_tables_leave_a_foreign_file_alone_and_write_their_own_again(string command, string option, string name)
+    {
+        var project = TestPaths.CopyOfTinyBuffer();
+        var target = Path.Combine(Path.GetDirectoryName(project)!, name);
+        File.WriteAllText(target, "mine\n");
+        var refused = CliRunner.Run(command, project, option, target);
+        Assert.Equal(2, refused.ExitCode);
+        Assert.Contains("--force", refused.Err);
+        Assert.Equal("mine\n", File.ReadAllText(target));
+
+        File.Delete(target);
+        var first = CliRunner.Run(command, project, option, target);
+        Assert.True(first.ExitCode is 0 or 1, first.Err); // check exits 1 on findings; the report is written either way
+        var again = CliRunner.Run(command, project, option, target);
+        Assert.Equal(first.ExitCode, again.ExitCode);
+        Assert.NotEqual("mine\n", File.ReadAllText(target));
+
+        File.WriteAllText(target, "mine\n");
+        Assert.Equal(first.ExitCode, CliRunner.Run(command, project, option, target, "--force").ExitCode);
+        Assert.NotEqual("mine\n", File.ReadAllText(target));
     }
 }
