@@ -46,6 +46,6 @@ public static class TableOutput
     private static byte[] HeaderRow(byte[] bytes)
     {
         var end = Array.IndexOf(bytes, (byte)'\n');
-        return (end < 0 ? bytes : bytes[..end]).ToArray();
+        return end < 0 ? bytes : bytes[..end];
     }
 }
