@@ -32,7 +32,7 @@ public static class CheckCommand
             var report = Checker.Check(plan, new CheckOptions(parse.GetValue(parasitics), simulation));
             if (parse.GetValue(json) is { } jsonFile)
             {
-                OutputGuard.EnsureReplaceable(jsonFile, parse.GetValue(force), "a check report", head => CheckReportJson.IsOwn(head));
+                OutputGuard.EnsureReplaceable(jsonFile, parse.GetValue(force), "a check report that padplan wrote", head => CheckReportJson.IsOwn(head));
                 AtomicFile.WriteAllBytes(jsonFile.FullName, CheckReportJson.ToBytes(plan.Name, report, isStrict));
                 context.Err.WriteLine($"Wrote {jsonFile.FullName}");
             }

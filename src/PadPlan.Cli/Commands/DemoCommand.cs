@@ -27,22 +27,23 @@ public static class DemoCommand
         var example = new Option<string>("--example") { Description = $"Which bundled example: {string.Join(", ", Examples)}.", DefaultValueFactory = _ => Examples[0] };
         example.AcceptOnlyFromAmong([.. Examples]);
         var date = new Option<string?>("--date") { Description = "Date printed on the sheets, YYYY-MM-DD. Default: from SOURCE_DATE_EPOCH if set, else today." };
-        var command = new Command("demo", "Run the whole pipeline on a bundled example and show where the files are.") { output, example, date };
+        var force = SharedOptions.ForceOutput();
+        var command = new Command("demo", "Run the whole pipeline on a bundled example and show where the files are.") { output, example, date, force };
         command.SetAction(parse => context.Guarded(() =>
         {
             var name = parse.GetValue(example)!;
             var dir = parse.GetValue(output)!.FullName;
             var printedDate = SheetsCommand.ResolveDate(parse.GetValue(date), Environment.GetEnvironmentVariable("SOURCE_DATE_EPOCH"));
-            return Run(context, name, dir, printedDate);
+            return Run(context, name, dir, printedDate, parse.GetValue(force));
         }));
         return command;
     }
 
-    private static int Run(CommandContext context, string name, string dir, DateOnly printedDate)
+    private static int Run(CommandContext context, string name, string dir, DateOnly printedDate, bool force)
     {
         var source = ExampleFolder(name);
         var netlist = Directory.EnumerateFiles(source).Where(f => f.EndsWith(".ppn", StringComparison.Ordinal) || f.EndsWith(".cir", StringComparison.Ordinal)).Order(StringComparer.Ordinal).First();
-        using var set = OutputSet.Begin(dir);
+        using var set = OutputSet.Begin(dir, force);
         var say = context.Err;
         say.WriteLine($"PadPlan demo: {name} ({Path.GetFileName(netlist)})");
 
@@ -87,7 +88,7 @@ public static class DemoCommand
         // 5. sheets
         var book = SheetBook.Build(project, new SheetOptions(Paper.A4, printedDate, simulation), check, materials.All, materials.Cutting);
         var sheets = SheetOutput.Add(set, book, SheetFormats.All, dpi: 150);
-        set.Commit();
+        SheetOutput.Commit(set, force);
         say.WriteLine($"5. sheets: {book.Summary()} ({sheets} files)");
 
         context.Out.WriteLine($"Demo finished. Files are in {dir}:");

@@ -32,9 +32,9 @@ public static class ExportCommand
                 if (Path.GetFullPath(target.FullName) == Path.GetFullPath(file.FullName))
                     throw new UsageException("the export file would overwrite the project; choose another name.");
             var replace = parse.GetValue(force);
-            if (geometryFile is not null) OutputGuard.EnsureReplaceable(geometryFile, replace, "a geometry export", head => GeometryExport.IsOwn(head));
-            if (spiceFile is not null) OutputGuard.EnsureReplaceable(spiceFile, replace, "a SPICE deck", head => ExtractedDeck.IsOwn(head));
-            if (modelFile is not null) OutputGuard.EnsureReplaceable(modelFile, replace, "a 3D model", head => GlbFile.IsOwn(head));
+            if (geometryFile is not null) OutputGuard.EnsureReplaceable(geometryFile, replace, "a geometry export that padplan wrote", head => GeometryExport.IsOwn(head));
+            if (spiceFile is not null) OutputGuard.EnsureReplaceable(spiceFile, replace, "a SPICE deck that padplan wrote", head => ExtractedDeck.IsOwn(head));
+            if (modelFile is not null) OutputGuard.EnsureReplaceable(modelFile, replace, "a 3D model that padplan wrote", head => GlbFile.IsOwn(head));
             if (geometryFile is not null)
             {
                 GeometryExport.Write(plan, geometryFile.FullName);

@@ -22,7 +22,8 @@ public static class SheetsCommand
         var dpi = new Option<int>("--dpi") { Description = $"Resolution of the PNG previews, {PngWriter.MinDpi:0} to {PngWriter.MaxDpi:0} dots per inch.", DefaultValueFactory = _ => 150 };
         var date = new Option<string?>("--date") { Description = "Date printed on the sheets, YYYY-MM-DD. Default: from SOURCE_DATE_EPOCH if set, else today." };
         var ngspice = SharedOptions.Ngspice();
-        var command = new Command("sheets", "Print 1:1 template, assembly view and report pages (PDF, SVG, PNG).") { project, output, paper, formats, dpi, date, ngspice };
+        var force = SharedOptions.ForceOutput();
+        var command = new Command("sheets", "Print 1:1 template, assembly view and report pages (PDF, SVG, PNG).") { project, output, paper, formats, dpi, date, ngspice, force };
         command.SetAction(parse => context.Guarded(() =>
         {
             var file = parse.GetValue(project)!;
@@ -41,7 +42,7 @@ public static class SheetsCommand
             var materials = MaterialsTables.Of(plan, simulation: simulation);
             var book = SheetBook.Build(plan, new SheetOptions(chosenPaper, printedDate, simulation), check, materials.All, materials.Cutting);
             context.Err.WriteLine(PadPlan.Simulation.NetVoltage.Summary(simulation));
-            SheetOutput.Write(context, book, parse.GetValue(output)!.FullName, chosenFormats, resolution);
+            SheetOutput.Write(context, book, parse.GetValue(output)!.FullName, chosenFormats, resolution, parse.GetValue(force));
             context.Err.WriteLine($"{book.Summary()}; on {chosenPaper.Name}, dated {printedDate:yyyy-MM-dd}.");
             context.Err.WriteLine("Print the template at actual size and measure its check bar before cutting.");
             return ExitCodes.Success;

@@ -36,14 +36,14 @@ public static class TableOutput
         foreach (var (path, bytes) in files)
         {
             var header = HeaderRow(bytes);
-            OutputGuard.EnsureReplaceable(new FileInfo(path), force, "a table", head => HeaderRow(head).SequenceEqual(header));
+            OutputGuard.EnsureReplaceable(new FileInfo(path), force, "a table that padplan wrote", head => HeaderRow(head).SequenceEqual(header));
         }
         AtomicFile.WriteAll(files);
         foreach (var (path, _) in files) context.Err.WriteLine($"wrote {path}");
     }
 
-    /// <summary>The first line of CSV bytes (the header row), without its line end.</summary>
-    private static byte[] HeaderRow(byte[] bytes)
+    /// <summary>The first line of a table's bytes (a CSV file's header row, a text table's title), without its line end.</summary>
+    internal static byte[] HeaderRow(byte[] bytes)
     {
         var end = Array.IndexOf(bytes, (byte)'\n');
         return end < 0 ? bytes : bytes[..end];

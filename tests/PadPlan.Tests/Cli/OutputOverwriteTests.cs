@@ -1,3 +1,4 @@
+using PadPlan.ProjectFiles;
 using Xunit;
 
 namespace PadPlan.Tests.Cli;
@@ -5,7 +6,9 @@ namespace PadPlan.Tests.Cli;
 /// <summary>
 /// Output files never cost the builder a file of their own: an existing file under an output name is replaced only when
 /// padplan wrote it (a geometry export, a deck, a model, a check report: each recognised by its own first bytes; a CSV
-/// table by its header row), or with --force. The project rule "never overwrite or lose a user's file"; no outside source.
+/// table by its header row; a sheet by its mark), or with --force. The folders of sheets and demo are replaced as a set,
+/// so every file in them is checked, those this run writes again and those it would remove. The project rule "never
+/// overwrite or lose a user's file"; no outside source.
 /// </summary>
 public class OutputOverwriteTests
 {
@@ -77,4 +80,117 @@ public class OutputOverwriteTests
         Assert.Equal(first.ExitCode, CliRunner.Run(command, project, option, target, "--force").ExitCode);
         Assert.NotEqual("mine\n", File.ReadAllText(target));
     }
+
+    [Theory]
+    [InlineData("template-1.svg")]
+    [InlineData("template-1.png")]
+    [InlineData("sheets.pdf")]
+    public void Sheets_leave_a_builders_file_under_a_page_name_alone_and_write_nothing(string name)
+    {
+        var (project, dir) = SheetsFixture();
+        Assert.Equal(0, Sheets(project, dir, "2025-01-01").ExitCode);
+        var target = Path.Combine(dir, name);
+        File.WriteAllText(target, "the builder's own page\n"); // e.g. saved over the sheet from a drawing program
+        var before = Snapshot(dir);
+
+        var refused = Sheets(project, dir, "2026-06-30");
+        Assert.Equal(2, refused.ExitCode);
+        Assert.Contains(target, refused.Err);
+        Assert.Contains("another folder", refused.Err);
+        Assert.Contains("--force", refused.Err);
+        AssertSame(before, dir); // not one file of the set written, the builder's kept byte for byte
+
+        var forced = Sheets(project, dir, "2026-06-30", "--force");
+        Assert.Equal(0, forced.ExitCode);
+        Assert.NotEqual("the builder's own page\n"u8.ToArray(), File.ReadAllBytes(target));
+        Assert.Equal(0, Sheets(project, dir, "2026-07-01").ExitCode); // padplan's own again, so replaced without asking
+    }
+
+    [Fact]
+    public void Sheets_replace_their_own_earlier_output_without_asking()
+    {
+        var (project, dir) = SheetsFixture();
+        Assert.Equal(0, Sheets(project, dir, "2025-01-01").ExitCode);
+        var first = Snapshot(dir);
+        Assert.Equal(0, Sheets(project, dir, "2026-06-30").ExitCode);
+        var second = Snapshot(dir);
+        Assert.Equal(first.Keys.Order(StringComparer.Ordinal), second.Keys.Order(StringComparer.Ordinal));
+        Assert.False(first["template-1.svg"].SequenceEqual(second["template-1.svg"])); // the new date is on the page
+        Assert.False(first["sheets.pdf"].SequenceEqual(second["sheets.pdf"]));
+    }
+
+    [Fact]
+    public void A_sheet_without_padplans_mark_is_refused_once_and_force_replaces_it()
+    {
+        // what a sheet written before the mark looks like: the same page without the mark's line
+        var (project, dir) = SheetsFixture();
+        Assert.Equal(0, Sheets(project, dir, "2025-01-01").ExitCode);
+        var page = Path.Combine(dir, "assembly-1.svg");
+        File.WriteAllText(page, File.ReadAllText(page).Replace("<!-- a PadPlan sheet -->\n", "", StringComparison.Ordinal));
+        var unmarked = File.ReadAllBytes(page);
+        Assert.Equal(2, Sheets(project, dir, "2025-01-01").ExitCode);
+        Assert.Equal(unmarked, File.ReadAllBytes(page));
+        Assert.Equal(0, Sheets(project, dir, "2025-01-01", "--force").ExitCode);
+        Assert.Equal(0, Sheets(project, dir, "2025-01-01").ExitCode);
+    }
+
+    [Fact]
+    public void Force_replaces_a_builders_file_under_a_page_name_but_never_removes_any_other()
+    {
+        var (project, dir) = SheetsFixture();
+        Directory.CreateDirectory(dir);
+        File.WriteAllText(Path.Combine(dir, "template-1.svg"), "mine");
+        Assert.Equal(2, Sheets(project, dir, "2025-01-01").ExitCode);
+        Assert.Equal("mine", File.ReadAllText(Path.Combine(dir, "template-1.svg")));
+
+        File.WriteAllText(Path.Combine(dir, "notes.txt"), "mine too");
+        var refused = Sheets(project, dir, "2025-01-01", "--force"); // the set would take notes.txt with the old folder
+        Assert.Equal(2, refused.ExitCode);
+        Assert.Contains("notes.txt", refused.Err);
+        Assert.Equal(["notes.txt", "template-1.svg"], Directory.GetFiles(dir).Select(Path.GetFileName).Order(StringComparer.Ordinal));
+        Assert.Equal("mine", File.ReadAllText(Path.Combine(dir, "template-1.svg")));
+
+        File.Delete(Path.Combine(dir, "notes.txt"));
+        Assert.Equal(0, Sheets(project, dir, "2025-01-01", "--force").ExitCode);
+        Assert.StartsWith("<?xml", File.ReadAllText(Path.Combine(dir, "template-1.svg")));
+    }
+
+    [Fact]
+    public void The_demo_replaces_its_own_files_but_not_a_plan_changed_since_nor_does_sheets_remove_it()
+    {
+        var dir = TestPaths.NewTempDir();
+        string[] demo = ["demo", "-o", dir, "--date", "2026-01-15"];
+        Assert.Equal(0, CliRunner.Run(demo).ExitCode);
+        Assert.Equal(0, CliRunner.Run(demo).ExitCode); // its own files, the project the same bytes again (deterministic)
+
+        var plan = Path.Combine(dir, "xtal-osc-40m" + ProjectFile.Extension);
+        File.WriteAllText(plan, File.ReadAllText(plan).Replace("\"Crystal test oscillator, 40 m\"", "\"my oscillator\"", StringComparison.Ordinal)); // as the editor would save it
+        var before = Snapshot(dir);
+        var refused = CliRunner.Run(demo);
+        Assert.Equal(2, refused.ExitCode);
+        Assert.Contains(plan, refused.Err);
+        AssertSame(before, dir);
+
+        // sheets into the demo's folder would remove the plan (and the tables) with the old set: refused, the plan kept
+        var sheets = CliRunner.Run("sheets", plan, "-o", dir, "--ngspice", "none", "--date", "2026-01-15");
+        Assert.Equal(2, sheets.ExitCode);
+        Assert.Contains("this run writes again", sheets.Err);
+        AssertSame(before, dir);
+
+        Assert.Equal(0, CliRunner.Run([.. demo, "--force"]).ExitCode);
+        Assert.DoesNotContain("my oscillator", File.ReadAllText(plan));
+    }
+
+    private static (string Project, string Dir) SheetsFixture()
+    {
+        var project = TestPaths.CopyOfTinyBuffer();
+        return (project, Path.Combine(Path.GetDirectoryName(project)!, "sheets"));
+    }
+
+    private static CliRunner.Result Sheets(string project, string dir, string date, params string[] more) =>
+        CliRunner.Run(["sheets", project, "-o", dir, "--ngspice", "none", "--date", date, .. more]);
+
+    private static Dictionary<string, byte[]> Snapshot(string dir) => FolderSnapshot.Of(dir);
+
+    private static void AssertSame(Dictionary<string, byte[]> before, string dir) => FolderSnapshot.AssertSame(before, dir);
 }

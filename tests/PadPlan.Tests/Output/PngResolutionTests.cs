@@ -8,7 +8,8 @@ using Xunit;
 namespace PadPlan.Tests.Output;
 
 /// <summary>
-/// The PNG previews carry their resolution in a pHYs chunk, so an image program prints them at 1:1. The file is read
+/// The PNG previews carry their resolution in a pHYs chunk, so an image program prints them at 1:1, and name PadPlan in
+/// a tEXt chunk, so a later run knows the file as its own. The file is read
 /// here by our own walk over the chunks (not by PngResolution), and each chunk's CRC is checked against the CRC-32 that
 /// .NET's GZipStream writes (RFC 1952 uses the same CRC-32 as PNG, ISO/IEC 15948 Annex D).
 /// </summary>
@@ -39,6 +40,28 @@ public class PngResolutionTests
         using var bitmap = SKBitmap.Decode(png);
         Assert.Equal((int)Math.Round(210 / 25.4 * dpi), bitmap.Width);
         Assert.Equal((uint)Math.Round(dpi / 0.0254), PngResolution.Read(png)!.Value.X);
+    }
+
+    [Fact]
+    public void Preview_png_names_padplan_in_a_software_text_chunk_within_its_first_bytes()
+    {
+        var book = SheetBook.Build(SheetFixtures.TinyBuffer(), SheetFixtures.Options(), null, []);
+        var png = PngWriter.Write(book.Sheets[0].Page, 150);
+
+        var chunks = Chunks(png);
+        var text = Assert.Single(chunks, c => c.Type == "tEXt");
+        // ISO/IEC 15948:2004 11.3.4.3: tEXt is keyword, a zero byte, text (Latin-1); 11.3.4.2 predefines the keyword "Software"
+        Assert.Equal("Software\0PadPlan"u8.ToArray(), text.Data);
+        Assert.Equal(GzipCrc([.. "tEXt"u8.ToArray(), .. text.Data]), text.Crc);
+        Assert.True(chunks.IndexOf(text) < chunks.FindIndex(c => c.Type == "IDAT"), "text before the image data, so the first bytes show it");
+        Assert.True(PngSoftware.IsOwn(png[..4096]));
+        Assert.Equal(png, PngWriter.Write(book.Sheets[0].Page, 150)); // the mark keeps the file the same from run to run
+
+        // the same picture from another program (Skia's own encoder, no mark), and a file that merely names PadPlan, are not ours
+        using var bitmap = SKBitmap.Decode(png);
+        using var plain = bitmap.Encode(SKEncodedImageFormat.Png, 100);
+        Assert.False(PngSoftware.IsOwn(plain.ToArray()[..4096]));
+        Assert.False(PngSoftware.IsOwn("Software\0PadPlan, a note"u8.ToArray()));
     }
 
     private sealed record Chunk(string Type, byte[] Data, uint Crc);

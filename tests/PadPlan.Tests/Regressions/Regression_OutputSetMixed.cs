@@ -145,13 +145,7 @@ public sealed class Regression_OutputSetMixed
     private static List<string> Names(string dir) =>
         Directory.GetFiles(dir).Select(f => Path.GetFileName(f)!).Where(n => n != OutputSet.ListName).Order(StringComparer.Ordinal).ToList();
 
-    private static Dictionary<string, byte[]> Snapshot(string dir) =>
-        Directory.GetFiles(dir).ToDictionary(f => Path.GetFileName(f)!, File.ReadAllBytes);
+    private static Dictionary<string, byte[]> Snapshot(string dir) => FolderSnapshot.Of(dir);
 
-    private static void AssertSame(Dictionary<string, byte[]> before, string dir)
-    {
-        var now = Snapshot(dir);
-        Assert.Equal(before.Keys.Order(StringComparer.Ordinal), now.Keys.Order(StringComparer.Ordinal));
-        foreach (var (name, bytes) in before) Assert.True(bytes.SequenceEqual(now[name]), $"{name} changed");
-    }
+    private static void AssertSame(Dictionary<string, byte[]> before, string dir) => FolderSnapshot.AssertSame(before, dir);
 }

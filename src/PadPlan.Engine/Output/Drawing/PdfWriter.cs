@@ -7,6 +7,19 @@ public static class PdfWriter
 {
     public const double PointsPerMm = 72.0 / 25.4;
 
+    /// <summary>The program named as Creator and Producer in the document information.</summary>
+    public const string Program = "PadPlan";
+
+    /// <summary>
+    /// True when a file's first bytes are a PDF whose document information names PadPlan as its producer. The Producer
+    /// key of the information dictionary is ISO 32000-1:2008, 14.3.3 (Table 317). That Skia writes the dictionary as the
+    /// first object, inside the first bytes, is what its output shows, not a promise of Skia's: if that changes, PadPlan's
+    /// own PDF is refused (the safe side) and PdfMarkTests fails.
+    /// </summary>
+    public static bool IsOwn(ReadOnlySpan<byte> head) => head.StartsWith("%PDF-"u8) && head.IndexOf(ProducerLine) >= 0;
+
+    private static readonly byte[] ProducerLine = System.Text.Encoding.ASCII.GetBytes($"\n/Producer ({Program})\n");
+
     /// <summary>Title and date go into the document information; the fixed date keeps the bytes the same from run to run.</summary>
     public static byte[] Write(IReadOnlyList<DrawingPage> pages, string title, DateOnly date)
     {
@@ -15,8 +28,8 @@ public static class PdfWriter
         var metadata = new SKDocumentPdfMetadata
         {
             Title = title,
-            Creator = "PadPlan",
-            Producer = "PadPlan",
+            Creator = Program,
+            Producer = Program,
             Creation = stamp,
             Modified = stamp,
             // Skia rounds the page to whole pixels at this resolution: 254 dpi is 10 pixels per mm, so every paper size in whole mm stays exact.

@@ -2,7 +2,7 @@ using SkiaSharp;
 
 namespace PadPlan.Output.Drawing;
 
-/// <summary>Renders a page as a PNG preview at a chosen resolution (dots per inch, 25.4 mm to the inch), recorded in the file's pHYs chunk so that it prints at true size.</summary>
+/// <summary>Renders a page as a PNG preview at a chosen resolution (dots per inch, 25.4 mm to the inch), recorded in the file's pHYs chunk so that it prints at true size, and marked as PadPlan's (<see cref="PngSoftware"/>).</summary>
 public static class PngWriter
 {
     public const double MinDpi = 20;
@@ -23,6 +23,6 @@ public static class PngWriter
         }
         using var image = SKImage.FromBitmap(bitmap);
         using var data = image.Encode(SKEncodedImageFormat.Png, 100);
-        return PngResolution.WithDpi(data.ToArray(), dpi);
+        return PngSoftware.Marked(PngResolution.WithDpi(data.ToArray(), dpi));
     }
 }

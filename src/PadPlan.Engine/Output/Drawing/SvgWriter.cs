@@ -7,10 +7,18 @@ namespace PadPlan.Output.Drawing;
 /// <summary>Writes a page as SVG at true size: the root's width and height in mm and a viewBox in mm, so one user unit is one millimetre.</summary>
 public static class SvgWriter
 {
+    /// <summary>The first two lines of every sheet: the XML declaration and the comment that marks the file as PadPlan's, so a later run knows it may replace it.</summary>
+    public const string Prologue = "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n<!-- a PadPlan sheet -->\n";
+
+    private static readonly byte[] PrologueBytes = new UTF8Encoding(false).GetBytes(Prologue);
+
+    /// <summary>True when a file's first bytes are the prologue PadPlan writes.</summary>
+    public static bool IsOwn(ReadOnlySpan<byte> head) => head.StartsWith(PrologueBytes);
+
     public static string Write(DrawingPage page)
     {
         var sb = new StringBuilder();
-        sb.Append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
+        sb.Append(Prologue);
         sb.Append($"<svg xmlns=\"http://www.w3.org/2000/svg\" version=\"1.1\" width=\"{N(page.Width)}mm\" height=\"{N(page.Height)}mm\" viewBox=\"0 0 {N(page.Width)} {N(page.Height)}\" font-family=\"{FontAssets.SvgFamily}\">\n");
         sb.Append("<title>").Append(Escape(page.Title)).Append("</title>\n");
         sb.Append($"<rect x=\"0\" y=\"0\" width=\"{N(page.Width)}\" height=\"{N(page.Height)}\" fill=\"#ffffff\"/>\n");
