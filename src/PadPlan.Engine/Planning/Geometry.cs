@@ -50,6 +50,8 @@ internal static class Geometry
     /// <summary>Length of the segment (x0,y0)-(x1,y1) inside the box (Liang-Barsky clipping); 0 when it misses.</summary>
     public static double ClippedLength(double x0, double y0, double x1, double y1, double minX, double minY, double maxX, double maxY)
     {
+        // A segment whose own box misses the box is not clipped; saying so at once spares the divisions below (which give 0 for it too).
+        if (Math.Max(x0, x1) < minX || Math.Min(x0, x1) > maxX || Math.Max(y0, y1) < minY || Math.Min(y0, y1) > maxY) return 0;
         double t0 = 0, t1 = 1;
         var (dx, dy) = (x1 - x0, y1 - y0);
         if (!Clip(-dx, x0 - minX, ref t0, ref t1) || !Clip(dx, maxX - x0, ref t0, ref t1)

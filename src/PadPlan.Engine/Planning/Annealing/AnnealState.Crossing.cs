@@ -19,6 +19,12 @@ internal sealed partial class AnnealState
     private List<int>[] _leadCells = [];
     private double _leadReach, _crossBefore, _leadCellSize = LeadCellSize;
     private readonly List<int> _wideLeads = [];
+    /// <summary>Most changed leads whose pairs among themselves are kept from the opening of a move for its evaluation; pairs beyond are measured again.</summary>
+    private const int KeptPairLeads = 64;
+    // What opening a move measured per changed lead (by its place in _changed) and per pair of the first KeptPairLeads of them,
+    // with the exit each lead had: a lead whose path the move leaves alone gives the same figures again, so the evaluation reuses them.
+    private double[] _nearBefore = [], _pairBefore = [], _exBeforeX = [], _exBeforeY = [];
+    private bool[] _pathKept = [];
 
     private void BuildCrossing()
     {
@@ -38,6 +44,9 @@ internal sealed partial class AnnealState
         Array.Fill(_lx, double.NaN);
         Array.Fill(_ly, double.NaN);
         _changed = new int[n];
+        _nearBefore = new double[n]; _exBeforeX = new double[n]; _exBeforeY = new double[n];
+        _pathKept = new bool[n];
+        _pairBefore = new double[KeptPairLeads * (KeptPairLeads - 1) / 2];
         _tangled = new int[2 * n];
         _changedStamp = new int[n];
         _leadSeen = new int[n];
@@ -172,18 +181,61 @@ internal sealed partial class AnnealState
             foreach (var l in _nets[_affected[k]].FreeLeads) Add(l);
     }
 
-    /// <summary>Violations of every pair with a changed lead, measured with the changed leads' landings in lx, ly.</summary>
-    private double CrossingOfChanged(double[] lx, double[] ly)
+    /// <summary>Violations of every pair with a changed lead as committed, when a move opens; keeps each lead's and each pair's figure, and each lead's exit, for <see cref="CrossingOfChangedAfter"/>.</summary>
+    private double CrossingOfChangedBefore()
     {
         var v = 0.0;
+        var kept = 0;
         for (var i = 0; i < _changedCount; i++)
         {
             var p = _changed[i];
-            v += CrossingNear(p, lx, ly);
-            for (var j = i + 1; j < _changedCount; j++) v += CrossPair(p, _changed[j], lx[p], ly[p], lx[_changed[j]], ly[_changed[j]]);
+            (_exBeforeX[i], _exBeforeY[i]) = (_exX[p], _exY[p]);
+            _nearBefore[i] = CrossingNear(p, _lx, _ly);
+            v += _nearBefore[i];
+            for (var j = i + 1; j < _changedCount; j++)
+            {
+                var q = _changed[j];
+                var c = CrossPair(p, q, _lx[p], _ly[p], _lx[q], _ly[q]);
+                if (j < KeptPairLeads) _pairBefore[kept++] = c;
+                v += c;
+            }
         }
         return v;
     }
+
+    /// <summary>
+    /// Violations of every pair with a changed lead, measured with the changed leads' new landings (_lxNew, _lyNew) once the
+    /// move is applied. A changed lead whose exit and landing stayed bit for bit the same (a free lead of another part, still on
+    /// its pad) meets the unchanged leads as before, and another such lead as before, so those figures are taken from the opening;
+    /// the sum runs in the same order over the same figures, so it is the very number a full re-measure gives.
+    /// </summary>
+    private double CrossingOfChangedAfter()
+    {
+        for (var i = 0; i < _changedCount; i++)
+        {
+            var p = _changed[i];
+            _pathKept[i] = SameBits(_exX[p], _exBeforeX[i]) && SameBits(_exY[p], _exBeforeY[i])
+                && SameBits(_lxNew[p], _lx[p]) && SameBits(_lyNew[p], _ly[p]);
+        }
+        var v = 0.0;
+        var kept = 0;
+        for (var i = 0; i < _changedCount; i++)
+        {
+            var p = _changed[i];
+            v += _pathKept[i] ? _nearBefore[i] : CrossingNear(p, _lxNew, _lyNew);
+            for (var j = i + 1; j < _changedCount; j++)
+            {
+                var q = _changed[j];
+                var reuse = j < KeptPairLeads && _pathKept[i] && _pathKept[j];
+                v += reuse ? _pairBefore[kept] : CrossPair(p, q, _lxNew[p], _lyNew[p], _lxNew[q], _lyNew[q]);
+                if (j < KeptPairLeads) kept++;
+            }
+        }
+        return v;
+    }
+
+    /// <summary>The same double to the bit (NaN, the mark of no landing, equals itself).</summary>
+    private static bool SameBits(double a, double b) => BitConverter.DoubleToInt64Bits(a) == BitConverter.DoubleToInt64Bits(b);
 
     /// <summary>Violations between lead p (landing px, py) and every unchanged lead whose committed path is near (a search over more than <see cref="MaxCellsPerItem"/> cells reads every lead instead).</summary>
     private double CrossingNear(int p, double[] lx, double[] ly)

@@ -49,7 +49,7 @@ internal sealed partial class AnnealState
         viol += PairsOf(a, b);
         cost += _soft;
         CollectChanged();
-        _crossBefore = CrossingOfChanged(_lx, _ly);
+        _crossBefore = CrossingOfChangedBefore();
         viol += _crossBefore;
         viol += BeginRuns(a, b);
         _beforeCost = cost;
@@ -104,7 +104,7 @@ internal sealed partial class AnnealState
             var l = _changed[i];
             if (_leads[l].Ground || _leads[l].OwnIsland >= 0) OwnLanding(l, _lxNew, _lyNew);
         }
-        viol += CrossingOfChanged(_lxNew, _lyNew);
+        viol += CrossingOfChangedAfter();
         viol += EvaluateRuns();
         DeltaCost = cost - _beforeCost;
         DeltaViolation = viol - _beforeViol;

@@ -22,6 +22,10 @@ internal sealed partial class AnnealState
     private bool[] _lowBody = [];
     /// <summary>Per lead: its committed run violation (mm), and during an evaluated move its new one.</summary>
     private double[] _runViol = [], _runViolNew = [];
+    /// <summary>Per lead: how many low bodies its committed run meets (the terms of its violation), or -1 when not known (a lead so thick that the item grid might not show it every body it meets); during an evaluated move the changed runs' new counts, and the change to the unchanged runs' counts.</summary>
+    private int[] _runMet = [], _runMetNew = [], _runMetDelta = [];
+    /// <summary>The bodies met in the last <see cref="RunNear"/> search, or -1 when that search may have missed one.</summary>
+    private int _runMetCount;
     private int[] _runChanged = [], _runChangedStamp = [];
     private int _runChangedCount, _runStamp;
     // unchanged runs a moved body passes over: which, and by how much the move changes each
@@ -42,6 +46,7 @@ internal sealed partial class AnnealState
         _runChangedStamp = new int[n];
         _runViol = new double[n];
         _runViolNew = new double[n];
+        _runMet = new int[n]; _runMetNew = new int[n]; _runMetDelta = new int[n];
         _runTouched = new int[n];
         _runTouchedStamp = new int[n];
         _runDelta = new double[n];
@@ -77,6 +82,7 @@ internal sealed partial class AnnealState
             OwnLanding(l, _lx, _ly);
             RegisterLead(l);
             _runViol[l] = RunNear(l, _lx[l], _ly[l]);
+            _runMet[l] = _runMetCount;
             if (_runViol[l] > 0) MarkRunCrowded(l);
             v += _runViol[l];
         }
@@ -139,7 +145,11 @@ internal sealed partial class AnnealState
         {
             var l = _runChanged[k];
             OwnLanding(l, _lxNew, _lyNew);
-            _runViolNew[l] = RunNear(l, _lxNew[l], _lyNew[l]);
+            if (!KeptRunMeetsOnlyMoved(l, out _runViolNew[l], out _runMetNew[l]))
+            {
+                _runViolNew[l] = RunNear(l, _lxNew[l], _lyNew[l]);
+                _runMetNew[l] = _runMetCount;
+            }
             v += _runViolNew[l];
         }
         _runTouchedCount = 0;
@@ -156,9 +166,15 @@ internal sealed partial class AnnealState
             var l = _runChanged[k];
             (_lx[l], _ly[l]) = (_lxNew[l], _lyNew[l]);
             _runViol[l] = _runViolNew[l];
+            _runMet[l] = _runMetNew[l];
             RegisterLead(l);
         }
-        for (var k = 0; k < _runTouchedCount; k++) _runViol[_runTouched[k]] += _runDelta[_runTouched[k]];
+        for (var k = 0; k < _runTouchedCount; k++)
+        {
+            var q = _runTouched[k];
+            _runViol[q] += _runDelta[q];
+            if (_runMet[q] >= 0) _runMet[q] += _runMetDelta[q];
+        }
     }
 
     /// <summary>The run violations an item can mend by moving, for the legaliser's choice of what to move: its own leads' runs,
@@ -181,9 +197,12 @@ internal sealed partial class AnnealState
     /// <summary>How far lead l's run to (ax, ay) passes through or too close under the boxes of other items' low bodies (mm).</summary>
     private double RunNear(int l, double ax, double ay)
     {
+        _runMetCount = 0;
         if (double.IsNaN(ax)) return 0;
         var (ex, ey) = (_exX[l], _exY[l]);
         var r = _leads[l].Diameter / 2 + _slack;
+        // A body met by the run is filed under a cell the search reads when the run's widening is within the grid's (see KeptRunMeetsOnlyMoved).
+        if (!(r <= _cull)) _runMetCount = int.MinValue;
         var c0 = Col(Math.Min(ex, ax) - r);
         var c1 = Col(Math.Max(ex, ax) + r);
         var r0 = Row(Math.Min(ey, ay) - r);
@@ -211,8 +230,52 @@ internal sealed partial class AnnealState
         if (_seen[j] == _seenStamp) return 0;
         _seen[j] = _seenStamp;
         if (!_lowBody[j] || _items[j].BodyBottom >= _runNeed[l]) return 0;
-        return Geometry.ClippedLength(ex, ey, ax, ay, _bMinX[j] - r, _bMinY[j] - r, _bMaxX[j] + r, _bMaxY[j] + r);
+        var t = Geometry.ClippedLength(ex, ey, ax, ay, _bMinX[j] - r, _bMinY[j] - r, _bMaxX[j] + r, _bMaxY[j] + r);
+        if (t > 0) _runMetCount++;
+        return t;
     }
+
+    /// <summary>
+    /// The new violation and count of a changed run that the open move leaves where it was (its part did not move, its landing
+    /// is the same to the bit) and that meets no body but the moved ones, without a search: false when that does not hold.
+    /// Its search would find the moved bodies that meet it (a body met by a run is filed under a cell the search reads, since
+    /// the run's widening r is within the grid's widening _cull) and nothing else that adds, and a sum of at most two terms is
+    /// the same in either order, so the figure is the very one the search gives.
+    /// </summary>
+    private bool KeptRunMeetsOnlyMoved(int l, out double v, out int met)
+    {
+        (v, met) = (0, 0);
+        var item = _leads[l].Item;
+        if (_runMet[l] < 0 || item == _ta || item == _tb || double.IsNaN(_lx[l])
+            || !SameBits(_lxNew[l], _lx[l]) || !SameBits(_lyNew[l], _ly[l])) return false;
+        var r = _leads[l].Diameter / 2 + _slack;
+        var others = _runMet[l];
+        var (a, b) = (0.0, 0.0);
+        if (MeetsLowBody(l, _ta))
+        {
+            if (RunThroughBox(l, r, _oldAx0, _oldAy0, _oldAx1, _oldAy1) > 0) others--;
+            a = RunThroughBox(l, r, _bMinX[_ta], _bMinY[_ta], _bMaxX[_ta], _bMaxY[_ta]);
+        }
+        if (_tb >= 0 && MeetsLowBody(l, _tb))
+        {
+            if (RunThroughBox(l, r, _oldBx0, _oldBy0, _oldBx1, _oldBy1) > 0) others--;
+            b = RunThroughBox(l, r, _bMinX[_tb], _bMinY[_tb], _bMaxX[_tb], _bMaxY[_tb]);
+        }
+        if (others != 0) return false;
+        if (a > 0) (v, met) = (v + a, met + 1);
+        if (b > 0) (v, met) = (v + b, met + 1);
+        return true;
+    }
+
+    /// <summary>How many low bodies lead l's committed run meets, as kept move by move (-1 when not known): for the verify test.</summary>
+    internal int RunMeets(int l) => _runMet[l];
+
+    /// <summary>Item j's body is low enough to meet lead l's run.</summary>
+    private bool MeetsLowBody(int l, int j) => _lowBody[j] && _items[j].BodyBottom < _runNeed[l];
+
+    /// <summary>How far lead l's committed run passes through a body box (min and max corners) widened by r (mm).</summary>
+    private double RunThroughBox(int l, double r, double x0, double y0, double x1, double y1) =>
+        Geometry.ClippedLength(_exX[l], _exY[l], _lx[l], _ly[l], x0 - r, y0 - r, x1 + r, y1 + r);
 
     /// <summary>By how much moving item j's body from the old box to where it is now changes the unchanged committed runs near either box (mm); each such run's change is kept for the commit.</summary>
     private double MovedBodyOverRuns(int j, double x0, double y0, double x1, double y1)
@@ -268,9 +331,11 @@ internal sealed partial class AnnealState
         {
             _runTouchedStamp[q] = _runStamp;
             _runDelta[q] = 0;
+            _runMetDelta[q] = 0;
             _runTouched[_runTouchedCount++] = q;
         }
         _runDelta[q] += d;
+        _runMetDelta[q] += (now > 0 ? 1 : 0) - (old > 0 ? 1 : 0);
         return d;
     }
 
