@@ -113,7 +113,26 @@ public static class Placer
         Batches(0, independent, () => refines == 0 && Agree(results));
         if (best!.Legal) Batches(independent, independent + refines, () => false);
         var finished = results.Where(r => r is not null).Select(r => r!).ToArray();
-        return best! with { Moves = finished.Sum(r => r.Moves), Runs = finished.Length };
+        var moves = finished.Sum(r => r.Moves);
+        if (best.Legal && parts <= PlacerSettings.SteadyCircuit)
+        {
+            (best, var descent) = Descended(problem, settings, best);
+            moves += descent;
+        }
+        return best with { Moves = moves, Runs = finished.Length };
+    }
+
+    /// <summary>
+    /// The final descent of the kept layout (<see cref="Annealer.Descend"/>), on circuits placed for steadiness: its result
+    /// replaces the layout only when it is legal and costs no more. With the moves it tried.
+    /// </summary>
+    private static (RunOutcome Kept, long Moves) Descended(PlacementProblem problem, PlacerSettings settings, RunOutcome best)
+    {
+        var state = new AnnealState(problem);
+        state.CopyFrom(best.State);
+        var moves = new Annealer(state, settings.Seed * 7919L + PlacerLimits.DescentRun).Descend(settings.MovesFactor);
+        var kept = Legaliser.Finish(state) && state.Cost <= best.State.Cost ? best with { State = state } : best;
+        return (kept, moves);
     }
 
     /// <summary>Legal first, then least broken, then lowest cost, then lowest run number.</summary>

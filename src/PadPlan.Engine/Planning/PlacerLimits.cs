@@ -89,6 +89,24 @@ internal static class PlacerLimits
     public const double MendShare = 0.1;
     /// <summary>Smallest shift (mm) of a move aimed at crowding: about a pad and its gap, enough to step past a neighbour.</summary>
     public const double MendCrowdingShift = 4.0;
+    /// <summary>Weight of broken rules in the greedy passes after legalising (polish, final descent): no move that breaks one is ever kept.</summary>
+    public const double ProhibitivePenalty = 1e6;
+    /// <summary>Fewest moves of one greedy pass, for the smallest boards.</summary>
+    public const int GreedyMinMoves = 200;
+    /// <summary>
+    /// Moves of each range of the final descent, per N^(4/3) and per unit of the effort's move factor (32 N^(4/3) at normal
+    /// effort). Over seeds 1-20 (2026-12-05, docs/benchmarks.md) half of it gave the same medians, a worse worst seed on the
+    /// crystal oscillator (83.1 mm against 72.9) and 0.3 s less on 50 parts; a quarter of it a little longer leads.
+    /// </summary>
+    public const double DescentMoves = 8;
+    /// <summary>Move ranges (mm) of one round of the final descent, widest first: trades and steps past a neighbour, then the fine fit.</summary>
+    public static readonly double[] DescentRanges = [2.0, 1.0, 0.5, 0.25];
+    /// <summary>The final descent stops after a round that lowers the cost by less than this fraction ...</summary>
+    public const double DescentGain = 1e-3;
+    /// <summary>... or after this many rounds.</summary>
+    public const int DescentRounds = 50;
+    /// <summary>Added to the seed's run numbers for the final descent's own random moves, so they never repeat a run's.</summary>
+    public const int DescentRun = 99;
     /// <summary>Smallest move range (mm).</summary>
     public const double MinRange = 0.5;
     /// <summary>Violation (mm per item) after annealing beyond which the legaliser does not try: such a run is not legal, and another run or a larger region is the remedy.</summary>

@@ -60,11 +60,11 @@ public class PlacementEffortTests
             totals.Add(result.Summary!.TotalLead);
             longest.Add(result.Summary.LongestLead);
         }
-        // common practice, no source: the target is 10 % (measured, and missed, in docs/benchmarks.md). CI allows 1.5x between best
-        // and worst seed for the total lead and 4x for the longest lead. Measured with the refining runs (2026-12-04): total lead
-        // 1.18x (tiny buffer), 1.41x (valve stage), 1.34x (crystal oscillator, 1.74x before them); longest lead up to 2.6x. So the
-        // bound catches a return of the old spread on the crystal oscillator, not the target.
-        Assert.True(totals.Max() <= 1.5 * totals.Min(), $"total lead {string.Join(", ", totals.Select(t => t.ToString("0.0")))}");
+        // common practice, no source: the target is 10 % (measured, and missed, in docs/benchmarks.md). CI allows 1.3x between best
+        // and worst seed for the total lead and 4x for the longest lead. Measured with the final descent (2026-12-05, seeds 1-10):
+        // total lead 1.15x (tiny buffer), 1.18x (valve stage), 1.18x (crystal oscillator; 1.74x before the refining runs, 1.20x
+        // before the descent); longest lead up to 2.7x. So the bound catches a return of the old spread, not the target.
+        Assert.True(totals.Max() <= 1.3 * totals.Min(), $"total lead {string.Join(", ", totals.Select(t => t.ToString("0.0")))}");
         Assert.True(longest.Max() <= 4.0 * longest.Min(), $"longest lead {string.Join(", ", longest.Select(t => t.ToString("0.0")))}");
     }
 }

@@ -211,11 +211,39 @@ internal sealed class Annealer
     {
         if (!HasMoves) return;
         _s.Slack = 0;
-        _s.Penalty = 1e6;
+        _s.Penalty = PlacerLimits.ProhibitivePenalty;
         _s.Recompute();
         var movable = _parts.Length + _pads.Length;
-        Moves((int)Math.Max(200, 2 * movesFactor * Math.Pow(movable, 4.0 / 3.0)), 0, 1.0);
+        Moves((int)Math.Max(PlacerLimits.GreedyMinMoves, 2 * movesFactor * Math.Pow(movable, 4.0 / 3.0)), 0, 1.0);
         _s.Recompute();
+    }
+
+    /// <summary>
+    /// Greedy descent of a legal layout to a local minimum: rounds of zero-temperature moves with no slack and a prohibitive
+    /// penalty, at move ranges shrinking from <see cref="PlacerLimits.DescentRanges"/>' first to its last, repeated until a
+    /// whole round gains less than <see cref="PlacerLimits.DescentGain"/> of the cost. The annealing ends with a short
+    /// quench, the polish with one more; both leave room a longer descent still takes (docs/benchmarks.md, "The final descent").
+    /// </summary>
+    /// <returns>The moves it tried.</returns>
+    public long Descend(double movesFactor)
+    {
+        if (!HasMoves) return 0;
+        var before = Stats.TotalTried;
+        _s.Slack = 0;
+        _s.Penalty = PlacerLimits.ProhibitivePenalty;
+        _s.Recompute();
+        var count = (int)Math.Max(PlacerLimits.GreedyMinMoves, PlacerLimits.DescentMoves * movesFactor * Math.Pow(_parts.Length + _pads.Length, 4.0 / 3.0));
+        for (var round = 0; round < PlacerLimits.DescentRounds; round++)
+        {
+            var start = _s.Total;
+            foreach (var range in PlacerLimits.DescentRanges)
+            {
+                Moves(count, 0, range);
+                _s.Recompute();
+            }
+            if (start - _s.Total < PlacerLimits.DescentGain * Math.Abs(start)) break;
+        }
+        return Stats.TotalTried - before;
     }
 
     /// <summary>VPR's start: the spread (standard deviation) of the cost changes of random trial moves within a range.</summary>
