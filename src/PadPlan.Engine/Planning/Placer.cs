@@ -97,6 +97,17 @@ public static class Placer
             progress?.Report(new PlacerProgress(k + 1, legal ? "legal" : "not legal", 0, state.Cost, state.Violation));
             results[k] = new RunOutcome(state, legal, annealer.Stats.TotalTried) { Stats = annealer.Stats };
         }
+        void Pool(int[] runs)
+        {
+            var workers = settings.AllowThreads ? Math.Min(Environment.ProcessorCount, runs.Length) : 1;
+            var next = -1;
+            Parallel.For(0, workers, new ParallelOptions { MaxDegreeOfParallelism = workers }, _ =>
+            {
+                int i;
+                while ((i = Interlocked.Increment(ref next)) < runs.Length) One(runs[i]);
+            });
+            best = Best(results);
+        }
         void Batches(int from, int to, Func<bool> enough)
         {
             for (var first = from; first < to; first += PlacerLimits.RunBatch)
@@ -110,7 +121,10 @@ public static class Placer
                 if (enough()) return;
             }
         }
-        Batches(0, independent, () => refines == 0 && Agree(results));
+        // Run k's result depends on k alone. Where no early stop looks at a batch (refining runs follow), the independent runs
+        // share the cores as a pool, those from a scatter (the longest) first, so no core waits for the other at a batch's end.
+        if (refines > 0) Pool([.. Enumerable.Range(0, independent).OrderBy(k => Annealer.Scatters(settings.Start, k, parts) ? 0 : 1).ThenBy(k => k)]);
+        else Batches(0, independent, () => Agree(results));
         if (best!.Legal) Batches(independent, independent + refines, () => false);
         var finished = results.Where(r => r is not null).Select(r => r!).ToArray();
         var moves = finished.Sum(r => r.Moves);

@@ -83,6 +83,18 @@ public class PlacerTests
         Assert.NotEqual(a, other);
     }
 
+    /// <summary>At normal effort on a small circuit the independent runs share the cores as a pool and finish in any order; the file must not show it.</summary>
+    [Fact]
+    public void Pooled_runs_give_byte_identical_files_with_or_without_threads()
+    {
+        var project = TinyBufferWithoutLayout();
+        var settings = new PlacerSettings(Seed: 2);
+        Assert.True(settings.RefinesFor(project.Parts.Count) > 0, "the pool is only used where refining runs follow");
+        var a = ProjectFile.ToBytes(Placed(project, settings));
+        var b = ProjectFile.ToBytes(Placed(project, settings with { AllowThreads = false }));
+        Assert.Equal(a, b);
+    }
+
     [Fact]
     public void Locked_parts_and_pads_stay_exactly_where_they_were()
     {

@@ -41,10 +41,13 @@ internal sealed class Annealer
     /// <summary>Places the items as <paramref name="start"/> says; a mixed start takes the spring start on even runs and a scatter on odd ones on a small circuit, the spring start on every run of a larger one (where a scatter seldom legalises; docs/benchmarks.md).</summary>
     public void Start(StartKind start, int run)
     {
-        var small = _s.Problem.Project.Parts.Count <= PlacerSettings.SmallCircuit;
-        if (start == StartKind.Spring || (start == StartKind.Mixed && (run % 2 == 0 || !small))) SpringStart();
-        else Scatter();
+        if (Scatters(start, run, _s.Problem.Project.Parts.Count)) Scatter();
+        else SpringStart();
     }
+
+    /// <summary>Whether run <paramref name="run"/> of a circuit of <paramref name="parts"/> parts starts from a scatter (see <see cref="Start"/>).</summary>
+    public static bool Scatters(StartKind start, int run, int parts) =>
+        start == StartKind.Scatter || (start == StartKind.Mixed && run % 2 == 1 && parts <= PlacerSettings.SmallCircuit);
 
     /// <summary>An analytic start: parts where their springs (nets) pull them, spread over the region in that order; pads then at their nets' leads.</summary>
     public void SpringStart()
