@@ -213,13 +213,22 @@ internal sealed class Annealer
     public void Polish(double movesFactor)
     {
         if (!HasMoves) return;
+        BeginGreedy();
+        Moves(GreedyMoves(2, movesFactor), 0, 1.0);
+        _s.Recompute();
+    }
+
+    /// <summary>No slack and a prohibitive penalty: from here on no kept move breaks a rule.</summary>
+    private void BeginGreedy()
+    {
         _s.Slack = 0;
         _s.Penalty = PlacerLimits.ProhibitivePenalty;
         _s.Recompute();
-        var movable = _parts.Length + _pads.Length;
-        Moves((int)Math.Max(PlacerLimits.GreedyMinMoves, 2 * movesFactor * Math.Pow(movable, 4.0 / 3.0)), 0, 1.0);
-        _s.Recompute();
     }
+
+    /// <summary>Moves of one greedy pass: <paramref name="perUnit"/> N^(4/3) per unit of the effort's move factor, at least <see cref="PlacerLimits.GreedyMinMoves"/>.</summary>
+    private int GreedyMoves(double perUnit, double movesFactor) =>
+        (int)Math.Max(PlacerLimits.GreedyMinMoves, perUnit * movesFactor * Math.Pow(_parts.Length + _pads.Length, 4.0 / 3.0));
 
     /// <summary>
     /// Greedy descent of a legal layout to a local minimum: rounds of zero-temperature moves with no slack and a prohibitive
@@ -232,10 +241,8 @@ internal sealed class Annealer
     {
         if (!HasMoves) return 0;
         var before = Stats.TotalTried;
-        _s.Slack = 0;
-        _s.Penalty = PlacerLimits.ProhibitivePenalty;
-        _s.Recompute();
-        var count = (int)Math.Max(PlacerLimits.GreedyMinMoves, PlacerLimits.DescentMoves * movesFactor * Math.Pow(_parts.Length + _pads.Length, 4.0 / 3.0));
+        BeginGreedy();
+        var count = GreedyMoves(PlacerLimits.DescentMoves, movesFactor);
         for (var round = 0; round < PlacerLimits.DescentRounds; round++)
         {
             var start = _s.Total;
