@@ -35,7 +35,7 @@ public class FinalDescentTests
         Assert.True(moves > 0);
         Assert.True(Legaliser.Finish(state), string.Join("; ", state.Problems().Take(3)));
         Assert.Empty(state.Problems());
-        // Not a measured figure, a direction: a run ends with a quench of two temperatures' moves and the polish of one pass,
+        // common practice, no source (a greedy descent never raises the cost it descends); not a measured figure, a direction: a run ends with a quench of two temperatures' moves and the polish of one pass,
         // so rounds at several ranges still find moves that pay (docs/benchmarks.md, "The final descent": the kept layouts'
         // total lead fell by 4-17 % at the median over 20 seeds).
         Assert.True(state.Cost < before, $"cost {before:0.00} before the descent, {state.Cost:0.00} after");
