@@ -8,17 +8,17 @@ namespace PadPlan.Planning;
 /// </summary>
 internal sealed partial class AnnealState
 {
-    /// <summary>Smallest cell of the lead-path grid (mm); a region sized by large numbers in the file gets larger cells, not more (<see cref="MaxCellsPerSide"/>).</summary>
+    /// <summary>Smallest cell of the lead-path grid (mm).</summary>
     private const double LeadCellSize = 4.0;
+    /// <summary>Committed lead paths (exit to landing) filed by their boxes; a lead with no landing is filed nowhere.</summary>
+    private BucketGrid _leadGrid = null!;
     private bool[] _crosses = [];
     private double[] _lx = [], _ly = [], _lxNew = [], _lyNew = [];
-    private int[] _changed = [], _changedStamp = [], _leadSeen = [], _leadCellBox = [];
-    private int _changedCount, _leadSeenStamp, _leadCols, _leadRows, _tangledCount, _nearWorst;
+    private int[] _changed = [], _changedStamp = [], _leadSeen = [];
+    private int _changedCount, _leadSeenStamp, _tangledCount, _nearWorst;
     private int[] _tangled = [];
     private double _nearWorstV;
-    private List<int>[] _leadCells = [];
-    private double _leadReach, _crossBefore, _leadCellSize = LeadCellSize;
-    private readonly List<int> _wideLeads = [];
+    private double _leadReach, _crossBefore;
     /// <summary>Most changed leads whose pairs among themselves are kept from the opening of a move for its evaluation; pairs beyond are measured again.</summary>
     private const int KeptPairLeads = 64;
     // What opening a move measured per changed lead (by its place in _changed) and per pair of the first KeptPairLeads of them,
@@ -50,21 +50,8 @@ internal sealed partial class AnnealState
         _tangled = new int[2 * n];
         _changedStamp = new int[n];
         _leadSeen = new int[n];
-        _leadCellBox = new int[4 * n];
-        Array.Fill(_leadCellBox, -1);
-        var r = _p.Region;
-        var (width, height) = (r.Width + 2 * GridApron, r.Height + 2 * GridApron);
-        _leadCellSize = Math.Max(LeadCellSize, Math.Max(width, height) / MaxCellsPerSide);
-        _leadCols = Math.Clamp((int)Math.Ceiling(width / _leadCellSize), 1, MaxCellsPerSide);
-        _leadRows = Math.Clamp((int)Math.Ceiling(height / _leadCellSize), 1, MaxCellsPerSide);
-        _wideLeads.Clear();
-        _wideLeads.Capacity = n;
-        _leadCells = new List<int>[_leadCols * _leadRows];
-        for (var k = 0; k < _leadCells.Length; k++) _leadCells[k] = new List<int>(CellRoom);
+        _leadGrid = new BucketGrid(_p.Region, LeadCellSize, n);
     }
-
-    private int LeadCol(double x) => Math.Clamp((int)Math.Floor((x - _gridX0) / _leadCellSize), 0, _leadCols - 1);
-    private int LeadRow(double y) => Math.Clamp((int)Math.Floor((y - _gridY0) / _leadCellSize), 0, _leadRows - 1);
 
     /// <summary>The landing of a lead that is fixed by its own item: its ground landing, or its exit over the strip segment beneath it.</summary>
     private void OwnLanding(int l, double[] lx, double[] ly)
@@ -74,33 +61,9 @@ internal sealed partial class AnnealState
         else if (lead.OwnIsland >= 0) (lx[l], ly[l]) = (_exX[l], _exY[l]); // a pin over its strip segment lands where it leaves the body, as written
     }
 
-    /// <summary>
-    /// Files a lead's committed path under the lead cells it touches; a path over more than <see cref="MaxCellsPerItem"/>
-    /// cells (a lead of a huge body) goes on the wide list that every search reads, so one move never walks thousands of cells.
-    /// </summary>
-    private void RegisterLead(int l)
-    {
-        var b = 4 * l;
-        int c0 = -1, r0 = -1, c1 = -1, r1 = -1;
-        if (!double.IsNaN(_lx[l]))
-        {
-            (c0, c1) = (LeadCol(Math.Min(_exX[l], _lx[l])), LeadCol(Math.Max(_exX[l], _lx[l])));
-            (r0, r1) = (LeadRow(Math.Min(_exY[l], _ly[l])), LeadRow(Math.Max(_exY[l], _ly[l])));
-            if ((c1 - c0 + 1) * (r1 - r0 + 1) > MaxCellsPerItem) c0 = r0 = c1 = r1 = WideMark;
-        }
-        if (_leadCellBox[b] == c0 && _leadCellBox[b + 1] == r0 && _leadCellBox[b + 2] == c1 && _leadCellBox[b + 3] == r1) return;
-        if (_leadCellBox[b] == WideMark) _wideLeads.Remove(l);
-        else if (_leadCellBox[b] >= 0)
-            for (var c = _leadCellBox[b]; c <= _leadCellBox[b + 2]; c++)
-                for (var r = _leadCellBox[b + 1]; r <= _leadCellBox[b + 3]; r++)
-                    _leadCells[r * _leadCols + c].Remove(l);
-        if (c0 == WideMark) _wideLeads.Add(l);
-        else if (c0 >= 0)
-            for (var c = c0; c <= c1; c++)
-                for (var r = r0; r <= r1; r++)
-                    _leadCells[r * _leadCols + c].Add(l);
-        (_leadCellBox[b], _leadCellBox[b + 1], _leadCellBox[b + 2], _leadCellBox[b + 3]) = (c0, r0, c1, r1);
-    }
+    /// <summary>Files a lead's committed path under the lead cells it touches (see <see cref="BucketGrid"/>).</summary>
+    private void RegisterLead(int l) =>
+        _leadGrid.File(l, Math.Min(_exX[l], _lx[l]), Math.Min(_exY[l], _ly[l]), Math.Max(_exX[l], _lx[l]), Math.Max(_exY[l], _ly[l]));
 
     /// <summary>All lead-crossing violations from scratch, after the nets have set every free lead's landing.</summary>
     private double RecomputeCrossing()
@@ -237,16 +200,15 @@ internal sealed partial class AnnealState
     /// <summary>The same double to the bit (NaN, the mark of no landing, equals itself).</summary>
     private static bool SameBits(double a, double b) => BitConverter.DoubleToInt64Bits(a) == BitConverter.DoubleToInt64Bits(b);
 
-    /// <summary>Violations between lead p (landing px, py) and every unchanged lead whose committed path is near (a search over more than <see cref="MaxCellsPerItem"/> cells reads every lead instead).</summary>
+    /// <summary>Violations between lead p (landing px, py) and every unchanged lead whose committed path is near (a search over more than <see cref="BucketGrid.MaxCellsPerEntry"/> cells reads every lead instead).</summary>
     private double CrossingNear(int p, double[] lx, double[] ly)
     {
         var (px, py) = (lx[p], ly[p]);
         if (double.IsNaN(px)) return 0;
         var reach = _leadReach + _slack;
-        var c0 = LeadCol(Math.Min(_exX[p], px) - reach);
-        var c1 = LeadCol(Math.Max(_exX[p], px) + reach);
-        var r0 = LeadRow(Math.Min(_exY[p], py) - reach);
-        var r1 = LeadRow(Math.Max(_exY[p], py) + reach);
+        var grid = _leadGrid;
+        var narrow = grid.Span(Math.Min(_exX[p], px) - reach, Math.Min(_exY[p], py) - reach, Math.Max(_exX[p], px) + reach, Math.Max(_exY[p], py) + reach,
+            out var c0, out var r0, out var c1, out var r1);
         _leadSeenStamp++;
         (_nearWorst, _nearWorstV) = (-1, 0.0);
         var v = 0.0;
@@ -258,16 +220,17 @@ internal sealed partial class AnnealState
             if (c > _nearWorstV) (_nearWorst, _nearWorstV) = (q, c);
             return c;
         }
-        if ((c1 - c0 + 1) * (r1 - r0 + 1) > MaxCellsPerItem)
+        if (!narrow)
         {
             for (var q = 0; q < _leads.Length; q++) v += Near(q);
             return v;
         }
-        for (var k = 0; k < _wideLeads.Count; k++) v += Near(_wideLeads[k]);
+        var wide = grid.Wide;
+        for (var k = 0; k < wide.Count; k++) v += Near(wide[k]);
         for (var c = c0; c <= c1; c++)
             for (var r = r0; r <= r1; r++)
             {
-                var cell = _leadCells[r * _leadCols + c];
+                var cell = grid.Cell(c, r);
                 for (var k = 0; k < cell.Count; k++) v += Near(cell[k]);
             }
         return v;

@@ -203,23 +203,22 @@ internal sealed partial class AnnealState
         var r = _leads[l].Diameter / 2 + _slack;
         // A body met by the run is filed under a cell the search reads when the run's widening is within the grid's (see KeptRunMeetsOnlyMoved).
         if (!(r <= _cull)) _runMetCount = int.MinValue;
-        var c0 = Col(Math.Min(ex, ax) - r);
-        var c1 = Col(Math.Max(ex, ax) + r);
-        var r0 = Row(Math.Min(ey, ay) - r);
-        var r1 = Row(Math.Max(ey, ay) + r);
+        var grid = _itemGrid;
+        var narrow = grid.Span(Math.Min(ex, ax) - r, Math.Min(ey, ay) - r, Math.Max(ex, ax) + r, Math.Max(ey, ay) + r, out var c0, out var r0, out var c1, out var r1);
         _seenStamp++;
         _seen[_leads[l].Item] = _seenStamp;
         var v = 0.0;
-        if ((c1 - c0 + 1) * (r1 - r0 + 1) > MaxCellsPerItem)
+        if (!narrow)
         {
             for (var j = 0; j < _items.Length; j++) v += RunThroughBody(l, ex, ey, ax, ay, r, j);
             return v;
         }
-        for (var k = 0; k < _wide.Count; k++) v += RunThroughBody(l, ex, ey, ax, ay, r, _wide[k]);
+        var wide = grid.Wide;
+        for (var k = 0; k < wide.Count; k++) v += RunThroughBody(l, ex, ey, ax, ay, r, wide[k]);
         for (var c = c0; c <= c1; c++)
             for (var row = r0; row <= r1; row++)
             {
-                var cell = _cells[row * _cols + c];
+                var cell = grid.Cell(c, row);
                 for (var k = 0; k < cell.Count; k++) v += RunThroughBody(l, ex, ey, ax, ay, r, cell[k]);
             }
         return v;
@@ -294,21 +293,19 @@ internal sealed partial class AnnealState
     {
         if (!_lowBody[j]) return 0;
         var reach = _widestRun / 2 + _slack;
-        var c0 = LeadCol(x0 - reach);
-        var c1 = LeadCol(x1 + reach);
-        var r0 = LeadRow(y0 - reach);
-        var r1 = LeadRow(y1 + reach);
+        var grid = _leadGrid;
         var v = 0.0;
-        if ((c1 - c0 + 1) * (r1 - r0 + 1) > MaxCellsPerItem)
+        if (!grid.Span(x0 - reach, y0 - reach, x1 + reach, y1 + reach, out var c0, out var r0, out var c1, out var r1))
         {
             for (var q = 0; q < _leads.Length; q++) v += RunUnderBody(q, j, change);
             return v;
         }
-        for (var k = 0; k < _wideLeads.Count; k++) v += RunUnderBody(_wideLeads[k], j, change);
+        var wide = grid.Wide;
+        for (var k = 0; k < wide.Count; k++) v += RunUnderBody(wide[k], j, change);
         for (var c = c0; c <= c1; c++)
             for (var row = r0; row <= r1; row++)
             {
-                var cell = _leadCells[row * _leadCols + c];
+                var cell = grid.Cell(c, row);
                 for (var k = 0; k < cell.Count; k++) v += RunUnderBody(cell[k], j, change);
             }
         return v;

@@ -1,0 +1,85 @@
+namespace PadPlan.Planning;
+
+/// <summary>
+/// A uniform grid over the region and an apron around it, each cell listing the entries (items, or lead paths) whose box
+/// touches it, so a search reads only the entries near its own box. A region sized by large numbers in the file gets larger
+/// cells, not more of them. An entry over more than <see cref="MaxCellsPerEntry"/> cells goes on the wide list instead, and a
+/// search box that large reads every entry, so one move never walks thousands of cells. Nothing is allocated after
+/// construction while no cell holds more than <see cref="CellRoom"/> entries.
+/// </summary>
+internal sealed class BucketGrid
+{
+    /// <summary>Most cells along either side of the grid.</summary>
+    public const int MaxCellsPerSide = 128;
+    /// <summary>Most cells an entry is filed under, and a search reads, before the wide list (or every entry) takes over.</summary>
+    public const int MaxCellsPerEntry = 64;
+    /// <summary>Room around the region that the grid still covers (mm); entries beyond it share the edge cells.</summary>
+    private const double Apron = 20.0;
+    /// <summary>Entries a cell has room for before its list must grow.</summary>
+    private const int CellRoom = 64;
+    /// <summary>Marks an entry filed on the wide list rather than under cells.</summary>
+    private const int WideMark = -2;
+
+    private readonly double _x0, _y0, _size;
+    private readonly int _cols, _rows;
+    private readonly List<int>[] _cells;
+    /// <summary>Per entry, the cells it is filed under (first column, first row, last column, last row); -1 when filed nowhere.</summary>
+    private readonly int[] _box;
+
+    /// <summary>Entries filed on the wide list, which every search reads (read it, do not change it).</summary>
+    public List<int> Wide { get; }
+
+    public BucketGrid(Region region, double smallestCell, int entries)
+    {
+        _x0 = region.MinX - Apron;
+        _y0 = region.MinY - Apron;
+        var (width, height) = (region.Width + 2 * Apron, region.Height + 2 * Apron);
+        _size = Math.Max(smallestCell, Math.Max(width, height) / MaxCellsPerSide);
+        _cols = Math.Clamp((int)Math.Ceiling(width / _size), 1, MaxCellsPerSide);
+        _rows = Math.Clamp((int)Math.Ceiling(height / _size), 1, MaxCellsPerSide);
+        _cells = new List<int>[_cols * _rows];
+        // Room for a crowded cell from the start, so the move loop does not grow lists (it must not allocate).
+        for (var k = 0; k < _cells.Length; k++) _cells[k] = new List<int>(CellRoom);
+        _box = new int[4 * entries];
+        Array.Fill(_box, -1);
+        Wide = new List<int>(entries);
+    }
+
+    public int Col(double x) => Math.Clamp((int)Math.Floor((x - _x0) / _size), 0, _cols - 1);
+    public int Row(double y) => Math.Clamp((int)Math.Floor((y - _y0) / _size), 0, _rows - 1);
+
+    /// <summary>The entries filed under one cell (read it, do not change it).</summary>
+    public List<int> Cell(int col, int row) => _cells[row * _cols + col];
+
+    public bool IsWide(int e) => _box[4 * e] == WideMark;
+
+    /// <summary>
+    /// The cells a search box reads, first and last column and row: false when they are more than
+    /// <see cref="MaxCellsPerEntry"/>, and the search must read every entry instead.
+    /// </summary>
+    public bool Span(double x0, double y0, double x1, double y1, out int c0, out int r0, out int c1, out int r1)
+    {
+        (c0, c1, r0, r1) = (Col(x0), Col(x1), Row(y0), Row(y1));
+        return (c1 - c0 + 1) * (r1 - r0 + 1) <= MaxCellsPerEntry;
+    }
+
+    /// <summary>Files entry e under every cell its box touches (on the wide list when that is too many), or nowhere when the box is not a number.</summary>
+    public void File(int e, double x0, double y0, double x1, double y1)
+    {
+        int c0 = -1, r0 = -1, c1 = -1, r1 = -1;
+        if (!double.IsNaN(x0) && !Span(x0, y0, x1, y1, out c0, out r0, out c1, out r1)) c0 = r0 = c1 = r1 = WideMark;
+        var b = 4 * e;
+        if (_box[b] == c0 && _box[b + 1] == r0 && _box[b + 2] == c1 && _box[b + 3] == r1) return;
+        if (_box[b] == WideMark) Wide.Remove(e);
+        else if (_box[b] >= 0)
+            for (var c = _box[b]; c <= _box[b + 2]; c++)
+                for (var r = _box[b + 1]; r <= _box[b + 3]; r++)
+                    _cells[r * _cols + c].Remove(e);
+        if (c0 == WideMark) Wide.Add(e);
+        else if (c0 >= 0)
+            for (var c = c0; c <= c1; c++)
+                for (var r = r0; r <= r1; r++)
+                    _cells[r * _cols + c].Add(e);
+        (_box[b], _box[b + 1], _box[b + 2], _box[b + 3]) = (c0, r0, c1, r1);
+    }
+}
