@@ -22,7 +22,7 @@ public class PlacementEffortTests
     /// (docs/benchmarks.md), not a test's. Before the height rules, seed 1 placed it after two growths; with them it finds
     /// no legal layout (the skip reason), and OwnPadTests places the 200-part circuit of the same kind instead.
     /// </summary>
-    [Fact(Skip = "Known gap (issue 23): with part heights the benchmark's random 500-part circuit (seed 1500) finds no legal layout at quick effort (185 s wall, even with pads of their own for nets broken at strips) nor at normal effort; net N150 (RF, 5 mm leads) joins both rows of U232 and four parts. 200- and 300-part circuits of the same kind and rings of 300 and 500 lying resistors do place at quick effort. See docs/benchmarks.md, 'Heights in the placer'.")]
+    [Fact(Skip = "Known gap (issue 22, item 7; since the height rules of issue 23): the benchmark's random 500-part circuit (seed 1500) finds no legal layout at quick effort (185 s wall, even with pads of their own for nets broken at strips) nor at normal effort; net N150 (RF, 5 mm leads) joins both rows of U232 and four parts. 200- and 300-part circuits of the same kind and rings of 300 and 500 lying resistors do place at quick effort. See docs/benchmarks.md, 'Heights in the placer'.")]
     public void Quick_effort_legalises_the_benchmark_500_part_circuit_and_the_checker_agrees()
     {
         var result = Placer.Place(PadPlan.Bench.SyntheticCircuit.Make(500, 1500), new PlacerSettings(Seed: 1, Effort: Effort.Quick));
