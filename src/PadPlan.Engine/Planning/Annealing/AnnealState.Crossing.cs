@@ -206,9 +206,6 @@ internal sealed partial class AnnealState
         var (px, py) = (lx[p], ly[p]);
         if (double.IsNaN(px)) return 0;
         var reach = _leadReach + _slack;
-        var grid = _leadGrid;
-        var narrow = grid.Span(Math.Min(_exX[p], px) - reach, Math.Min(_exY[p], py) - reach, Math.Max(_exX[p], px) + reach, Math.Max(_exY[p], py) + reach,
-            out var c0, out var r0, out var c1, out var r1);
         _leadSeenStamp++;
         (_nearWorst, _nearWorstV) = (-1, 0.0);
         var v = 0.0;
@@ -220,19 +217,8 @@ internal sealed partial class AnnealState
             if (c > _nearWorstV) (_nearWorst, _nearWorstV) = (q, c);
             return c;
         }
-        if (!narrow)
-        {
-            for (var q = 0; q < _leads.Length; q++) v += Near(q);
-            return v;
-        }
-        var wide = grid.Wide;
-        for (var k = 0; k < wide.Count; k++) v += Near(wide[k]);
-        for (var c = c0; c <= c1; c++)
-            for (var r = r0; r <= r1; r++)
-            {
-                var cell = grid.Cell(c, r);
-                for (var k = 0; k < cell.Count; k++) v += Near(cell[k]);
-            }
+        foreach (var q in _leadGrid.Around(Math.Min(_exX[p], px) - reach, Math.Min(_exY[p], py) - reach, Math.Max(_exX[p], px) + reach, Math.Max(_exY[p], py) + reach, _leads.Length))
+            v += Near(q);
         return v;
     }
 

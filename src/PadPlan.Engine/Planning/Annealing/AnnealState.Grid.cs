@@ -33,28 +33,13 @@ internal sealed partial class AnnealState
                 if (_seen[j] != _seenStamp) v += Pair(a, j);
             return v;
         }
-        var wide = grid.Wide;
-        for (var k = 0; k < wide.Count; k++)
+        // a narrow item's extent spans no more cells than it is filed under, so this walks the wide list and the cells
+        foreach (var j in grid.Around(_eMinX[a], _eMinY[a], _eMaxX[a], _eMaxY[a], _items.Length))
         {
-            var j = wide[k];
             if (_seen[j] == _seenStamp) continue;
             _seen[j] = _seenStamp;
             v += Pair(a, j);
         }
-        // a narrow item's extent spans no more cells than it is filed under
-        grid.Span(_eMinX[a], _eMinY[a], _eMaxX[a], _eMaxY[a], out var c0, out var r0, out var c1, out var r1);
-        for (var c = c0; c <= c1; c++)
-            for (var r = r0; r <= r1; r++)
-            {
-                var cell = grid.Cell(c, r);
-                for (var k = 0; k < cell.Count; k++)
-                {
-                    var j = cell[k];
-                    if (_seen[j] == _seenStamp) continue;
-                    _seen[j] = _seenStamp;
-                    v += Pair(a, j);
-                }
-            }
         return v;
     }
 }

@@ -203,24 +203,11 @@ internal sealed partial class AnnealState
         var r = _leads[l].Diameter / 2 + _slack;
         // A body met by the run is filed under a cell the search reads when the run's widening is within the grid's (see KeptRunMeetsOnlyMoved).
         if (!(r <= _cull)) _runMetCount = int.MinValue;
-        var grid = _itemGrid;
-        var narrow = grid.Span(Math.Min(ex, ax) - r, Math.Min(ey, ay) - r, Math.Max(ex, ax) + r, Math.Max(ey, ay) + r, out var c0, out var r0, out var c1, out var r1);
         _seenStamp++;
         _seen[_leads[l].Item] = _seenStamp;
         var v = 0.0;
-        if (!narrow)
-        {
-            for (var j = 0; j < _items.Length; j++) v += RunThroughBody(l, ex, ey, ax, ay, r, j);
-            return v;
-        }
-        var wide = grid.Wide;
-        for (var k = 0; k < wide.Count; k++) v += RunThroughBody(l, ex, ey, ax, ay, r, wide[k]);
-        for (var c = c0; c <= c1; c++)
-            for (var row = r0; row <= r1; row++)
-            {
-                var cell = grid.Cell(c, row);
-                for (var k = 0; k < cell.Count; k++) v += RunThroughBody(l, ex, ey, ax, ay, r, cell[k]);
-            }
+        foreach (var j in _itemGrid.Around(Math.Min(ex, ax) - r, Math.Min(ey, ay) - r, Math.Max(ex, ax) + r, Math.Max(ey, ay) + r, _items.Length))
+            v += RunThroughBody(l, ex, ey, ax, ay, r, j);
         return v;
     }
 
@@ -293,21 +280,8 @@ internal sealed partial class AnnealState
     {
         if (!_lowBody[j]) return 0;
         var reach = _widestRun / 2 + _slack;
-        var grid = _leadGrid;
         var v = 0.0;
-        if (!grid.Span(x0 - reach, y0 - reach, x1 + reach, y1 + reach, out var c0, out var r0, out var c1, out var r1))
-        {
-            for (var q = 0; q < _leads.Length; q++) v += RunUnderBody(q, j, change);
-            return v;
-        }
-        var wide = grid.Wide;
-        for (var k = 0; k < wide.Count; k++) v += RunUnderBody(wide[k], j, change);
-        for (var c = c0; c <= c1; c++)
-            for (var row = r0; row <= r1; row++)
-            {
-                var cell = grid.Cell(c, row);
-                for (var k = 0; k < cell.Count; k++) v += RunUnderBody(cell[k], j, change);
-            }
+        foreach (var q in _leadGrid.Around(x0 - reach, y0 - reach, x1 + reach, y1 + reach, _leads.Length)) v += RunUnderBody(q, j, change);
         return v;
     }
 

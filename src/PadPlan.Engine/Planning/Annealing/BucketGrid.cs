@@ -10,7 +10,7 @@ namespace PadPlan.Planning;
 internal sealed class BucketGrid
 {
     /// <summary>Most cells along either side of the grid.</summary>
-    public const int MaxCellsPerSide = 128;
+    private const int MaxCellsPerSide = 128;
     /// <summary>Most cells an entry is filed under, and a search reads, before the wide list (or every entry) takes over.</summary>
     public const int MaxCellsPerEntry = 64;
     /// <summary>Room around the region that the grid still covers (mm); entries beyond it share the edge cells.</summary>
@@ -26,8 +26,8 @@ internal sealed class BucketGrid
     /// <summary>Per entry, the cells it is filed under (first column, first row, last column, last row); -1 when filed nowhere.</summary>
     private readonly int[] _box;
 
-    /// <summary>Entries filed on the wide list, which every search reads (read it, do not change it).</summary>
-    public List<int> Wide { get; }
+    /// <summary>Entries filed on the wide list, which every search reads.</summary>
+    private readonly List<int> _wide;
 
     public BucketGrid(Region region, double smallestCell, int entries)
     {
@@ -42,14 +42,14 @@ internal sealed class BucketGrid
         for (var k = 0; k < _cells.Length; k++) _cells[k] = new List<int>(CellRoom);
         _box = new int[4 * entries];
         Array.Fill(_box, -1);
-        Wide = new List<int>(entries);
+        _wide = new List<int>(entries);
     }
 
-    public int Col(double x) => Math.Clamp((int)Math.Floor((x - _x0) / _size), 0, _cols - 1);
-    public int Row(double y) => Math.Clamp((int)Math.Floor((y - _y0) / _size), 0, _rows - 1);
+    private int Col(double x) => Math.Clamp((int)Math.Floor((x - _x0) / _size), 0, _cols - 1);
+    private int Row(double y) => Math.Clamp((int)Math.Floor((y - _y0) / _size), 0, _rows - 1);
 
-    /// <summary>The entries filed under one cell (read it, do not change it).</summary>
-    public List<int> Cell(int col, int row) => _cells[row * _cols + col];
+    /// <summary>The entries filed under one cell.</summary>
+    private List<int> Cell(int col, int row) => _cells[row * _cols + col];
 
     public bool IsWide(int e) => _box[4 * e] == WideMark;
 
@@ -57,10 +57,59 @@ internal sealed class BucketGrid
     /// The cells a search box reads, first and last column and row: false when they are more than
     /// <see cref="MaxCellsPerEntry"/>, and the search must read every entry instead.
     /// </summary>
-    public bool Span(double x0, double y0, double x1, double y1, out int c0, out int r0, out int c1, out int r1)
+    private bool Span(double x0, double y0, double x1, double y1, out int c0, out int r0, out int c1, out int r1)
     {
         (c0, c1, r0, r1) = (Col(x0), Col(x1), Row(y0), Row(y1));
         return (c1 - c0 + 1) * (r1 - r0 + 1) <= MaxCellsPerEntry;
+    }
+
+    /// <summary>
+    /// The entries a search box may meet, for a <c>foreach</c> that allocates nothing: every entry below
+    /// <paramref name="count"/> when the box spans more than <see cref="MaxCellsPerEntry"/> cells, otherwise the wide list and
+    /// then each spanned cell's entries, column by column. An entry filed under several cells comes once per cell: the caller
+    /// marks what it has seen.
+    /// </summary>
+    public Walk Around(double x0, double y0, double x1, double y1, int count) => new(this, x0, y0, x1, y1, count);
+
+    /// <summary>The enumerator of <see cref="Around"/>.</summary>
+    public ref struct Walk
+    {
+        private readonly BucketGrid _grid;
+        private readonly int _count, _c0, _r0, _c1, _r1;
+        private readonly bool _all;
+        private List<int>? _list;
+        private int _c, _r, _k;
+
+        internal Walk(BucketGrid grid, double x0, double y0, double x1, double y1, int count)
+        {
+            _grid = grid;
+            _count = count;
+            _all = !grid.Span(x0, y0, x1, y1, out _c0, out _r0, out _c1, out _r1);
+            _list = _all ? null : grid._wide;
+            (_c, _r, _k) = (_c0, _r0 - 1, -1);
+            Current = -1;
+        }
+
+        public int Current { get; private set; }
+
+        public readonly Walk GetEnumerator() => this;
+
+        public bool MoveNext()
+        {
+            if (_all)
+            {
+                if (++_k >= _count) return false;
+                Current = _k;
+                return true;
+            }
+            while (++_k >= _list!.Count)
+            {
+                if (++_r > _r1) { _r = _r0; if (++_c > _c1) return false; }
+                (_list, _k) = (_grid.Cell(_c, _r), -1);
+            }
+            Current = _list[_k];
+            return true;
+        }
     }
 
     /// <summary>Files entry e under every cell its box touches (on the wide list when that is too many), or nowhere when the box is not a number.</summary>
@@ -70,12 +119,12 @@ internal sealed class BucketGrid
         if (!double.IsNaN(x0) && !Span(x0, y0, x1, y1, out c0, out r0, out c1, out r1)) c0 = r0 = c1 = r1 = WideMark;
         var b = 4 * e;
         if (_box[b] == c0 && _box[b + 1] == r0 && _box[b + 2] == c1 && _box[b + 3] == r1) return;
-        if (_box[b] == WideMark) Wide.Remove(e);
+        if (_box[b] == WideMark) _wide.Remove(e);
         else if (_box[b] >= 0)
             for (var c = _box[b]; c <= _box[b + 2]; c++)
                 for (var r = _box[b + 1]; r <= _box[b + 3]; r++)
                     _cells[r * _cols + c].Remove(e);
-        if (c0 == WideMark) Wide.Add(e);
+        if (c0 == WideMark) _wide.Add(e);
         else if (c0 >= 0)
             for (var c = c0; c <= c1; c++)
                 for (var r = r0; r <= r1; r++)
