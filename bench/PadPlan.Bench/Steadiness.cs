@@ -39,12 +39,15 @@ internal static class Steadiness
     public static string Table(List<(string Name, Project Project)> cases, PlacerSettings settings, int seeds, int bestKnownSeeds)
     {
         var table = new StringBuilder();
-        table.AppendLine("| case | parts | total lead (mm) | spread | best known (mm) | worst / best known | longest lead (mm) | longest RF lead (mm) | time per seed (s) |");
-        table.AppendLine("|---|---|---|---|---|---|---|---|---|");
+        table.AppendLine("| case | parts | total lead (mm) | spread | lead floor (mm) | above the floor: spread | best known (mm) | worst / best known | longest lead (mm) | longest RF lead (mm) | time per seed (s) |");
+        table.AppendLine("|---|---|---|---|---|---|---|---|---|---|---|");
         foreach (var (name, project) in cases)
         {
             var runs = Place(project, settings, Enumerable.Range(1, seeds), name);
-            if (runs.Count == 0) { table.AppendLine($"| {name} | {project.Parts.Count} | failed | - | - | - | - | - | - |"); continue; }
+            if (runs.Count == 0) { table.AppendLine($"| {name} | {project.Parts.Count} | failed | - | - | - | - | - | - | - | - |"); continue; }
+            // no layout can beat the floor (WireFloor), so the seeds differ only in the lead above it
+            var floor = ProblemBuilder.Build(project, settings, CostWeights.Default).LeadLengthFloor;
+            var above = Spread.Of([.. runs.Select(r => r.Total - floor)]);
             var best = bestKnownSeeds > 0 ? Place(project, settings with { Effort = Effort.Thorough }, Enumerable.Range(1, bestKnownSeeds), name) : [];
             var t = Spread.Of([.. runs.Select(r => r.Total)]);
             var l = Spread.Of([.. runs.Select(r => r.Longest)]);
@@ -54,7 +57,7 @@ internal static class Steadiness
                 ? FormattableString.Invariant($"{known:0.0} (thorough seed {best.MinBy(b => b.Total)!.Seed} of {best.Count}{(t.Min < best.Min(b => b.Total) ? "; beaten by a normal seed" : "")})")
                 : "-";
             table.AppendLine(FormattableString.Invariant(
-                $"| {name}{(runs.Count < seeds ? $" ({seeds - runs.Count} seeds failed)" : "")} | {project.Parts.Count} | {t.Median:0.0} ({t.Min:0.0}-{t.Max:0.0}) | {t.Width:P0} | {knownText} | {(best.Count > 0 ? (t.Max / known).ToString("0.00", CultureInfo.InvariantCulture) : "-")} | {l.Median:0.0} ({l.Min:0.0}-{l.Max:0.0}) | {(rf.Max > 0 ? FormattableString.Invariant($"{rf.Median:0.0} ({rf.Min:0.0}-{rf.Max:0.0})") : "no RF net")} | {Spread.Of([.. runs.Select(r => r.Seconds)]).Median:0.00} |"));
+                $"| {name}{(runs.Count < seeds ? $" ({seeds - runs.Count} seeds failed)" : "")} | {project.Parts.Count} | {t.Median:0.0} ({t.Min:0.0}-{t.Max:0.0}) | {t.Width:P0} | {floor:0.0} | {above.Width:P0} | {knownText} | {(best.Count > 0 ? (t.Max / known).ToString("0.00", CultureInfo.InvariantCulture) : "-")} | {l.Median:0.0} ({l.Min:0.0}-{l.Max:0.0}) | {(rf.Max > 0 ? FormattableString.Invariant($"{rf.Median:0.0} ({rf.Min:0.0}-{rf.Max:0.0})") : "no RF net")} | {Spread.Of([.. runs.Select(r => r.Seconds)]).Median:0.00} |"));
         }
         return table.ToString();
     }
