@@ -40,7 +40,7 @@ public sealed record PlacementSummary(
         yield return $"pads: {Pads} cut or punched{(Strips > 0 ? $", {Strips} scored strips with {Segments} segments" : "")}";
         foreach (var line in PadsBySize) yield return "  " + line;
         yield return string.Create(c, $"leads: total {TotalLead:0.0} mm, longest {LongestLead:0.0} mm ({LongestLeadName}){(LongestRfLead > 0 ? $", longest on an RF net {LongestRfLead:0.0} mm ({LongestRfLeadName})" : "")}");
-        yield return string.Create(c, $"  no layout of these parts needs less than {LeadFloor:0.0} mm in all (each lead's minimum reach, pad gaps between a part's leads){(Effort == Effort.Thorough ? "" : "; --effort thorough or another --seed may come nearer")}");
+        yield return string.Create(c, $"  floor {LeadFloor:0.0} mm: no layout of these parts needs less{(Effort == Effort.Thorough ? "" : "; another --seed or --effort thorough may come nearer")}");
         yield return string.Create(c, $"jumpers: {Jumpers}{(Jumpers > 0 ? $", {JumperLength:0.0} mm of wire" : "")}");
         yield return string.Create(c, $"time: {Time.TotalSeconds:0.00} s, {Moves} moves in {Runs} run{(Runs == 1 ? "" : "s")}, seed {Seed}, effort {Effort.ToString().ToLowerInvariant()}");
     }
