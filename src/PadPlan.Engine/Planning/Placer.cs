@@ -112,12 +112,7 @@ public static class Placer
         {
             for (var first = from; first < to; first += PlacerLimits.RunBatch)
             {
-                var last = Math.Min(first + PlacerLimits.RunBatch, to);
-                if (settings.AllowThreads && last - first > 1)
-                    Parallel.For(first, last, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, One);
-                else
-                    for (var k = first; k < last; k++) One(k);
-                best = Best(results);
+                Pool([.. Enumerable.Range(first, Math.Min(first + PlacerLimits.RunBatch, to) - first)]);
                 if (enough()) return;
             }
         }
