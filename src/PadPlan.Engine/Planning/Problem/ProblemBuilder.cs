@@ -32,14 +32,19 @@ internal static class ProblemBuilder
                 item.StartY = placement.Position.Y;
                 item.StartRot = (int)placement.Rotation / 90;
             }
-            item.BodyBottom = footprint.BodyBottom;
-            item.LeadLevel = footprint.Leads.Max(l => Math.Max(footprint.Shape == BodyShape.Wires ? footprint.Height : footprint.LeadBend, l.Diameter) + l.Diameter / 2);
             item.BodyMinX = footprint.Body.Min(p => p.X);
             item.BodyMaxX = footprint.Body.Max(p => p.X);
             item.BodyMinY = footprint.Body.Min(p => p.Y);
             item.BodyMaxY = footprint.Body.Max(p => p.Y);
             items.Add(item);
             AddLeads(project, item, netIndex, groundNets, leads, weights);
+            // Heights above the plane. A part stands on the highest copper its leads land on (the checker's solids): a pad's
+            // stock when any lead goes to a net's pad or strip, the plane itself when every lead goes to ground. So a part whose
+            // leads all go to ground sits a stock thickness lower than one beside it on pads, and the leads of the other pass that
+            // much nearer its underside.
+            var seat = item.Leads.Any(l => leads[l].Net >= 0) ? toolkit.StockThickness : 0;
+            item.BodyBottom = seat + footprint.BodyBottom;
+            item.LeadLevel = seat + footprint.Leads.Max(l => Math.Max(footprint.Shape == BodyShape.Wires ? footprint.Height : footprint.LeadBend, l.Diameter) + l.Diameter / 2);
             if (footprint.Mount == MountStyle.Strip && !item.Fixed) AddStrips(project, item, netIndex, islands, leads);
         }
 

@@ -26,7 +26,7 @@ internal sealed class ProblemItem
     public bool KeepsOffPads;
     /// <summary>An axial part lying on the board: its body would rest on any pad beneath it.</summary>
     public bool LiesFlat;
-    /// <summary>Height of the body's underside above the pad tops (mm), and the highest a lead of this part runs (its lead bend, at least one lead diameter, plus half a diameter).</summary>
+    /// <summary>Height of the body's underside above the plane (mm), and the highest a lead of this part runs (its lead bend, at least one lead diameter, plus half a diameter), both from the copper the part stands on: the pad tops, or the plane when every lead goes to ground.</summary>
     public double BodyBottom, LeadLevel;
     /// <summary>-1 pulled to the left edge (input), +1 to the right edge (output), 0 neither.</summary>
     public int Flow;
