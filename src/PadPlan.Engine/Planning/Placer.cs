@@ -81,19 +81,7 @@ public static class Placer
             if (k < independent) annealer.Start(settings.Start, k);
             else annealer.Resume(best!.State);
             annealer.Run(settings.MovesFactor, (step, cost, violation) => progress?.Report(new PlacerProgress(k + 1, "annealing", step, cost, violation)));
-            var legal = Legaliser.Finish(state);
-            for (var rework = 0; !legal && rework < PlacerLimits.ReworkTries && state.Violation <= PlacerLimits.ReworkViolationPerItem * problem.Items.Length; rework++)
-            {
-                annealer.Rework(settings.MovesFactor, rework);
-                legal = Legaliser.Finish(state);
-            }
-            if (legal)
-            {
-                var kept = new AnnealState(problem);
-                kept.CopyFrom(state);
-                annealer.Polish(settings.MovesFactor);
-                if (!Legaliser.Finish(state)) state.CopyFrom(kept);
-            }
+            var legal = Finished(state, annealer, settings);
             progress?.Report(new PlacerProgress(k + 1, legal ? "legal" : "not legal", 0, state.Cost, state.Violation));
             results[k] = new RunOutcome(state, legal, annealer.Stats.TotalTried) { Stats = annealer.Stats };
         }
@@ -132,6 +120,46 @@ public static class Placer
     }
 
     /// <summary>
+    /// The end of a run: legalised, reworked up to <see cref="PlacerLimits.ReworkTries"/> times when the legaliser leaves it a
+    /// little short, and when legal polished (the polish kept only if it stays legal). True when the layout breaks no rule.
+    /// </summary>
+    private static bool Finished(AnnealState state, Annealer annealer, PlacerSettings settings)
+    {
+        var items = state.Problem.Items.Length;
+        var legal = Legaliser.Finish(state);
+        for (var rework = 0; !legal && rework < PlacerLimits.ReworkTries && state.Violation <= PlacerLimits.ReworkViolationPerItem * items; rework++)
+        {
+            annealer.Rework(settings.MovesFactor, rework);
+            legal = Legaliser.Finish(state);
+        }
+        if (!legal) return false;
+        var kept = new AnnealState(state.Problem);
+        kept.CopyFrom(state);
+        annealer.Polish(settings.MovesFactor);
+        if (!Legaliser.Finish(state)) state.CopyFrom(kept);
+        return true;
+    }
+
+    /// <summary>
+    /// After a failed try whose broken nets were planned again (<see cref="Replanned"/>): the failed layout carried over to the
+    /// new plan (<see cref="LayoutCarry"/>: every part, and every pad the old plan also had, where it was; each new pad beside
+    /// the lead of its net that fell shortest), then finished as a run is. The new pads sit where the leads could not reach,
+    /// so a layout that was nearly legal is kept instead of annealed again from the start. Null when it does not come out legal.
+    /// </summary>
+    private static RunOutcome? CarriedOver(PlacementProblem problem, RunOutcome failed, PlacerSettings settings)
+    {
+        var old = failed.State;
+        old.Slack = 0;
+        old.Recompute();
+        if (old.Violation > PlacerLimits.HopelessViolationPerItem * old.Problem.Items.Length) return null;
+        var state = new AnnealState(problem);
+        LayoutCarry.Into(old, state);
+        var annealer = new Annealer(state, settings.Seed * 7919L + PlacerLimits.CarryRun);
+        if (!Finished(state, annealer, settings)) return null;
+        return new RunOutcome(state, true, failed.Moves + annealer.Stats.TotalTried) { Stats = annealer.Stats, Runs = failed.Runs };
+    }
+
+    /// <summary>
     /// The final descent of the kept layout (<see cref="Annealer.Descend"/>), on circuits placed for steadiness: its result
     /// replaces the layout only when it is legal and costs no more. With the moves it tried.
     /// </summary>
@@ -159,14 +187,15 @@ public static class Placer
     private static RunOutcome PlaceOnAutoBoard(PlacementProblem problem, PlacerSettings settings, IProgress<PlacerProgress>? progress)
     {
         var region = problem.Region;
-        var ownPads = new SortedSet<string>(StringComparer.Ordinal);
+        var replan = new PadReplan();
         RunOutcome? outcome = null;
         for (var attempt = 0; attempt <= PlacerLimits.AutoGrowTries; attempt++)
         {
             outcome = RunAll(problem.WithRegion(region), settings, progress);
             if (outcome.Legal) return outcome;
-            if (WithOwnPads(ref problem, outcome, ownPads, settings))
+            if (Replanned(ref problem, outcome, replan, settings))
             {
+                if (CarriedOver(problem.WithRegion(region), outcome, settings) is { } carried) return carried;
                 outcome = RunAll(problem.WithRegion(region), settings, progress);
                 if (outcome.Legal) return outcome;
             }
@@ -178,18 +207,16 @@ public static class Placer
     }
 
     /// <summary>
-    /// After a failed try: the nets it left broken at an IC's strip segments (a lead that does not reach one, or runs under a
-    /// body to get there) join <paramref name="ownPads"/>, and the problem is planned again with pads of their own for every
-    /// lead from elsewhere, so such a lead can land beside its part and a wire link joins the pad to the segment. False when
-    /// no new net is named (the problem stays as it was). Only a failing try changes anything, so layouts that place
-    /// without it stay the same.
+    /// After a failed try: what it left broken joins <paramref name="replan"/> (<see cref="PadReplan"/>), and the problem is
+    /// planned again: nets broken at an IC's strip segments (a lead that does not reach one, or runs under a body to get there)
+    /// with pads of their own for every lead from elsewhere, so such a lead can land beside its part and a wire link joins the
+    /// pad to the segment; nets whose leads lie in groups too far apart with a pad for each group. False when nothing new was
+    /// learnt (the problem stays as it was). Only a failing try changes anything, so layouts that place without it stay the same.
     /// </summary>
-    private static bool WithOwnPads(ref PlacementProblem problem, RunOutcome failed, SortedSet<string> ownPads, PlacerSettings settings)
+    private static bool Replanned(ref PlacementProblem problem, RunOutcome failed, PadReplan replan, PlacerSettings settings)
     {
-        var before = ownPads.Count;
-        ownPads.UnionWith(failed.State.NetsShortAtStrips());
-        if (ownPads.Count == before) return false;
-        problem = ProblemBuilder.Build(problem.Project, settings, problem.Weights, ownPads);
+        if (!replan.Learn(failed.State)) return false;
+        problem = ProblemBuilder.Build(problem.Project, settings, problem.Weights, replan.OwnPads, replan.Split);
         return true;
     }
 
@@ -201,8 +228,9 @@ public static class Placer
         {
             var outcome = RunAll(problem, settings, progress);
             if (outcome.Legal) return outcome;
-            if (WithOwnPads(ref problem, outcome, new SortedSet<string>(StringComparer.Ordinal), settings))
+            if (Replanned(ref problem, outcome, new PadReplan(), settings))
             {
+                if (CarriedOver(problem, outcome, settings) is { } carried) return carried;
                 outcome = RunAll(problem, settings, progress);
                 if (outcome.Legal) return outcome;
             }

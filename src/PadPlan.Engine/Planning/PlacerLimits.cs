@@ -107,6 +107,9 @@ internal static class PlacerLimits
     public const int DescentRounds = 50;
     /// <summary>Added to the seed's run numbers for the final descent's own random moves, so they never repeat a run's.</summary>
     public const int DescentRun = 99;
+
+    /// <summary>Run number of the polish of a failed layout carried over to a new plan of its pads.</summary>
+    public const int CarryRun = 500;
     /// <summary>Smallest move range (mm).</summary>
     public const double MinRange = 0.5;
     /// <summary>Violation (mm per item) after annealing beyond which the legaliser does not try: such a run is not legal, and another run or a larger region is the remedy.</summary>

@@ -46,4 +46,55 @@ public class OwnPadTests
         var findings = CheckerVerdict.Check(result.Project!);
         Assert.True(findings.Count == 0, string.Join("\n", findings));
     }
+
+    /// <summary>Two resistors on one net, 60 mm apart: one pad cannot be within both leads' reach.</summary>
+    private static Project ResistorsFarApart() => Project("far", new Board(100, 40),
+        [new Net("GND", Ground: true), new Net("NA"), new Net("NS"), new Net("NB")],
+        [
+            Part("R1", "res-axial-250mw", ("1", "NA"), ("2", "NS")),
+            Part("R2", "res-axial-250mw", ("1", "NS"), ("2", "NB")),
+        ]);
+
+    private static AnnealState FarApart(PlacementProblem problem)
+    {
+        var state = new AnnealState(problem);
+        new Annealer(state, 1).SpringStart();
+        (state.X[0], state.Y[0], state.Rot[0]) = (15, 20, 0);
+        (state.X[1], state.Y[1], state.Rot[1]) = (75, 20, 0);
+        // NS's one pad just beyond R1's lead 2 (which leaves at x = 18.15), as a run that could not serve both would leave it.
+        var pad = problem.Items.Single(i => !i.IsPart && problem.Nets[problem.Islands[i.Islands[0]].Net].Net.Name == "NS").Index;
+        (state.X[pad], state.Y[pad]) = (21, 20);
+        state.Recompute();
+        return state;
+    }
+
+    [Fact]
+    public void A_broken_net_whose_leads_lie_far_apart_is_named_with_its_groups()
+    {
+        var state = FarApart(ProblemBuilder.Build(ResistorsFarApart(), PlacerSettings.Default, CostWeights.Default));
+        var split = state.NetsSplitApart();
+        Assert.Equal(2, split["NS"]); // R1.2 and R2.1, 60 mm apart, more than twice the net's lead limit
+        Assert.False(split.ContainsKey("NA")); // one lead: one group
+    }
+
+    /// <summary>
+    /// A failed layout carried over to the plan that gives the split net a pad per group keeps every part where it was, and
+    /// the new pad goes beside the lead that fell short, so that net is no longer broken (a wire link joins its two pads).
+    /// </summary>
+    [Fact]
+    public void A_failed_layout_carried_to_the_new_plan_keeps_its_parts_and_puts_the_new_pad_beside_the_short_lead()
+    {
+        var project = ResistorsFarApart();
+        var old = FarApart(ProblemBuilder.Build(project, PlacerSettings.Default, CostWeights.Default));
+        var replan = new PadReplan();
+        Assert.True(replan.Learn(old));
+        var problem = ProblemBuilder.Build(project, PlacerSettings.Default, CostWeights.Default, replan.OwnPads, replan.Split);
+        var carried = new AnnealState(problem);
+        LayoutCarry.Into(old, carried);
+        Assert.Equal((15.0, 75.0), (carried.X[0], carried.X[1]));
+        var ns = Array.FindIndex(problem.Nets, n => n.Net.Name == "NS");
+        Assert.Equal(2, problem.Nets[ns].Islands.Length);
+        Assert.DoesNotContain(carried.Problems(), p => p.Contains("net NS", StringComparison.Ordinal));
+        Assert.False(replan.Learn(carried)); // nothing more to learn: the plan stays as it is
+    }
 }

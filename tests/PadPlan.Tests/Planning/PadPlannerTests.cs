@@ -38,6 +38,20 @@ public class PadPlannerTests
         Assert.True(pads.Sum(p => p.Capacity) >= 50);
     }
 
+    /// <summary>After a failed try found a net's leads in groups too far apart for one pad, each group gets a pad (joined by wire links).</summary>
+    [Fact]
+    public void A_net_found_in_groups_gets_a_pad_for_each_group_that_together_hold_its_leads()
+    {
+        var pads = PadPlanner.PlanNet(new Net("N"), 4, Toolkit.Default, RuleSettings.Default, atLeast: 2);
+        Assert.Equal(2, pads.Count);
+        Assert.True(pads.Sum(p => p.Capacity) >= 4);
+        Assert.Equal(3, PadPlanner.PlanNet(new Net("N"), 3, Toolkit.Default, RuleSettings.Default, atLeast: 5).Count); // one per lead at most
+    }
+
+    [Fact]
+    public void Without_wire_links_a_net_keeps_one_pad_however_its_leads_lie() =>
+        Assert.Single(PadPlanner.PlanNet(new Net("N"), 4, Toolkit.Default, RuleSettings.Default with { AllowJumpers = false }, atLeast: 2));
+
     [Fact]
     public void No_leads_no_pad() => Assert.Empty(PadPlanner.PlanNet(new Net("N"), 0, Toolkit.Default, RuleSettings.Default));
 }

@@ -50,6 +50,42 @@ internal sealed partial class AnnealState
         return found;
     }
 
+    /// <summary>
+    /// Nets that still break a rule with their free leads in more than one group, each group's exits farther than twice the
+    /// net's reach limit from every other's (single linkage): one pad cannot serve them all, each group wants one of its own.
+    /// </summary>
+    public IReadOnlyDictionary<string, int> NetsSplitApart()
+    {
+        var found = new SortedDictionary<string, int>(StringComparer.Ordinal);
+        for (var n = 0; n < _nets.Length; n++)
+        {
+            if (_netViol[n] <= 1e-9) continue;
+            var groups = LeadGroups(_nets[n].FreeLeads, 2 * _nets[n].MaxLead);
+            if (groups > 1) found[_nets[n].Net.Name] = groups;
+        }
+        return found;
+    }
+
+    /// <summary>Groups of leads whose exits are linked by steps of at most <paramref name="link"/> mm.</summary>
+    private int LeadGroups(int[] leads, double link)
+    {
+        var group = new int[leads.Length];
+        for (var a = 0; a < leads.Length; a++) group[a] = a;
+        int Root(int a) { while (group[a] != a) a = group[a] = group[group[a]]; return a; }
+        var groups = leads.Length;
+        for (var a = 0; a < leads.Length; a++)
+            for (var b = a + 1; b < leads.Length; b++)
+            {
+                var (dx, dy) = (_exX[leads[a]] - _exX[leads[b]], _exY[leads[a]] - _exY[leads[b]]);
+                if (dx * dx + dy * dy > link * link) continue;
+                var (ra, rb) = (Root(a), Root(b));
+                if (ra == rb) continue;
+                group[ra] = rb;
+                groups--;
+            }
+        return groups;
+    }
+
     /// <summary>Total length of all leads as they land now (mm).</summary>
     public double LeadTotal()
     {

@@ -6,17 +6,19 @@ namespace PadPlan.Planning;
 public static class PadPlanner
 {
     /// <summary>Pads for a net that still needs room for this many leads (after strip segments and kept pads have taken theirs).</summary>
-    public static IReadOnlyList<PlannedPad> PlanNet(Net net, int leads, Toolkit toolkit, RuleSettings rules)
+    /// <param name="atLeast">Pads to plan at the least (at most one per lead), joined by jumpers when they are allowed: an earlier try found the net's leads in that many groups too far apart for one pad.</param>
+    public static IReadOnlyList<PlannedPad> PlanNet(Net net, int leads, Toolkit toolkit, RuleSettings rules, int atLeast = 1)
     {
         if (leads <= 0) return [];
+        var wanted = rules.AllowJumpers ? Math.Clamp(atLeast, 1, leads) : 1;
         var single = SinglePad(net.Name, leads, toolkit);
-        if (single is not null) return [single];
+        if (single is not null && wanted == 1) return [single];
         var largest = LargestPad(net.Name, toolkit);
         if (!rules.AllowJumpers)
             throw new PlacementImpossibleException(new PlacementFailure(
                 $"net {net.Name} has {leads} leads to land on pads; the largest pad this toolkit allows holds {largest.Capacity} ({Describe(largest)}) and jumpers are switched off.",
                 "Set rules.allowJumpers to true so the net can spread over several jumpered pads, add a wider strip width to the toolkit, or split the net in the circuit."));
-        var pieces = (leads + largest.Capacity - 1) / largest.Capacity;
+        var pieces = Math.Max(wanted, (leads + largest.Capacity - 1) / largest.Capacity);
         var pads = new List<PlannedPad>();
         var left = leads;
         for (var i = 0; i < pieces; i++)

@@ -6,7 +6,8 @@ namespace PadPlan.Planning;
 internal static class ProblemBuilder
 {
     /// <param name="ownPadNets">Nets whose strip segments are not counted as room for leads from elsewhere: every such lead gets room on a pad of its own (an earlier try left the net broken at a strip).</param>
-    public static PlacementProblem Build(Project project, PlacerSettings settings, CostWeights weights, IReadOnlySet<string>? ownPadNets = null)
+    /// <param name="splitNets">Nets planned with at least this many pads: an earlier try left the net broken with its leads in that many groups, too far apart for one pad.</param>
+    public static PlacementProblem Build(Project project, PlacerSettings settings, CostWeights weights, IReadOnlySet<string>? ownPadNets = null, IReadOnlyDictionary<string, int>? splitNets = null)
     {
         var rules = project.Rules;
         var toolkit = project.Toolkit;
@@ -87,7 +88,7 @@ internal static class ProblemBuilder
                 spare += items[island.Item].IsPart ? Math.Min(1, room) : room;
             }
             var free = netLeads.Count(l => leads[l].OwnIsland < 0);
-            foreach (var planned in PadPlanner.PlanNet(net.Net, free - spare, toolkit, rules))
+            foreach (var planned in PadPlanner.PlanNet(net.Net, free - spare, toolkit, rules, splitNets?.GetValueOrDefault(net.Net.Name) ?? 1))
             {
                 var item = new ProblemItem { Index = items.Count, Pad = planned, CanTurn = planned.Shape == PlannedShape.Rect && planned.Width != planned.Height };
                 items.Add(item);
