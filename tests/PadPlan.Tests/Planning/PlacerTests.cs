@@ -124,6 +124,29 @@ public class PlacerTests
             placed.Layout.Placements.Select(p => (p.Ref, p.Position, p.Rotation)).OrderBy(p => p.Ref));
     }
 
+    /// <summary>
+    /// Holding a part holds where its ground leads meet the plane: the placement problem starts each such lead on the landing
+    /// the layout gives it, not on its first candidate (which broke rules the layout kept, so a placed project held whole, or
+    /// a swap with most of the board held, found no legal layout).
+    /// </summary>
+    [Fact]
+    public void Held_parts_start_with_their_ground_leads_where_the_layout_has_them()
+    {
+        var fixture = Placed(TinyBufferWithoutLayout(), Quick);
+        var problem = ProblemBuilder.Build(fixture, Quick with { KeepExisting = true }, CostWeights.Default);
+        var state = new AnnealState(problem);
+        state.Recompute();
+        var grounded = problem.Items.Where(i => i.IsPart).SelectMany(i => i.GroundLeads.Select(l => (Item: i, Lead: l))).ToList();
+        Assert.Contains(grounded, g => problem.Leads[g.Lead].StartChoice != 0); // else the check below proves little
+        foreach (var (item, l) in grounded)
+        {
+            var written = fixture.Layout!.Placements.Single(p => p.Ref == item.Part!.Ref).Leads.Single(x => x.Pin == problem.Leads[l].Pin).At;
+            var (x, y) = state.GroundPoint(l);
+            Assert.True(Math.Abs(x - written.X) <= 0.01 && Math.Abs(y - written.Y) <= 0.01, $"{item.Part!.Ref}.{problem.Leads[l].Pin} starts at ({x:0.###}, {y:0.###}), the layout has {written}");
+        }
+        Assert.Equal(0, state.Violation, 9);
+    }
+
     [Fact]
     public void Too_small_a_board_fails_with_the_size_it_needs()
     {

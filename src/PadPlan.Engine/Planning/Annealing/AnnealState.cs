@@ -102,7 +102,9 @@ internal sealed partial class AnnealState
         for (var i = 0; i < n; i++)
         {
             var item = _items[i];
-            if (item.Fixed) { X[i] = item.StartX; Y[i] = item.StartY; Rot[i] = item.StartRot; }
+            if (!item.Fixed) continue;
+            (X[i], Y[i], Rot[i]) = (item.StartX, item.StartY, item.StartRot);
+            foreach (var l in item.GroundLeads) GroundChoice[l] = _leads[l].StartChoice;
         }
     }
 

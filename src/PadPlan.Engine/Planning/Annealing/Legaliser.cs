@@ -56,14 +56,15 @@ internal static class Legaliser
             // A pass that mended nothing leaves the next one the same searches from nearly the same layout: stop.
             if (s.Violation <= Clean || s.Violation >= last - Clean) return;
             last = s.Violation;
-            var bad = Enumerable.Range(0, items.Length).Where(i => !items[i].Fixed)
+            // A held part stays where it is, but where its ground leads meet the plane may still change.
+            var bad = Enumerable.Range(0, items.Length).Where(i => !items[i].Fixed || items[i].GroundLeads.Length > 0)
                 .Select(i => (Item: i, V: s.ViolationOf(i))).Where(x => x.V > Clean)
                 .OrderByDescending(x => x.V).ThenBy(x => x.Item).Select(x => x.Item).ToList();
             foreach (var i in bad)
             {
                 if (s.ViolationOf(i) <= Clean) continue;
                 TryGroundLandings(s, i);
-                if (s.ViolationOf(i) <= Clean) continue;
+                if (items[i].Fixed || s.ViolationOf(i) <= Clean) continue;
                 TryNearbySpots(s, i, s.ViolationOf(i));
                 if (s.ViolationOf(i) <= Clean) continue;
                 Untangle(s, i);

@@ -46,6 +46,7 @@ internal static class ProblemBuilder
             var seat = item.Leads.Any(l => leads[l].Net >= 0) ? toolkit.StockThickness : 0;
             item.BodyBottom = seat + footprint.BodyBottom;
             item.LeadLevel = seat + footprint.Leads.Max(l => Math.Max(footprint.Shape == BodyShape.Wires ? footprint.Height : footprint.LeadBend, l.Diameter) + l.Diameter / 2);
+            if (item.Fixed && placed.TryGetValue(part.Ref, out var held)) KeepGroundLandings(item, held, leads);
             if (footprint.Mount == MountStyle.Strip && !item.Fixed) AddStrips(project, item, netIndex, islands, leads);
         }
 
@@ -213,6 +214,29 @@ internal static class ProblemBuilder
         }
         item.Leads = [.. own];
         item.GroundLeads = [.. ground];
+    }
+
+    /// <summary>
+    /// A held part's ground leads start where the layout has them meet the plane (the nearest candidate landing): holding a
+    /// part holds its landings too, unless a move must change one. Starting every such lead on its first candidate instead
+    /// broke rules the layout kept (a placed project held whole did not place again).
+    /// </summary>
+    private static void KeepGroundLandings(ProblemItem item, Placement held, List<ProblemLead> leads)
+    {
+        foreach (var l in item.GroundLeads)
+        {
+            var lead = leads[l];
+            if (held.Leads.FirstOrDefault(x => x.OnPlane && string.Equals(x.Pin, lead.Pin, StringComparison.Ordinal)) is not { } landing) continue;
+            var (best, bestD) = (0, double.PositiveInfinity);
+            for (var c = 0; c < lead.GroundX.Length; c++)
+            {
+                var (gx, gy) = Geometry.Rotate(item.StartRot, lead.GroundX[c], lead.GroundY[c]);
+                var (dx, dy) = (item.StartX + gx - landing.At.X, item.StartY + gy - landing.At.Y);
+                var d = dx * dx + dy * dy;
+                if (d < bestD) (best, bestD) = (c, d);
+            }
+            lead.StartChoice = best;
+        }
     }
 
     private static void GroundCandidates(ProblemLead lead)

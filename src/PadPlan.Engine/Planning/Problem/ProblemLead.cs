@@ -14,5 +14,7 @@ internal sealed class ProblemLead
     public int OwnIsland = -1;
     /// <summary>Ground landing candidates at rotation 0 relative to the part, with the reach each needs; the first is the shortest.</summary>
     public double[] GroundX = [], GroundY = [], GroundReach = [];
+    /// <summary>For a ground lead of a held part: the candidate landing nearest where the layout has it (0 otherwise).</summary>
+    public int StartChoice;
     public double Weight = 1;
 }
