@@ -18,12 +18,9 @@ internal sealed partial class AnnealState
     private int _changedCount, _leadSeenStamp, _tangledCount, _nearWorst;
     private int[] _tangled = [];
     private double _nearWorstV;
-    private double _leadReach, _crossBefore;
-    /// <summary>Most changed leads whose pairs among themselves are kept from the opening of a move for its evaluation; pairs beyond are measured again.</summary>
-    private const int KeptPairLeads = 64;
-    // What opening a move measured per changed lead (by its place in _changed) and per pair of the first KeptPairLeads of them,
-    // with the exit each lead had: a lead whose path the move leaves alone gives the same figures again, so the evaluation reuses them.
-    private double[] _nearBefore = [], _pairBefore = [], _exBeforeX = [], _exBeforeY = [];
+    private double _leadReach;
+    // Per changed lead (by its place in _changed): its exit as the move opened, and whether the move left its path alone.
+    private double[] _exBeforeX = [], _exBeforeY = [];
     private bool[] _pathKept = [];
 
     private void BuildCrossing()
@@ -44,9 +41,8 @@ internal sealed partial class AnnealState
         Array.Fill(_lx, double.NaN);
         Array.Fill(_ly, double.NaN);
         _changed = new int[n];
-        _nearBefore = new double[n]; _exBeforeX = new double[n]; _exBeforeY = new double[n];
+        _exBeforeX = new double[n]; _exBeforeY = new double[n];
         _pathKept = new bool[n];
-        _pairBefore = new double[KeptPairLeads * (KeptPairLeads - 1) / 2];
         _tangled = new int[2 * n];
         _changedStamp = new int[n];
         _leadSeen = new int[n];
@@ -102,7 +98,7 @@ internal sealed partial class AnnealState
         {
             if (!_crosses[p]) continue;
             _changedStamp[p] = _stamp;
-            var near = CrossingNear(p, _lx, _ly);
+            var near = CrossingNear(p);
             if (near > 0) perLead?.Invoke(p, near);
             v += near;
         }
@@ -114,7 +110,7 @@ internal sealed partial class AnnealState
     {
         if (!_crosses[l]) return (0, -1);
         _stamp++;
-        var v = CrossingNear(l, _lx, _ly);
+        var v = CrossingNear(l);
         return (v, _nearWorst);
     }
 
@@ -124,7 +120,7 @@ internal sealed partial class AnnealState
         _stamp++;
         var v = 0.0;
         foreach (var l in _items[i].Leads)
-            if (_crosses[l]) v += CrossingNear(l, _lx, _ly);
+            if (_crosses[l]) v += CrossingNear(l);
         return v;
     }
 
@@ -144,86 +140,78 @@ internal sealed partial class AnnealState
             foreach (var l in _nets[_affected[k]].FreeLeads) Add(l);
     }
 
-    /// <summary>Violations of every pair with a changed lead as committed, when a move opens; keeps each lead's and each pair's figure, and each lead's exit, for <see cref="CrossingOfChangedAfter"/>.</summary>
-    private double CrossingOfChangedBefore()
+    /// <summary>Keeps each changed lead's exit as the move opens, for <see cref="CrossingChange"/>.</summary>
+    private void KeepChangedExits()
     {
-        var v = 0.0;
-        var kept = 0;
         for (var i = 0; i < _changedCount; i++)
         {
             var p = _changed[i];
             (_exBeforeX[i], _exBeforeY[i]) = (_exX[p], _exY[p]);
-            _nearBefore[i] = CrossingNear(p, _lx, _ly);
-            v += _nearBefore[i];
-            for (var j = i + 1; j < _changedCount; j++)
-            {
-                var q = _changed[j];
-                var c = CrossPair(p, q, _lx[p], _ly[p], _lx[q], _ly[q]);
-                if (j < KeptPairLeads) _pairBefore[kept++] = c;
-                v += c;
-            }
         }
-        return v;
     }
 
     /// <summary>
-    /// Violations of every pair with a changed lead, measured with the changed leads' new landings (_lxNew, _lyNew) once the
-    /// move is applied. A changed lead whose exit and landing stayed bit for bit the same (a free lead of another part, still on
-    /// its pad) meets the unchanged leads as before, and another such lead as before, so those figures are taken from the opening;
-    /// the sum runs in the same order over the same figures, so it is the very number a full re-measure gives.
+    /// How much the open move changes the crossing violations, once it is applied: for every changed lead whose path moved
+    /// (its exit or its landing), its figure against the unchanged leads with the new path less that with the old one, and
+    /// for every pair of changed leads of which one moved, the new figure less the old. A changed lead whose exit and landing
+    /// stayed bit for bit the same (a free lead of another part, still on its pad) meets the unchanged leads, and another such
+    /// lead, exactly as before, so it adds nothing and is not measured at all.
     /// </summary>
-    private double CrossingOfChangedAfter()
+    private double CrossingChange()
     {
+        var moved = 0;
         for (var i = 0; i < _changedCount; i++)
         {
             var p = _changed[i];
             _pathKept[i] = SameBits(_exX[p], _exBeforeX[i]) && SameBits(_exY[p], _exBeforeY[i])
                 && SameBits(_lxNew[p], _lx[p]) && SameBits(_lyNew[p], _ly[p]);
+            if (!_pathKept[i]) moved++;
         }
-        var v = 0.0;
-        var kept = 0;
+        if (moved == 0) return 0;
+        var d = 0.0;
         for (var i = 0; i < _changedCount; i++)
         {
             var p = _changed[i];
-            v += _pathKept[i] ? _nearBefore[i] : CrossingNear(p, _lxNew, _lyNew);
+            if (!_pathKept[i])
+                d += CrossingNear(p, _exX[p], _exY[p], _lxNew[p], _lyNew[p]) - CrossingNear(p, _exBeforeX[i], _exBeforeY[i], _lx[p], _ly[p]);
             for (var j = i + 1; j < _changedCount; j++)
             {
+                if (_pathKept[i] && _pathKept[j]) continue;
                 var q = _changed[j];
-                var reuse = j < KeptPairLeads && _pathKept[i] && _pathKept[j];
-                v += reuse ? _pairBefore[kept] : CrossPair(p, q, _lxNew[p], _lyNew[p], _lxNew[q], _lyNew[q]);
-                if (j < KeptPairLeads) kept++;
+                d += CrossPair(p, q, _exX[p], _exY[p], _lxNew[p], _lyNew[p], _exX[q], _exY[q], _lxNew[q], _lyNew[q])
+                    - CrossPair(p, q, _exBeforeX[i], _exBeforeY[i], _lx[p], _ly[p], _exBeforeX[j], _exBeforeY[j], _lx[q], _ly[q]);
             }
         }
-        return v;
+        return d;
     }
 
     /// <summary>The same double to the bit (NaN, the mark of no landing, equals itself).</summary>
     private static bool SameBits(double a, double b) => BitConverter.DoubleToInt64Bits(a) == BitConverter.DoubleToInt64Bits(b);
 
-    /// <summary>Violations between lead p (landing px, py) and every unchanged lead whose committed path is near (a search over more than <see cref="BucketGrid.MaxCellsPerEntry"/> cells reads every lead instead).</summary>
-    private double CrossingNear(int p, double[] lx, double[] ly)
+    /// <summary>Violations between lead p, with its committed path, and every unchanged lead whose committed path is near.</summary>
+    private double CrossingNear(int p) => CrossingNear(p, _exX[p], _exY[p], _lx[p], _ly[p]);
+
+    /// <summary>Violations between lead p on the path (ex, ey) to (px, py) and every unchanged lead whose committed path is near (a search over more than <see cref="BucketGrid.MaxCellsPerEntry"/> cells reads every lead instead).</summary>
+    private double CrossingNear(int p, double ex, double ey, double px, double py)
     {
-        var (px, py) = (lx[p], ly[p]);
         if (double.IsNaN(px)) return 0;
         var reach = _leadReach + _slack;
         _leadSeenStamp++;
         (_nearWorst, _nearWorstV) = (-1, 0.0);
         var v = 0.0;
-        double Near(int q)
+        foreach (var q in _leadGrid.Around(Math.Min(ex, px) - reach, Math.Min(ey, py) - reach, Math.Max(ex, px) + reach, Math.Max(ey, py) + reach, _leads.Length))
         {
-            if (_leadSeen[q] == _leadSeenStamp || _changedStamp[q] == _stamp || !_crosses[q]) return 0;
+            if (_leadSeen[q] == _leadSeenStamp || _changedStamp[q] == _stamp || !_crosses[q]) continue;
             _leadSeen[q] = _leadSeenStamp;
-            var c = CrossPair(p, q, px, py, _lx[q], _ly[q]);
+            var c = CrossPair(p, q, ex, ey, px, py, _exX[q], _exY[q], _lx[q], _ly[q]);
             if (c > _nearWorstV) (_nearWorst, _nearWorstV) = (q, c);
-            return c;
+            v += c;
         }
-        foreach (var q in _leadGrid.Around(Math.Min(_exX[p], px) - reach, Math.Min(_exY[p], py) - reach, Math.Max(_exX[p], px) + reach, Math.Max(_exY[p], py) + reach, _leads.Length))
-            v += Near(q);
         return v;
     }
 
     /// <summary>How much nearer than allowed two lead paths come (mm): the lead gap between two parts; within one part at most half the gap its package leaves at the body.</summary>
-    private double CrossPair(int p, int q, double px, double py, double qx, double qy)
+    private double CrossPair(int p, int q, double pex, double pey, double px, double py, double qex, double qey, double qx, double qy)
     {
         var (a, b) = (_leads[p], _leads[q]);
         if (double.IsNaN(px) || double.IsNaN(qx) || (a.Ground && b.Ground) || (a.Net >= 0 && a.Net == b.Net)) return 0;
@@ -232,12 +220,12 @@ internal sealed partial class AnnealState
         var gap = _p.Rules.LeadGap;
         if (a.Item == b.Item)
         {
-            var ex = _exX[p] - _exX[q];
-            var ey = _exY[p] - _exY[q];
+            var ex = pex - qex;
+            var ey = pey - qey;
             gap = Math.Min(gap, (Math.Sqrt(ex * ex + ey * ey) - radii) / 2);
         }
         var need = radii + gap + PlacerLimits.Safety + _slack;
-        var d = Geometry.SegmentGap(_exX[p], _exY[p], px, py, _exX[q], _exY[q], qx, qy, need);
+        var d = Geometry.SegmentGap(pex, pey, px, py, qex, qey, qx, qy, need);
         return d < need ? need - d : 0;
     }
 }

@@ -49,8 +49,7 @@ internal sealed partial class AnnealState
         viol += PairsOf(a, b);
         cost += _soft;
         CollectChanged();
-        _crossBefore = CrossingOfChangedBefore();
-        viol += _crossBefore;
+        KeepChangedExits();
         viol += BeginRuns(a, b);
         _beforeCost = cost;
         _beforeViol = viol;
@@ -104,10 +103,9 @@ internal sealed partial class AnnealState
             var l = _changed[i];
             if (_leads[l].Ground || _leads[l].OwnIsland >= 0) OwnLanding(l, _lxNew, _lyNew);
         }
-        viol += CrossingOfChangedAfter();
         viol += EvaluateRuns();
         DeltaCost = cost - _beforeCost;
-        DeltaViolation = viol - _beforeViol;
+        DeltaViolation = viol - _beforeViol + CrossingChange();
     }
 
     /// <summary>Keeps the evaluated move.</summary>
