@@ -63,7 +63,8 @@ public class PlacementEffortTests
         // common practice, no source: the target is 10 % (measured, and missed, in docs/benchmarks.md). CI allows 1.3x between best
         // and worst seed for the total lead and 4x for the longest lead. Measured with the final descent (2026-12-05, seeds 1-10):
         // total lead 1.15x (tiny buffer), 1.18x (valve stage), 1.18x (crystal oscillator; 1.74x before the refining runs, 1.20x
-        // before the descent); longest lead up to 2.7x. So the bound catches a return of the old spread, not the target.
+        // before the descent); longest lead up to 2.7x. After the one-pass crossing term (11:35 UTC): 1.13x, 1.19x, 1.22x; longest
+        // lead 1.4x, 1.7x and 3.6x (crystal oscillator, 3.3-11.8 mm). So the bound catches a return of the old spread, not the target.
         Assert.True(totals.Max() <= 1.3 * totals.Min(), $"total lead {string.Join(", ", totals.Select(t => t.ToString("0.0")))}");
         Assert.True(longest.Max() <= 4.0 * longest.Min(), $"longest lead {string.Join(", ", longest.Select(t => t.ToString("0.0")))}");
     }
