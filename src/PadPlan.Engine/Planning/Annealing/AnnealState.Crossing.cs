@@ -19,9 +19,9 @@ internal sealed partial class AnnealState
     private int[] _tangled = [];
     private double _nearWorstV;
     private double _leadReach;
-    // Per changed lead (by its place in _changed): its exit as the move opened, and whether the move left its path alone.
+    // Per changed lead (by its place in _changed): its exit as the move opened; and the places of those whose path moved.
     private double[] _exBeforeX = [], _exBeforeY = [];
-    private bool[] _pathKept = [];
+    private int[] _moved = [];
 
     private void BuildCrossing()
     {
@@ -42,7 +42,7 @@ internal sealed partial class AnnealState
         Array.Fill(_ly, double.NaN);
         _changed = new int[n];
         _exBeforeX = new double[n]; _exBeforeY = new double[n];
-        _pathKept = new bool[n];
+        _moved = new int[n];
         _tangled = new int[2 * n];
         _changedStamp = new int[n];
         _leadSeen = new int[n];
@@ -152,10 +152,10 @@ internal sealed partial class AnnealState
 
     /// <summary>
     /// How much the open move changes the crossing violations, once it is applied: for every changed lead whose path moved
-    /// (its exit or its landing), its figure against the unchanged leads with the new path less that with the old one, and
-    /// for every pair of changed leads of which one moved, the new figure less the old. A changed lead whose exit and landing
-    /// stayed bit for bit the same (a free lead of another part, still on its pad) meets the unchanged leads, and another such
-    /// lead, exactly as before, so it adds nothing and is not measured at all.
+    /// (its exit or its landing), its figure with the new path less that with the old one, against every lead whose path
+    /// did not move; and for every pair of such leads, the new figure less the old. A changed lead whose exit and landing
+    /// stayed bit for bit the same (a free lead of another part, still on its pad) is filed in the grid with the very path
+    /// it has now, so the searches meet it like any unchanged lead, and only where a moved path comes near it.
     /// </summary>
     private double CrossingChange()
     {
@@ -163,20 +163,22 @@ internal sealed partial class AnnealState
         for (var i = 0; i < _changedCount; i++)
         {
             var p = _changed[i];
-            _pathKept[i] = SameBits(_exX[p], _exBeforeX[i]) && SameBits(_exY[p], _exBeforeY[i])
-                && SameBits(_lxNew[p], _lx[p]) && SameBits(_lyNew[p], _ly[p]);
-            if (!_pathKept[i]) moved++;
+            if (SameBits(_exX[p], _exBeforeX[i]) && SameBits(_exY[p], _exBeforeY[i]) && SameBits(_lxNew[p], _lx[p]) && SameBits(_lyNew[p], _ly[p])) continue;
+            _moved[moved++] = i;
         }
         if (moved == 0) return 0;
+        // From here on only the moved paths are left out of the searches.
+        _stamp++;
+        for (var k = 0; k < moved; k++) _changedStamp[_changed[_moved[k]]] = _stamp;
         var d = 0.0;
-        for (var i = 0; i < _changedCount; i++)
+        for (var k = 0; k < moved; k++)
         {
+            var i = _moved[k];
             var p = _changed[i];
-            if (!_pathKept[i])
-                d += CrossingNear(p, _exX[p], _exY[p], _lxNew[p], _lyNew[p]) - CrossingNear(p, _exBeforeX[i], _exBeforeY[i], _lx[p], _ly[p]);
-            for (var j = i + 1; j < _changedCount; j++)
+            d += CrossingNear(p, _exX[p], _exY[p], _lxNew[p], _lyNew[p]) - CrossingNear(p, _exBeforeX[i], _exBeforeY[i], _lx[p], _ly[p]);
+            for (var m = k + 1; m < moved; m++)
             {
-                if (_pathKept[i] && _pathKept[j]) continue;
+                var j = _moved[m];
                 var q = _changed[j];
                 d += CrossPair(p, q, _exX[p], _exY[p], _lxNew[p], _lyNew[p], _exX[q], _exY[q], _lxNew[q], _lyNew[q])
                     - CrossPair(p, q, _exBeforeX[i], _exBeforeY[i], _lx[p], _ly[p], _exBeforeX[j], _exBeforeY[j], _lx[q], _ly[q]);
