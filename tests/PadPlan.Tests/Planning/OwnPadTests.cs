@@ -47,7 +47,7 @@ public class OwnPadTests
         Assert.True(findings.Count == 0, string.Join("\n", findings));
     }
 
-    /// <summary>Two resistors on one net, 60 mm apart: one pad cannot be within both leads' reach.</summary>
+    /// <summary>Two resistors on one net, 60 mm apart: one pad cannot be within both leads' reach (the net's lead limit, 15 mm by default: common practice, no source).</summary>
     private static Project ResistorsFarApart() => Project("far", new Board(100, 40),
         [new Net("GND", Ground: true), new Net("NA"), new Net("NS"), new Net("NB")],
         [

@@ -38,7 +38,7 @@ public class PadPlannerTests
         Assert.True(pads.Sum(p => p.Capacity) >= 50);
     }
 
-    /// <summary>After a failed try found a net's leads in groups too far apart for one pad, each group gets a pad (joined by wire links).</summary>
+    /// <summary>After a failed try found a net's leads in groups too far apart for one pad, each group gets a pad (joined by wire links: common practice, no source).</summary>
     [Fact]
     public void A_net_found_in_groups_gets_a_pad_for_each_group_that_together_hold_its_leads()
     {
