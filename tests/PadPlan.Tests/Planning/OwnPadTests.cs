@@ -34,6 +34,41 @@ public class OwnPadTests
     }
 
     /// <summary>
+    /// A lead whose part stands beyond the IC, so that every way onto the IC's segment runs under the IC's body, takes its
+    /// net's own pad when the net has one, though the segment is nearer: the checker fails a lead under a body
+    /// (lead-meets-body), and the written layout passes it.
+    /// </summary>
+    [Fact]
+    public void A_lead_from_beyond_an_IC_takes_its_nets_pad_not_the_segment_past_the_body()
+    {
+        var project = TransistorAcrossDip() with { Board = new Board(80, 60) };
+        var problem = ProblemBuilder.Build(project, PlacerSettings.Default, CostWeights.Default, new SortedSet<string>(["NB"], StringComparer.Ordinal));
+        var state = new AnnealState(problem);
+        new Annealer(state, 1).SpringStart();
+        int Item(string name) => Enumerable.Range(0, problem.Items.Length).Single(i => problem.Items[i].Name == name);
+        var (u1, q1, r1) = (Item("U1"), Item("Q1"), Item("R1"));
+        var pad = Enumerable.Range(0, problem.Items.Length).Single(i => problem.Items[i].Pad?.Net == "NB");
+        var baseLead = Enumerable.Range(0, problem.Leads.Length).Single(l => problem.Leads[l].Item == q1 && problem.Leads[l].Pin == "B");
+        // U1 at (30, 30), unturned: pin 2's segment is bare to the left of the body (TestFootprints.Dip8: pins 1-4 on the left).
+        // Q1 stands to the right of the body, its base about 10 mm from the segment's bare end through the IC; the net's pad
+        // lies 12.7 mm above the base (its edge about 11 mm), clear of everything.
+        (state.X[u1], state.Y[u1], state.Rot[u1]) = (30, 30, 0);
+        (state.X[q1], state.Y[q1], state.Rot[q1]) = (36.5, 28.73, 0);
+        (state.X[r1], state.Y[r1], state.Rot[r1]) = (45, 45, 0);
+        (state.X[pad], state.Y[pad]) = (36.5, 16);
+        state.Slack = 0;
+        state.Recompute();
+        var (ex, ey) = state.Exit(baseLead);
+        var segment = problem.Items[u1].Islands.Single(s => problem.Islands[s].Net >= 0 && problem.Nets[problem.Islands[s].Net].Net.Name == "NB");
+        var toSegment = state.Land(baseLead, segment, out _, out _, out _);
+        var toPad = state.Land(baseLead, problem.Items[pad].Islands[0], out _, out _, out _);
+        Assert.True(toSegment < toPad, $"the segment ({toSegment:0.0} mm) must be the nearer island (pad {toPad:0.0} mm, exit {ex:0.0}, {ey:0.0})");
+        Assert.Equal(problem.Items[pad].Islands[0], state.IslandOf(baseLead));
+        var written = project with { Layout = LayoutWriter.Write(state, 0, 0) };
+        Assert.DoesNotContain(PadPlan.Rules.Checker.Check(written).Findings, f => f.RuleId == PadPlan.Rules.RuleIds.LeadMeetsBody && f.Message.Contains("Q1.B", StringComparison.Ordinal));
+    }
+
+    /// <summary>
     /// The benchmark's random 200-part circuit (ICs on scored strips, TO-92 transistors landing on their segments from both
     /// rows) found no legal layout at quick effort once bodies had heights; planning the broken nets again with their own
     /// pads places it, and the independent checker agrees.

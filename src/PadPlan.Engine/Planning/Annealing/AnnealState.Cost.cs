@@ -22,15 +22,21 @@ internal sealed partial class AnnealState
         var lead = _leads[l];
         var island = _islands[s];
         LandingsFound++;
+        _blockedRun = 0;
         var len = Landing.Find(_exX[l], _exY[l], _ouX[l], _ouY[l], island.Round, _laX[s], _laY[s], _laHW[s], _laHH[s],
             lead.Diameter + 2 * _slack, lead.MinReach, lead.MaxReach - _slack, out ax, out ay, out violation);
         return island.Covered ? PastOwnBody(l, s, len, ref ax, ref ay, ref violation) : len;
     }
 
+    /// <summary>How far the run of the last <see cref="Land"/> passes under the body of the part whose strip segment it lands on, when no
+    /// way onto that segment clears the body (mm; 0 otherwise). The run term charges it; the choice of islands reads it, so a
+    /// lead from beyond an IC takes another island of its net when there is one.</summary>
+    private double _blockedRun;
+
     /// <summary>
     /// A lead landing on a strip segment beside its own part's body comes in past that body: when the run to the nearest
     /// point would graze the body (its corner, mostly), the nearest corner of the bare copper whose run clears it is taken
-    /// instead, if there is one.
+    /// instead, if there is one; if none, the landing stays and <see cref="_blockedRun"/> says how far the run passes under.
     /// </summary>
     private double PastOwnBody(int l, int s, double len, ref double ax, ref double ay, ref double violation)
     {
@@ -52,7 +58,11 @@ internal sealed partial class AnnealState
             var d = Math.Sqrt((cx - ex) * (cx - ex) + (cy - ey) * (cy - ey));
             if (d < best && Geometry.ClippedLength(ex, ey, cx, cy, x0, y0, x1, y1) <= 0) (best, bx, by) = (d, cx, cy);
         }
-        if (best == double.MaxValue) return len;
+        if (best == double.MaxValue)
+        {
+            _blockedRun = Geometry.ClippedLength(ex, ey, ax, ay, x0, y0, x1, y1);
+            return len;
+        }
         (ax, ay) = (bx, by);
         violation = Landing.ReachViolation(best, lead.MinReach, lead.MaxReach - _slack);
         return best;
@@ -104,7 +114,8 @@ internal sealed partial class AnnealState
                     var len = Land(free[a], isl[k], out _pairAx[id], out _pairAy[id], out var v);
                     _pairLen[id] = len;
                     _pairViol[id] = v;
-                    _pairKey[m] = len + 1000 * v; // an island within reach always beats one out of reach
+                    // an island within reach always beats one out of reach, and a segment whose run passes under its own part's body
+                    _pairKey[m] = len + 1000 * (v + _blockedRun);
                     _pairId[m] = id;
                     m++;
                 }

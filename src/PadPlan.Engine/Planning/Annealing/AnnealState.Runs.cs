@@ -100,7 +100,7 @@ internal sealed partial class AnnealState
     /// <summary>The items whose low bodies lead l's committed run passes through or too close under (a scan of every item: for the recount and the failure message, not for moves).</summary>
     private IEnumerable<int> BodiesOverRun(int l)
     {
-        var r = _leads[l].Diameter / 2 + _slack;
+        var r = RunWidening(l);
         for (var j = 0; j < _items.Length; j++)
             if (j != _leads[l].Item && _lowBody[j] && _items[j].BodyBottom < _runNeed[l]
                 && Geometry.ClippedLength(_exX[l], _exY[l], _lx[l], _ly[l], _bMinX[j] - r, _bMinY[j] - r, _bMaxX[j] + r, _bMaxY[j] + r) > 0)
@@ -200,7 +200,7 @@ internal sealed partial class AnnealState
         _runMetCount = 0;
         if (double.IsNaN(ax)) return 0;
         var (ex, ey) = (_exX[l], _exY[l]);
-        var r = _leads[l].Diameter / 2 + _slack;
+        var r = RunWidening(l);
         // A body met by the run is filed under a cell the search reads when the run's widening is within the grid's (see KeptRunMeetsOnlyMoved).
         if (!(r <= _cull)) _runMetCount = int.MinValue;
         _seenStamp++;
@@ -234,7 +234,7 @@ internal sealed partial class AnnealState
         var item = _leads[l].Item;
         if (_runMet[l] < 0 || item == _ta || item == _tb || double.IsNaN(_lx[l])
             || !SameBits(_lxNew[l], _lx[l]) || !SameBits(_lyNew[l], _ly[l])) return false;
-        var r = _leads[l].Diameter / 2 + _slack;
+        var r = RunWidening(l);
         var others = _runMet[l];
         var (a, b) = (0.0, 0.0);
         if (MeetsLowBody(l, _ta))
@@ -253,8 +253,15 @@ internal sealed partial class AnnealState
         return true;
     }
 
+    /// <summary>How far lead l's committed run passes through or too close under bodies (mm).</summary>
+    public double RunViolation(int l) => _runViol[l];
+
     /// <summary>How many low bodies lead l's committed run meets, as kept move by move (-1 when not known): for the verify test.</summary>
     internal int RunMeets(int l) => _runMet[l];
+
+    /// <summary>How far a body's box is widened for lead l's run: the lead's radius, the annealing's slack, and the margin that
+    /// keeps a written layout legal once its landings are rounded to 0.01 mm (the checker measures the rounded ones).</summary>
+    private double RunWidening(int l) => _leads[l].Diameter / 2 + _slack + PlacerLimits.Safety;
 
     /// <summary>Item j's body is low enough to meet lead l's run.</summary>
     private bool MeetsLowBody(int l, int j) => _lowBody[j] && _items[j].BodyBottom < _runNeed[l];
@@ -279,7 +286,7 @@ internal sealed partial class AnnealState
     private double BodyOverRuns(int j, double x0, double y0, double x1, double y1, bool change)
     {
         if (!_lowBody[j]) return 0;
-        var reach = _widestRun / 2 + _slack;
+        var reach = _widestRun / 2 + _slack + PlacerLimits.Safety;
         var v = 0.0;
         foreach (var q in _leadGrid.Around(x0 - reach, y0 - reach, x1 + reach, y1 + reach, _leads.Length)) v += RunUnderBody(q, j, change);
         return v;
@@ -291,7 +298,7 @@ internal sealed partial class AnnealState
         if (_leadSeen[q] == _leadSeenStamp) return 0;
         _leadSeen[q] = _leadSeenStamp;
         if (!_runs[q] || _runChangedStamp[q] == _runStamp || _leads[q].Item == j || _items[j].BodyBottom >= _runNeed[q] || double.IsNaN(_lx[q])) return 0;
-        var r = _leads[q].Diameter / 2 + _slack;
+        var r = RunWidening(q);
         var (ex, ey, ax, ay) = (_exX[q], _exY[q], _lx[q], _ly[q]);
         var now = Geometry.ClippedLength(ex, ey, ax, ay, _bMinX[j] - r, _bMinY[j] - r, _bMaxX[j] + r, _bMaxY[j] + r);
         if (!change) return now;

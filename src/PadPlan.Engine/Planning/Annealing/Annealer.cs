@@ -375,24 +375,10 @@ internal sealed class Annealer
             JumpNear(holder, LeadCentre(holder), range, r);
             return true;
         }
+        if (!moveHolder && p.Islands[island].Covered && RoundToBareCopper(lead, island, range, r)) return true;
         // The lead's part toward the island, or the part that carries the island (an IC on its strip) toward the lead: along
         // the line between them, until the exit is half the lead's reach limit from the island.
         var (ex, ey) = _s.Exit(lead);
-        if (!moveHolder && p.Islands[island].Covered)
-        {
-            // A strip segment partly under its own part's body: take the lead's part round to the bare copper's side, out
-            // beyond it by half the reach, so its lead need not cross that body.
-            var (bx, by) = _s.LandCentre(island);
-            var (ux, uy) = (bx - ix, by - iy);
-            var u = Math.Sqrt(ux * ux + uy * uy);
-            if (u > 1e-9)
-            {
-                var reach = p.Leads[lead].MaxReach / 2;
-                var (tx, ty) = (bx + ux / u * reach, by + uy / u * reach);
-                JumpNear(partItem, (_s.X[partItem] + tx - ex, _s.Y[partItem] + ty - ey), range, r);
-                return true;
-            }
-        }
         var d = Math.Sqrt((ex - ix) * (ex - ix) + (ey - iy) * (ey - iy));
         var shift = d < 1e-9 ? 0 : Math.Max(0, d - p.Leads[lead].MaxReach / 2) / d;
         var (dx, dy) = ((ix - ex) * shift, (iy - ey) * shift);
@@ -401,15 +387,52 @@ internal sealed class Annealer
         return true;
     }
 
-    /// <summary>Opens a shift of an item that broke a gap or overlap rule at the last recount, by up to the move range but at least <see cref="PlacerLimits.MendCrowdingShift"/>; sometimes turned. False when there is none.</summary>
+    /// <summary>
+    /// Opens a shift of an item that broke a gap or overlap rule at the last recount, by up to the move range but at least
+    /// <see cref="PlacerLimits.MendCrowdingShift"/>; sometimes turned. A part with a lead that runs under the body of the IC
+    /// whose strip segment it lands on is taken round to that segment's bare side instead, half the time: a shift seldom
+    /// carries it past the IC. False when there is none.
+    /// </summary>
     private bool MendCrowding(double range, Region r)
     {
         var count = _s.CrowdedCount;
         if (count == 0) return false;
         if (_s.TangledCount > 0 && _rng.NextDouble() < 0.5) return Untangle();
         var i = _s.Crowded(_rng.Next(count));
-        if (_s.Problem.Items[i].Fixed) return false;
+        var p = _s.Problem;
+        if (p.Items[i].Fixed) return false;
+        if (BlockedLead(i) is var (lead, island) && _rng.NextDouble() < 0.5 && RoundToBareCopper(lead, island, range, r)) return true;
         Shift(i, Math.Max(range, PlacerLimits.MendCrowdingShift), 0.25, 0.25, r);
+        return true;
+    }
+
+    /// <summary>A lead of part i whose run passes under the body of the IC whose strip segment it lands on, with that segment; null when none does.</summary>
+    private (int Lead, int Island)? BlockedLead(int i)
+    {
+        var p = _s.Problem;
+        if (!p.Items[i].IsPart) return null;
+        foreach (var l in p.Items[i].Leads)
+            if (_s.IslandOf(l) is var s and >= 0 && p.Islands[s].Covered && _s.RunViolation(l) > 0) return (l, s);
+        return null;
+    }
+
+    /// <summary>
+    /// Opens a jump of a lead's part round to the bare copper of the strip segment it lands on, which its own IC's body partly
+    /// covers: out beyond the bare end by half the lead's reach, so the lead need not cross that body. False when the segment
+    /// has no bare side to go to.
+    /// </summary>
+    private bool RoundToBareCopper(int lead, int island, double range, Region r)
+    {
+        var part = _s.Problem.Leads[lead].Item;
+        var (ix, iy, _, _) = _s.IslandBox(island);
+        var (bx, by) = _s.LandCentre(island);
+        var (ux, uy) = (bx - ix, by - iy);
+        var u = Math.Sqrt(ux * ux + uy * uy);
+        if (u <= 1e-9) return false;
+        var (ex, ey) = _s.Exit(lead);
+        var reach = _s.Problem.Leads[lead].MaxReach / 2;
+        var (tx, ty) = (bx + ux / u * reach, by + uy / u * reach);
+        JumpNear(part, (_s.X[part] + tx - ex, _s.Y[part] + ty - ey), range, r);
         return true;
     }
 
