@@ -79,22 +79,17 @@ public static class PartSwap
         if (layout is null || !layout.Placements.Any(p => p.Ref == request.Ref) || sameLeads)
             return new SwapOutcome(swapped, null, [], others, others, null, null);
 
-        var freed = FreedParts(swapped, layout, request.Ref, request.Widen);
-        var freedPads = FreedPads(swapped, layout, freed);
-        var held = new Layout(
-            layout.Pads.Where(p => !freedPads.Contains(p.Id)).Select(p => p with { Locked = true }).ToValueList(),
-            layout.Placements.Where(p => !freed.Contains(p.Ref)).ToValueList(),
-            ValueList<Jumper>.Empty);
-        var trial = swapped with
-        {
-            Parts = swapped.Parts.Select(p => freed.Contains(p.Ref) ? p with { Locked = false } : p with { Locked = true }).ToValueList(),
-            Layout = held,
-        };
-        // With most of the board held, one run can corner itself where another seed does not: a few seeds before saying no.
+        // First only the parts right in the new body's way, then (or straight away when the builder widens) those within an
+        // elbow of it: as few parts move as will let the swap fit.
+        var margins = request.Widen == 0 ? new[] { InTheWay, Elbow } : [Elbow];
+        HashSet<string> freed = [];
         CheckedPlacement result = null!;
-        for (var t = 0; t < SeedsTried; t++)
+        foreach (var margin in margins)
         {
-            result = CheckedPlacer.Place(trial, settings with { KeepExisting = false, Seed = settings.Seed + t * SeedStep }, progress);
+            var wider = FreedParts(swapped, layout, request.Ref, request.Widen, margin);
+            if (result is not null && wider.SetEquals(freed)) continue;
+            freed = wider;
+            result = PlaceFreed(swapped, layout, freed, settings, progress);
             if (result.Succeeded) break;
         }
         var freedList = freed.Order(StringComparer.Ordinal).ToList();
@@ -119,6 +114,29 @@ public static class PartSwap
         return new SwapOutcome(final, result with { Project = final }, freedList, others, unmoved, null, null);
     }
 
+    /// <summary>Places the freed parts (and their re-planned pads) with everything else held, trying a few seeds.</summary>
+    private static CheckedPlacement PlaceFreed(Project swapped, Layout layout, HashSet<string> freed, PlacerSettings settings, IProgress<PlacerProgress>? progress)
+    {
+        var freedPads = FreedPads(swapped, layout, freed);
+        var held = new Layout(
+            layout.Pads.Where(p => !freedPads.Contains(p.Id)).Select(p => p with { Locked = true }).ToValueList(),
+            layout.Placements.Where(p => !freed.Contains(p.Ref)).ToValueList(),
+            ValueList<Jumper>.Empty);
+        var trial = swapped with
+        {
+            Parts = swapped.Parts.Select(p => freed.Contains(p.Ref) ? p with { Locked = false } : p with { Locked = true }).ToValueList(),
+            Layout = held,
+        };
+        // With most of the board held, one run can corner itself where another seed does not: a few seeds before saying no.
+        CheckedPlacement result = null!;
+        for (var t = 0; t < SeedsTried; t++)
+        {
+            result = CheckedPlacer.Place(trial, settings with { KeepExisting = false, Seed = settings.Seed + t * SeedStep }, progress);
+            if (result.Succeeded) break;
+        }
+        return result;
+    }
+
     private static string? VariantFor(Part part, Footprint target, SwapRequest request)
     {
         if (request.Variant is { } v) return v;
@@ -133,17 +151,20 @@ public static class PartSwap
     /// <summary>Room kept around a body when looking for the parts in its way (mm): a lead's bend and a pad's edge; common practice, no source.</summary>
     public const double Elbow = 3.0;
 
+    /// <summary>Room kept around the new body on the first try (mm): only the parts it would touch or nearly touch move; common practice, no source.</summary>
+    public const double InTheWay = 1.0;
+
     /// <summary>
     /// The part itself and every part that is not held, not on strips and not an off-board landing, whose body comes within
-    /// <see cref="Elbow"/> of the part's new body where it stands (the parts in its way and its close neighbours); each ring of widening
-    /// adds the parts within that distance of the freed ones.
+    /// <paramref name="margin"/> of the part's new body where it stands (<see cref="InTheWay"/>: the parts in its way;
+    /// <see cref="Elbow"/>: its close neighbours too); each ring of widening adds the parts within that distance of the freed ones.
     /// </summary>
-    private static HashSet<string> FreedParts(Project project, Layout layout, string reference, int widen)
+    private static HashSet<string> FreedParts(Project project, Layout layout, string reference, int widen, double margin)
     {
         var freed = new HashSet<string>(StringComparer.Ordinal) { reference };
         for (var ring = 0; ring <= widen; ring++)
         {
-            var boxes = layout.Placements.Where(p => freed.Contains(p.Ref)).Select(p => Box(project, p, Elbow)).ToList();
+            var boxes = layout.Placements.Where(p => freed.Contains(p.Ref)).Select(p => Box(project, p, margin)).ToList();
             foreach (var placement in layout.Placements)
             {
                 if (freed.Contains(placement.Ref) || project.FindPart(placement.Ref) is not { } part || part.Locked) continue;
