@@ -43,8 +43,10 @@ internal static class Profile
                 string Where(int isl) => problem.Islands[isl].StripGroup >= 0 ? "strip of " + problem.Items[problem.Islands[isl].Item].Name : "pad";
                 Console.WriteLine($"  broken net {net.Net.Name} (max lead {net.MaxLead} mm): islands {string.Join(", ", net.Islands.Select(i => $"{Where(i)} cap {problem.Islands[i].Capacity}"))}; leads {string.Join(", ", net.FreeLeads.Select(l => { var s = state.IslandOf(l); if (s < 0) return "-"; var len = state.Land(l, s, out _, out _, out var v); return $"{problem.Items[problem.Leads[l].Item].Name}.{problem.Leads[l].Pin} {len:0.0}{(v > 1e-9 ? $" OVER {v:0.0}" : "")}"; }))}");
             }
+        Console.WriteLine("  broken after annealing: " + Broken(state));
         var legal = Legaliser.Finish(state);
         var legalise = Lap(clock);
+        Console.WriteLine("  broken after the legaliser: " + Broken(state));
         if (legal) { annealer.Polish(settings.MovesFactor); legal = Legaliser.Finish(state); }
         var polish = Lap(clock);
         var e = state.Extent();
@@ -57,6 +59,14 @@ internal static class Profile
         Console.WriteLine($"  work per move (annealing, incl. the recount after each temperature): {(double)nets / moves:0.00} net evaluations, {(double)landings / moves:0.0} lead landings, {(double)pairs / moves:0.0} item pairs");
         Console.WriteLine($"  violation after annealing {violation:0.###}; legal {legal}; cost {state.Cost:0}; lead {state.LeadTotal():0} mm; extent {e.Width:0} x {e.Height:0} mm in region {problem.Region.Width:0} x {problem.Region.Height:0}");
         Console.WriteLine("  " + annealer.Stats);
+    }
+
+    /// <summary>The items that still break a rule, worst first, with what each breaks (mm): where a run's failures sit.</summary>
+    private static string Broken(AnnealState s)
+    {
+        var items = s.Problem.Items;
+        var broken = Enumerable.Range(0, items.Length).Select(i => (Item: i, V: s.ViolationOf(i))).Where(x => x.V > 1e-9).OrderByDescending(x => x.V).ThenBy(x => x.Item).ToList();
+        return broken.Count == 0 ? "none" : $"{s.Violation:0.###} mm over {broken.Count} items: " + string.Join(", ", broken.Take(12).Select(x => $"{items[x.Item].Name} {x.V:0.00}"));
     }
 
     private static double Dist(AnnealState s, int l)
