@@ -21,16 +21,57 @@ public class OwnPadTests
             Part("R1", "res-axial-250mw", ("1", "NE"), ("2", "GND")),
         ]);
 
+    /// <summary>The same transistor with its base and collector on one row of the DIP (pins 2 and 3, TestFootprints.Dip8).</summary>
+    private static Project TransistorBesideDip() => Project("beside", Board.Auto,
+        [new Net("GND", Ground: true), new Net("VCC", Class: NetClass.Power), new Net("NB"), new Net("NC"), new Net("NE")],
+        [
+            Part("U1", "dip8", ("2", "NB"), ("3", "NC"), ("4", "GND"), ("8", "VCC")),
+            Part("Q1", "to92", ("B", "NB"), ("C", "NC"), ("E", "NE")),
+            Part("R1", "res-axial-250mw", ("1", "NE"), ("2", "GND")),
+        ]);
+
+    private static int PadsOf(PlacementProblem p, string net) => p.Islands.Count(s => s.Net >= 0 && p.Nets[s.Net].Net.Name == net && !p.Items[s.Item].IsPart);
+
     [Fact]
     public void A_net_on_a_strip_gets_no_pad_of_its_own_until_asked()
     {
-        var project = TransistorAcrossDip();
+        var project = TransistorBesideDip();
         var plain = ProblemBuilder.Build(project, PlacerSettings.Default, CostWeights.Default);
         var asked = ProblemBuilder.Build(project, PlacerSettings.Default, CostWeights.Default, new SortedSet<string>(["NC"], StringComparer.Ordinal));
-        int PadsOf(PlacementProblem p, string net) => p.Islands.Count(s => s.Net >= 0 && p.Nets[s.Net].Net.Name == net && !p.Items[s.Item].IsPart);
-        Assert.Equal(0, PadsOf(plain, "NC")); // the collector may land on pin 7's segment
+        Assert.Equal(0, PadsOf(plain, "NC")); // the collector may land on pin 3's segment
         Assert.Equal(1, PadsOf(asked, "NC")); // now it has a pad of its own as well
         Assert.Equal(PadsOf(plain, "NB"), PadsOf(asked, "NB")); // other nets are planned as before
+    }
+
+    /// <summary>
+    /// A transistor wired to both rows of a DIP (base on pin 2, collector on pin 7, either side of the body: JEDEC MS-001 rows
+    /// 7.62 mm apart, as TestFootprints.Dip8) cannot land on both rows' segments without a lead under the body unless it
+    /// stands off the IC's end. A net the IC carries on both rows, or that the part shares with no IC, does not count.
+    /// </summary>
+    [Fact]
+    public void A_part_wired_to_both_rows_of_an_IC_is_found()
+    {
+        Assert.Equal(new Dictionary<string, int> { ["NB"] = 1, ["NC"] = 1 }, AcrossRows.Of(TransistorAcrossDip()));
+        Assert.Empty(AcrossRows.Of(TransistorBesideDip()));
+        var both = TransistorAcrossDip() with { Parts = TransistorAcrossDip().Parts.Select(p => p.Ref == "U1" ? Part("U1", "dip8", ("2", "NB"), ("6", "NB"), ("7", "NC"), ("4", "GND"), ("8", "VCC")) : p).ToValueList() };
+        Assert.Empty(AcrossRows.Of(both)); // NB is on both rows now, so NC alone is on one
+    }
+
+    /// <summary>
+    /// On a circuit too large to be placed for steadiness, such nets get a pad of their own for every part wired across from
+    /// the start: the benchmark's 500-part circuit, where two transistors are each wired to pins 10 and 1 or 5 (across the
+    /// body) of one DIP-14 and share net N268, found no legal layout at quick effort without it. On a small circuit, and with
+    /// anything held, the plan is as before.
+    /// </summary>
+    [Fact]
+    public void A_large_circuit_plans_pads_for_parts_wired_across_an_IC_from_the_start()
+    {
+        var large = PadPlan.Bench.SyntheticCircuit.Make(500, 1500);
+        var across = AcrossRows.Of(large);
+        Assert.Equal(2, across["N268"]);
+        Assert.Equal(2, PadsOf(ProblemBuilder.Build(large, PlacerSettings.Default, CostWeights.Default), "N268"));
+        var small = ProblemBuilder.Build(TransistorAcrossDip(), PlacerSettings.Default, CostWeights.Default);
+        Assert.Equal(0, PadsOf(small, "NC"));
     }
 
     /// <summary>
