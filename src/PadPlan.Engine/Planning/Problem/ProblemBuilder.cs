@@ -76,10 +76,10 @@ internal static class ProblemBuilder
 
         var usedIds = new HashSet<string>(islands.Select(s => s.Id).Concat(existing.Pads.Where(p => p.Locked || settings.KeepExisting).Select(p => p.Id)), StringComparer.Ordinal);
         var padNumber = 0;
-        // Parts wired across an IC's rows get pads of their own on circuits too large to be placed for steadiness: there every
-        // run has to come out legal, while on smaller ones the many runs find the part its place at the IC's end (with the pads,
-        // the CW filter's and synthetic 50's worst seeds of ten came out 18 % and 7 % longer). With anything held, the
-        // layout's own pads stand.
+        // Parts wired across an IC's rows get pads of their own on circuits too large to be placed for steadiness, where every
+        // run has to come out legal (the 500-part benchmark circuits found no legal layout without them). On smaller ones the
+        // pads made the worst of ten seeds longer (CW filter 18 %, synthetic 50 7 %; docs/benchmarks.md). With anything held,
+        // the layout's own pads stand.
         var across = items.Any(i => i.Fixed) || project.Parts.Count <= PlacerSettings.SteadyCircuit ? new Dictionary<string, int>() : AcrossRows.Of(project);
         foreach (var (net, index) in nets.Select((n, i) => (n, i)))
         {
