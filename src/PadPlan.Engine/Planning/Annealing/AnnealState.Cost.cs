@@ -17,29 +17,30 @@ internal sealed partial class AnnealState
     public long NetEvaluations, LandingsFound, PairTests;
 
     /// <summary>Lead length to an island for one lead, with its landing point (on the island's bare copper) and any broken reach limit.</summary>
-    public double Land(int l, int s, out double ax, out double ay, out double violation)
+    public double Land(int l, int s, out double ax, out double ay, out double violation) => Land(l, s, out ax, out ay, out violation, out _);
+
+    /// <param name="blocked">How far the run passes under the body of the part whose strip segment it lands on, when no way onto
+    /// that segment clears the body (mm; 0 otherwise). The run term charges it; the choice of islands reads it, so a lead from
+    /// beyond an IC takes another island of its net when there is one.</param>
+    private double Land(int l, int s, out double ax, out double ay, out double violation, out double blocked)
     {
         var lead = _leads[l];
         var island = _islands[s];
         LandingsFound++;
-        _blockedRun = 0;
+        blocked = 0;
         var len = Landing.Find(_exX[l], _exY[l], _ouX[l], _ouY[l], island.Round, _laX[s], _laY[s], _laHW[s], _laHH[s],
             lead.Diameter + 2 * _slack, lead.MinReach, lead.MaxReach - _slack, out ax, out ay, out violation);
-        return island.Covered ? PastOwnBody(l, s, len, ref ax, ref ay, ref violation) : len;
+        return island.Covered ? PastOwnBody(l, s, len, ref ax, ref ay, ref violation, out blocked) : len;
     }
-
-    /// <summary>How far the run of the last <see cref="Land"/> passes under the body of the part whose strip segment it lands on, when no
-    /// way onto that segment clears the body (mm; 0 otherwise). The run term charges it; the choice of islands reads it, so a
-    /// lead from beyond an IC takes another island of its net when there is one.</summary>
-    private double _blockedRun;
 
     /// <summary>
     /// A lead landing on a strip segment beside its own part's body comes in past that body: when the run to the nearest
     /// point would graze the body (its corner, mostly), the nearest corner of the bare copper whose run clears it is taken
-    /// instead, if there is one; if none, the landing stays and <see cref="_blockedRun"/> says how far the run passes under.
+    /// instead, if there is one; if none, the landing stays and <paramref name="blocked"/> says how far the run passes under.
     /// </summary>
-    private double PastOwnBody(int l, int s, double len, ref double ax, ref double ay, ref double violation)
+    private double PastOwnBody(int l, int s, double len, ref double ax, ref double ay, ref double violation, out double blocked)
     {
+        blocked = 0;
         var j = _islands[s].Item;
         var lead = _leads[l];
         if (!_lowBody[j] || _items[j].BodyBottom >= _runNeed[l]) return len;
@@ -60,7 +61,7 @@ internal sealed partial class AnnealState
         }
         if (best == double.MaxValue)
         {
-            _blockedRun = Geometry.ClippedLength(ex, ey, ax, ay, x0, y0, x1, y1);
+            blocked = Geometry.ClippedLength(ex, ey, ax, ay, x0, y0, x1, y1);
             return len;
         }
         (ax, ay) = (bx, by);
@@ -111,11 +112,11 @@ internal sealed partial class AnnealState
                 for (var k = 0; k < count; k++)
                 {
                     var id = a * count + k;
-                    var len = Land(free[a], isl[k], out _pairAx[id], out _pairAy[id], out var v);
+                    var len = Land(free[a], isl[k], out _pairAx[id], out _pairAy[id], out var v, out var blocked);
                     _pairLen[id] = len;
                     _pairViol[id] = v;
                     // an island within reach always beats one out of reach, and a segment whose run passes under its own part's body
-                    _pairKey[m] = len + 1000 * (v + _blockedRun);
+                    _pairKey[m] = len + 1000 * (v + blocked);
                     _pairId[m] = id;
                     m++;
                 }
