@@ -15,6 +15,16 @@ internal sealed partial class AnnealState
     private double _beforeCost, _beforeViol, _uaCost, _uaViol, _ubCost, _ubViol;
     public double DeltaCost { get; private set; }
     public double DeltaViolation { get; private set; }
+    /// <summary>The open move's cost and violation terms summed by the stages of <see cref="Evaluate"/> so far.</summary>
+    private double _evalCost, _evalViol;
+    /// <summary>The committed violation of the changed lead runs as the move opened, their violation after it with that of the unchanged runs the move changes, and the move's change to the crossing violation.</summary>
+    private double _beforeRuns, _runsNew, _crossDelta;
+    /// <summary>The committed violation of lead runs under bodies, and of lead crossings, kept move by move like <see cref="Violation"/>.</summary>
+    private double _runViolation, _crossViolation;
+    /// <summary>The committed violation of lead runs under bodies and of lead crossings, as kept move by move: for the verify test.</summary>
+    internal (double Runs, double Crossings) LeadPathViolation => (_runViolation, _crossViolation);
+    /// <summary>Relative margin of the stages' bounds: far above the rounding of a few sums of doubles (about 1e-16 each) and the drift of kept sums between recounts, far below any cost change a move makes.</summary>
+    private const double RoundingMargin = 1e-10;
 
     /// <summary>Opens a move in which items a and b trade places (each keeps its turn).</summary>
     public void BeginTrade(int a, int b)
@@ -50,7 +60,8 @@ internal sealed partial class AnnealState
         cost += _soft;
         CollectChanged();
         KeepChangedExits();
-        viol += BeginRuns(a, b);
+        _beforeRuns = BeginRuns(a, b);
+        viol += _beforeRuns;
         _beforeCost = cost;
         _beforeViol = viol;
     }
@@ -76,6 +87,22 @@ internal sealed partial class AnnealState
     /// <summary>Works out the cost change of the open move after positions were set; leaves the move applied.</summary>
     public void Evaluate()
     {
+        EvaluateNets();
+        EvaluatePairs();
+        EvaluateRunsStage();
+        EvaluateCrossings();
+    }
+
+    // Evaluate in stages, cheapest first. After each but the last, a lower bound of the annealing cost change (cost plus
+    // Penalty times violation) that the whole evaluation can give: what is still to come can only add cost and violation
+    // (every term is at least 0), except that it can mend what is committed now. The item pairs, and the soft cost of bodies
+    // over pads measured with them, can mend at most what the moved items' pairs hold now (already taken off in Begin); lead
+    // runs under bodies at most the committed violation of all runs, lead crossings at most that of all crossings. A caller
+    // that would reject the move at a bound rolls it back without the rest, and so decides exactly as the whole would.
+
+    /// <summary>The first stage of <see cref="Evaluate"/>: the moved items' nets and own terms. Returns a lower bound of the whole move's annealing cost change.</summary>
+    public double EvaluateNets()
+    {
         UpdateGeometry(_ta);
         if (_tb >= 0) UpdateGeometry(_tb);
         double cost = 0, viol = 0;
@@ -95,17 +122,46 @@ internal sealed partial class AnnealState
             cost += _ubCost;
             viol += _ubViol;
         }
+        (_evalCost, _evalViol) = (cost, viol);
+        return Bound(_runViolation + _crossViolation);
+    }
+
+    /// <summary>The second stage of <see cref="Evaluate"/>: the moved items' pairs with every other item. Returns a lower bound of the whole move's annealing cost change.</summary>
+    public double EvaluatePairs()
+    {
         _soft = 0;
-        viol += PairsOf(_ta, _tb);
-        cost += _soft;
+        _evalViol += PairsOf(_ta, _tb);
+        _evalCost += _soft;
         for (var i = 0; i < _changedCount; i++)
         {
             var l = _changed[i];
             if (_leads[l].Ground || _leads[l].OwnIsland >= 0) OwnLanding(l, _lxNew, _lyNew);
         }
-        viol += EvaluateRuns();
-        DeltaCost = cost - _beforeCost;
-        DeltaViolation = viol - _beforeViol + CrossingChange();
+        return Bound(_runViolation + _crossViolation);
+    }
+
+    /// <summary>The third stage of <see cref="Evaluate"/>: lead runs under bodies. Returns a lower bound of the whole move's annealing cost change.</summary>
+    public double EvaluateRunsStage()
+    {
+        _runsNew = EvaluateRuns();
+        _evalViol += _runsNew;
+        return Bound(_crossViolation);
+    }
+
+    /// <summary>The last stage of <see cref="Evaluate"/>: lead crossings. Sets <see cref="DeltaCost"/> and <see cref="DeltaViolation"/>.</summary>
+    public void EvaluateCrossings()
+    {
+        DeltaCost = _evalCost - _beforeCost;
+        _crossDelta = CrossingChange();
+        DeltaViolation = _evalViol - _beforeViol + _crossDelta;
+    }
+
+    /// <summary>The lower bound after a stage: the cost and violation so far, less all that the stages to come could mend, less a margin for rounding.</summary>
+    private double Bound(double mendable)
+    {
+        mendable = Math.Max(0, mendable);
+        var margin = RoundingMargin * (1 + Math.Abs(_evalViol) + Math.Abs(_beforeViol) + mendable);
+        return _evalCost - _beforeCost + Penalty * (_evalViol - _beforeViol - mendable - margin);
     }
 
     /// <summary>Keeps the evaluated move.</summary>
@@ -131,6 +187,8 @@ internal sealed partial class AnnealState
         if (_tb >= 0) { _unaryCost[_tb] = _ubCost; _unaryViol[_tb] = _ubViol; }
         Cost += DeltaCost;
         Violation += DeltaViolation;
+        _runViolation += _runsNew - _beforeRuns;
+        _crossViolation += _crossDelta;
         _ta = _tb = -1;
     }
 

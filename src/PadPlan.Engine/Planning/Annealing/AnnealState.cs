@@ -155,8 +155,10 @@ internal sealed partial class AnnealState
             cost += _netCost[n];
             viol += _netViol[n];
         }
-        viol += RecomputeCrossing();
-        viol += RecomputeRuns();
+        _crossViolation = RecomputeCrossing();
+        _runViolation = RecomputeRuns();
+        viol += _crossViolation;
+        viol += _runViolation;
         for (var i = 0; i < _items.Length; i++)
         {
             EvalUnary(i, out _unaryCost[i], out _unaryViol[i]);

@@ -275,31 +275,58 @@ internal sealed class Annealer
         return Math.Max(1e-4, sigma);
     }
 
+    /// <summary>
+    /// One trial move, kept by Metropolis' rule. The move is measured in stages, cheapest first; a stage that bounds the
+    /// move's cost change above the draw's threshold rolls it back without the rest (<see cref="AnnealState.EvaluateNets"/>).
+    /// The draw is the one the whole move would have made, and each bound is below the whole change, so every decision, and
+    /// so every layout, is the same as measuring every move whole.
+    /// </summary>
     private bool TryMove(double temperature, double range)
     {
-        var d = Propose(range, out var kind);
-        var keep = d <= 0 || (temperature > 0 && _rng.NextDouble() < Math.Exp(-d / temperature));
+        var kind = Open(range);
+        var draw = double.NaN;
+        var keep = Passes(_s.EvaluateNets(), temperature, ref draw)
+            && Passes(_s.EvaluatePairs(), temperature, ref draw)
+            && Passes(_s.EvaluateRunsStage(), temperature, ref draw);
+        if (keep)
+        {
+            _s.EvaluateCrossings();
+            keep = Passes(_s.DeltaCost + _s.Penalty * _s.DeltaViolation, temperature, ref draw);
+        }
         if (keep) _s.Commit();
         else _s.Rollback();
         Stats.Count(kind, keep);
         return keep;
     }
 
+    /// <summary>Metropolis' rule for a cost change d (or a lower bound of it): downhill always; uphill with chance exp(-d / T), drawn once per move, the first time it is needed.</summary>
+    private bool Passes(double d, double temperature, ref double draw)
+    {
+        if (d <= 0) return true;
+        if (temperature <= 0) return false;
+        if (double.IsNaN(draw)) draw = _rng.NextDouble();
+        return draw < Math.Exp(-d / temperature);
+    }
+
     /// <summary>Makes one random move and returns its change of annealing cost; the move stays open for commit or rollback.</summary>
     private double Propose(double range, out MoveKind kind)
+    {
+        kind = Open(range);
+        _s.Evaluate();
+        return _s.DeltaCost + _s.Penalty * _s.DeltaViolation;
+    }
+
+    /// <summary>Opens one random move (positions set, not yet evaluated) and returns its kind.</summary>
+    private MoveKind Open(double range)
     {
         var pick = _rng.NextDouble();
         var k = 0;
         while (k < _cumulative.Length - 1 && pick >= _cumulative[k]) k++;
-        kind = _kinds[k];
+        var kind = _kinds[k];
         var r = _s.Problem.Region;
         if (kind is MoveKind.MendReach or MoveKind.MendCrowding)
         {
-            if (kind == MoveKind.MendReach ? MendReach(range, r) : MendCrowding(range, r))
-            {
-                _s.Evaluate();
-                return _s.DeltaCost + _s.Penalty * _s.DeltaViolation;
-            }
+            if (kind == MoveKind.MendReach ? MendReach(range, r) : MendCrowding(range, r)) return kind;
             kind = _parts.Length > 0 ? MoveKind.ShiftPart : MoveKind.ShiftPad;
         }
         switch (kind)
@@ -348,8 +375,7 @@ internal sealed class Annealer
                 break;
             }
         }
-        _s.Evaluate();
-        return _s.DeltaCost + _s.Penalty * _s.DeltaViolation;
+        return kind;
     }
 
     /// <summary>
