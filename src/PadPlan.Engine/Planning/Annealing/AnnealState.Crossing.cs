@@ -22,6 +22,15 @@ internal sealed partial class AnnealState
     // Per changed lead (by its place in _changed): its exit as the move opened; and the places of those whose path moved.
     private double[] _exBeforeX = [], _exBeforeY = [];
     private int[] _moved = [];
+    /// <summary>Per lead: how many leads its committed path comes too near (pairs with a violation above 0), counted exactly, so a move can tell that a lead's old path meets nothing without searching.</summary>
+    private int[] _crossCount = [];
+    // The open move's pairs whose violation is above 0: (lead, lead, +1) with the new paths, (lead, lead, -1) with the old,
+    // applied to _crossCount on commit.
+    private int[] _pairLog = [];
+    private int _pairLogCount;
+    /// <summary>What <see cref="CrossingNear(int, double, double, double, double)"/> does with each pair above 0: nothing (0), log it for the open move (+1 new, -1 old), or count it at once (<see cref="RecountPairs"/>).</summary>
+    private int _pairSign;
+    private const int RecountPairs = 2;
 
     private void BuildCrossing()
     {
@@ -41,6 +50,8 @@ internal sealed partial class AnnealState
         Array.Fill(_lx, double.NaN);
         Array.Fill(_ly, double.NaN);
         _changed = new int[n];
+        _crossCount = new int[n];
+        _pairLog = new int[3 * 64];
         _exBeforeX = new double[n]; _exBeforeY = new double[n];
         _moved = new int[n];
         _tangled = new int[2 * n];
@@ -71,13 +82,44 @@ internal sealed partial class AnnealState
             RegisterLead(l);
         }
         _tangledCount = 0;
-        return CommittedCrossings((l, _) =>
+        Array.Clear(_crossCount);
+        _pairSign = RecountPairs;
+        var v = CommittedCrossings((l, _) =>
         {
             MarkCrowded(_leads[l].Item); // so the annealer's mending moves pick it
             if (_nearWorst < 0) return;
             _tangled[2 * _tangledCount] = l;
             _tangled[2 * _tangledCount++ + 1] = _nearWorst;
         });
+        _pairSign = 0;
+        return v;
+    }
+
+    /// <summary>How many leads lead l's committed path comes too near, as kept move by move: for the verify test.</summary>
+    internal int CrossCount(int l) => _crossCount[l];
+
+    /// <summary>Notes a pair of leads whose violation is above 0, as <see cref="_pairSign"/> says.</summary>
+    private void NotePair(int p, int q)
+    {
+        if (_pairSign == RecountPairs)
+        {
+            _crossCount[p]++;
+            _crossCount[q]++;
+            return;
+        }
+        if (3 * _pairLogCount + 3 > _pairLog.Length) Array.Resize(ref _pairLog, 2 * _pairLog.Length);
+        var k = 3 * _pairLogCount++;
+        (_pairLog[k], _pairLog[k + 1], _pairLog[k + 2]) = (p, q, _pairSign);
+    }
+
+    /// <summary>Takes the open move's pairs as committed: each lead's count of pairs above 0.</summary>
+    private void CommitCrossCounts()
+    {
+        for (var k = 0; k < 3 * _pairLogCount; k += 3)
+        {
+            _crossCount[_pairLog[k]] += _pairLog[k + 2];
+            _crossCount[_pairLog[k + 1]] += _pairLog[k + 2];
+        }
     }
 
     /// <summary>Pairs of leads that crossed at the last full recount.</summary>
@@ -159,6 +201,7 @@ internal sealed partial class AnnealState
     /// </summary>
     private double CrossingChange()
     {
+        _pairLogCount = 0;
         var moved = 0;
         for (var i = 0; i < _changedCount; i++)
         {
@@ -175,15 +218,25 @@ internal sealed partial class AnnealState
         {
             var i = _moved[k];
             var p = _changed[i];
-            d += CrossingNear(p, _exX[p], _exY[p], _lxNew[p], _lyNew[p]) - CrossingNear(p, _exBeforeX[i], _exBeforeY[i], _lx[p], _ly[p]);
+            _pairSign = 1;
+            var now = CrossingNear(p, _exX[p], _exY[p], _lxNew[p], _lyNew[p]);
+            _pairSign = -1;
+            // an old path that came too near no lead adds exactly 0: no need to search
+            d += now - (_crossCount[p] > 0 ? CrossingNear(p, _exBeforeX[i], _exBeforeY[i], _lx[p], _ly[p]) : 0);
             for (var m = k + 1; m < moved; m++)
             {
                 var j = _moved[m];
                 var q = _changed[j];
-                d += CrossPair(p, q, _exX[p], _exY[p], _lxNew[p], _lyNew[p], _exX[q], _exY[q], _lxNew[q], _lyNew[q])
-                    - CrossPair(p, q, _exBeforeX[i], _exBeforeY[i], _lx[p], _ly[p], _exBeforeX[j], _exBeforeY[j], _lx[q], _ly[q]);
+                var pairNow = CrossPair(p, q, _exX[p], _exY[p], _lxNew[p], _lyNew[p], _exX[q], _exY[q], _lxNew[q], _lyNew[q]);
+                var pairBefore = _crossCount[p] > 0 && _crossCount[q] > 0
+                    ? CrossPair(p, q, _exBeforeX[i], _exBeforeY[i], _lx[p], _ly[p], _exBeforeX[j], _exBeforeY[j], _lx[q], _ly[q])
+                    : 0;
+                if (pairNow > 0) { _pairSign = 1; NotePair(p, q); }
+                if (pairBefore > 0) { _pairSign = -1; NotePair(p, q); }
+                d += pairNow - pairBefore;
             }
         }
+        _pairSign = 0;
         return d;
     }
 
@@ -201,11 +254,17 @@ internal sealed partial class AnnealState
         _leadSeenStamp++;
         (_nearWorst, _nearWorstV) = (-1, 0.0);
         var v = 0.0;
-        foreach (var q in _leadGrid.Around(Math.Min(ex, px) - reach, Math.Min(ey, py) - reach, Math.Max(ex, px) + reach, Math.Max(ey, py) + reach, _leads.Length))
+        var (x0, y0, x1, y1) = (Math.Min(ex, px) - reach, Math.Min(ey, py) - reach, Math.Max(ex, px) + reach, Math.Max(ey, py) + reach);
+        foreach (var q in _leadGrid.Around(x0, y0, x1, y1, _leads.Length))
         {
             if (_leadSeen[q] == _leadSeenStamp || _changedStamp[q] == _stamp || !_crosses[q]) continue;
+            // A path whose box lies beyond the search box, widened by the margin the pair's need has over the reach, adds
+            // exactly 0: skip it before reading the leads. Searches too wide for the grid read every lead, and most are far.
+            if (Math.Max(_exX[q], _lx[q]) < x0 - PlacerLimits.Safety || Math.Min(_exX[q], _lx[q]) > x1 + PlacerLimits.Safety
+                || Math.Max(_exY[q], _ly[q]) < y0 - PlacerLimits.Safety || Math.Min(_exY[q], _ly[q]) > y1 + PlacerLimits.Safety) continue;
             _leadSeen[q] = _leadSeenStamp;
             var c = CrossPair(p, q, ex, ey, px, py, _exX[q], _exY[q], _lx[q], _ly[q]);
+            if (c > 0 && _pairSign != 0) NotePair(p, q);
             if (c > _nearWorstV) (_nearWorst, _nearWorstV) = (q, c);
             v += c;
         }

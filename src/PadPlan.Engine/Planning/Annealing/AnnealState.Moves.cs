@@ -189,6 +189,7 @@ internal sealed partial class AnnealState
         Violation += DeltaViolation;
         _runViolation += _runsNew - _beforeRuns;
         _crossViolation += _crossDelta;
+        CommitCrossCounts();
         _ta = _tb = -1;
     }
 
