@@ -37,7 +37,8 @@ public class AnnealStateTests
     /// <summary>
     /// A move is measured in stages, and the annealer rejects it at the first stage whose lower bound is already over the
     /// draw's threshold. That decides exactly as measuring it whole only if no bound is ever above the whole change, to the
-    /// bit; and the violation of lead runs and crossings the bounds rest on, kept move by move, must match a recount.
+    /// bit; and the violation of lead runs and crossings the bounds rest on, and each lead's count of leads it comes too near
+    /// (a lead whose old path came near none is not searched), kept move by move, must match a recount.
     /// </summary>
     [Theory]
     [InlineData(0.4, 10.0)]
@@ -76,9 +77,13 @@ public class AnnealStateTests
             else state.Rollback();
         }
         var kept = state.LeadPathViolation;
+        var keptCounts = Enumerable.Range(0, problem.Leads.Length).Select(state.CrossCount).ToArray();
         state.Recompute();
         Assert.Equal(state.LeadPathViolation.Runs, kept.Runs, 6);
         Assert.Equal(state.LeadPathViolation.Crossings, kept.Crossings, 6);
+        // a move skips the search of a lead's old path when it came too near no lead, so that count must be exact
+        Assert.Equal(Enumerable.Range(0, problem.Leads.Length).Select(state.CrossCount).ToArray(), keptCounts);
+        Assert.True(keptCounts.Any(n => n > 0), "no lead path crossed another at the end of the walk: the count check proves little");
         Assert.True(rejectable is > 300 and < 2700, $"{rejectable} of 3000 moves could be rejected before the last stage: the check proves little");
         Assert.True(broken > 100, $"lead paths broke a rule after only {broken} moves of 3000: the bounds never had violation to allow for, so the check proves little");
     }
