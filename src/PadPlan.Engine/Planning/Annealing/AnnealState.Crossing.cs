@@ -24,6 +24,9 @@ internal sealed partial class AnnealState
     private int[] _moved = [];
     /// <summary>Per lead: how many leads its committed path comes too near (pairs with a violation above 0), counted exactly, so a move can tell that a lead's old path meets nothing without searching.</summary>
     private int[] _crossCount = [];
+    /// <summary>The terms above 0 of a search that reads cells out of the leads' order: which lead, and how much.</summary>
+    private int[] _termLead = [];
+    private double[] _termValue = [];
     // The open move's pairs whose violation is above 0: (lead, lead, +1) with the new paths, (lead, lead, -1) with the old,
     // applied to _crossCount on commit.
     private int[] _pairLog = [];
@@ -51,6 +54,8 @@ internal sealed partial class AnnealState
         Array.Fill(_ly, double.NaN);
         _changed = new int[n];
         _crossCount = new int[n];
+        _termLead = new int[n];
+        _termValue = new double[n];
         _pairLog = new int[3 * 64];
         _exBeforeX = new double[n]; _exBeforeY = new double[n];
         _moved = new int[n];
@@ -246,7 +251,12 @@ internal sealed partial class AnnealState
     /// <summary>Violations between lead p, with its committed path, and every unchanged lead whose committed path is near.</summary>
     private double CrossingNear(int p) => CrossingNear(p, _exX[p], _exY[p], _lx[p], _ly[p]);
 
-    /// <summary>Violations between lead p on the path (ex, ey) to (px, py) and every unchanged lead whose committed path is near (a search over more than <see cref="BucketGrid.MaxCellsPerEntry"/> cells reads every lead instead).</summary>
+    /// <summary>
+    /// Violations between lead p on the path (ex, ey) to (px, py) and every unchanged lead whose committed path is near
+    /// (<see cref="BucketGrid.AlongSegment"/>). A search too wide for the grid's box reads the cells along the path, out of
+    /// the order of the leads; its terms are then summed in that order, as reading every lead would, so the sum is the same
+    /// to the bit.
+    /// </summary>
     private double CrossingNear(int p, double ex, double ey, double px, double py)
     {
         if (double.IsNaN(px)) return 0;
@@ -255,20 +265,35 @@ internal sealed partial class AnnealState
         (_nearWorst, _nearWorstV) = (-1, 0.0);
         var v = 0.0;
         var (x0, y0, x1, y1) = (Math.Min(ex, px) - reach, Math.Min(ey, py) - reach, Math.Max(ex, px) + reach, Math.Max(ey, py) + reach);
-        foreach (var q in _leadGrid.Around(x0, y0, x1, y1, _leads.Length))
+        var walk = _leadGrid.AlongSegment(ex, ey, px, py, reach, _leads.Length);
+        var terms = 0;
+        foreach (var q in walk)
         {
             if (_leadSeen[q] == _leadSeenStamp || _changedStamp[q] == _stamp || !_crosses[q]) continue;
             // A path whose box lies beyond the search box, widened by the margin the pair's need has over the reach, adds
-            // exactly 0: skip it before reading the leads. Searches too wide for the grid read every lead, and most are far.
+            // exactly 0: skip it before reading the leads.
             if (Math.Max(_exX[q], _lx[q]) < x0 - PlacerLimits.Safety || Math.Min(_exX[q], _lx[q]) > x1 + PlacerLimits.Safety
                 || Math.Max(_exY[q], _ly[q]) < y0 - PlacerLimits.Safety || Math.Min(_exY[q], _ly[q]) > y1 + PlacerLimits.Safety) continue;
             _leadSeen[q] = _leadSeenStamp;
             var c = CrossPair(p, q, ex, ey, px, py, _exX[q], _exY[q], _lx[q], _ly[q]);
-            if (c > 0 && _pairSign != 0) NotePair(p, q);
-            if (c > _nearWorstV) (_nearWorst, _nearWorstV) = (q, c);
-            v += c;
+            if (c <= 0) continue; // adds exactly 0
+            if (walk.ByCells) (_termLead[terms], _termValue[terms++]) = (q, c);
+            else v += CrossTerm(p, q, c);
+        }
+        if (terms > 0)
+        {
+            _termLead.AsSpan(0, terms).Sort(_termValue.AsSpan(0, terms));
+            for (var k = 0; k < terms; k++) v += CrossTerm(p, _termLead[k], _termValue[k]);
         }
         return v;
+    }
+
+    /// <summary>One pair's violation c above 0, found by a search from lead p: noted for the counts and the worst, and returned.</summary>
+    private double CrossTerm(int p, int q, double c)
+    {
+        if (_pairSign != 0) NotePair(p, q);
+        if (c > _nearWorstV) (_nearWorst, _nearWorstV) = (q, c);
+        return c;
     }
 
     /// <summary>How much nearer than allowed two lead paths come (mm): the lead gap between two parts; within one part at most half the gap its package leaves at the body.</summary>

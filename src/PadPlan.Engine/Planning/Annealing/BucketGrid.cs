@@ -71,14 +71,45 @@ internal sealed class BucketGrid
     /// </summary>
     public Walk Around(double x0, double y0, double x1, double y1, int count) => new(this, x0, y0, x1, y1, count);
 
-    /// <summary>The enumerator of <see cref="Around"/>.</summary>
+    /// <summary>
+    /// The entries that may come within <paramref name="reach"/> of the segment from a to b: as <see cref="Around"/> on the
+    /// segment's box widened by the reach, except that a box spanning more than <see cref="MaxCellsPerEntry"/> cells reads,
+    /// column by column, only the cells within reach of the segment (a long slanting segment's box is mostly far from it),
+    /// unless those are still more than a quarter of <paramref name="count"/>, when it reads every entry.
+    /// </summary>
+    public Walk AlongSegment(double ax, double ay, double bx, double by, double reach, int count) => new(this, ax, ay, bx, by, reach, count);
+
+    /// <summary>Widening of a segment's cover beyond its reach (mm), far above the rounding of the cover's arithmetic.</summary>
+    private const double CoverTolerance = 0.01;
+
+    /// <summary>The rows of column c within reach r of the segment from a to b (empty when first is above last). The edge columns also hold what lies beyond the grid.</summary>
+    private (int First, int Last) RowsAlong(int c, double ax, double ay, double bx, double by, double r)
+    {
+        var cx0 = c == 0 ? double.NegativeInfinity : _x0 + c * _size;
+        var cx1 = c == _cols - 1 ? double.PositiveInfinity : _x0 + (c + 1) * _size;
+        var xa = Math.Max(cx0 - r, Math.Min(ax, bx));
+        var xb = Math.Min(cx1 + r, Math.Max(ax, bx));
+        if (xa > xb) return (0, -1);
+        double ylo, yhi;
+        if (bx == ax) (ylo, yhi) = (Math.Min(ay, by), Math.Max(ay, by));
+        else
+        {
+            var slope = (by - ay) / (bx - ax);
+            var (ya, yb) = (ay + (xa - ax) * slope, ay + (xb - ax) * slope);
+            (ylo, yhi) = (Math.Min(ya, yb), Math.Max(ya, yb));
+        }
+        return (Row(ylo - r), Row(yhi + r));
+    }
+
+    /// <summary>The enumerator of <see cref="Around"/> and <see cref="AlongSegment"/>.</summary>
     public ref struct Walk
     {
         private readonly BucketGrid _grid;
         private readonly int _count, _c0, _r0, _c1, _r1;
-        private readonly bool _all;
+        private readonly bool _all, _along;
+        private readonly double _ax, _ay, _bx, _by, _reach;
         private List<int>? _list;
-        private int _c, _r, _k;
+        private int _c, _r, _k, _rowFirst, _rowLast;
 
         internal Walk(BucketGrid grid, double x0, double y0, double x1, double y1, int count)
         {
@@ -86,11 +117,33 @@ internal sealed class BucketGrid
             _count = count;
             _all = !grid.Span(x0, y0, x1, y1, out _c0, out _r0, out _c1, out _r1);
             _list = _all ? null : grid._wide;
-            (_c, _r, _k) = (_c0, _r0 - 1, -1);
+            (_c, _r, _k, _rowFirst, _rowLast) = (_c0, _r0 - 1, -1, _r0, _r1);
             Current = -1;
         }
 
+        internal Walk(BucketGrid grid, double ax, double ay, double bx, double by, double reach, int count)
+            : this(grid, Math.Min(ax, bx) - reach, Math.Min(ay, by) - reach, Math.Max(ax, bx) + reach, Math.Max(ay, by) + reach, count)
+        {
+            if (!_all || double.IsNaN(ax + ay + bx + by)) return;
+            var r = reach + CoverTolerance;
+            (_ax, _ay, _bx, _by, _reach) = (ax, ay, bx, by, r);
+            var (c0, c1) = (grid.Col(Math.Min(ax, bx) - r), grid.Col(Math.Max(ax, bx) + r));
+            var cells = 0;
+            for (var c = c0; c <= c1; c++)
+            {
+                var (first, last) = grid.RowsAlong(c, ax, ay, bx, by, r);
+                cells += Math.Max(0, last - first + 1);
+            }
+            if (cells > count / 4) return;
+            (_all, _along, _list) = (false, true, grid._wide);
+            (_c0, _c1) = (c0, c1);
+            (_c, _r, _k, _rowFirst, _rowLast) = (c0 - 1, 0, -1, 0, -1);
+        }
+
         public int Current { get; private set; }
+
+        /// <summary>The walk reads the cells along a segment, so entries come out of their index order.</summary>
+        public readonly bool ByCells => _along;
 
         public readonly Walk GetEnumerator() => this;
 
@@ -104,7 +157,12 @@ internal sealed class BucketGrid
             }
             while (++_k >= _list!.Count)
             {
-                if (++_r > _r1) { _r = _r0; if (++_c > _c1) return false; }
+                while (++_r > _rowLast)
+                {
+                    if (++_c > _c1) return false;
+                    (_rowFirst, _rowLast) = _along ? _grid.RowsAlong(_c, _ax, _ay, _bx, _by, _reach) : (_r0, _r1);
+                    _r = _rowFirst - 1;
+                }
                 (_list, _k) = (_grid.Cell(_c, _r), -1);
             }
             Current = _list[_k];
