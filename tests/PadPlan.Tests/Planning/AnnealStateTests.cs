@@ -36,7 +36,7 @@ public class AnnealStateTests
 
     /// <summary>
     /// A move is measured in stages, and the annealer rejects it at the first stage whose lower bound is already over the
-    /// draw's threshold. That decides exactly as measuring it whole only if no bound is ever above the whole change, to the
+    /// draw's threshold (the legaliser, at the first whose bound of the violation change rules it out). That decides exactly as measuring it whole only if no bound is ever above the whole change, to the
     /// bit; and the violation of lead runs and crossings the bounds rest on, and each lead's count of leads it comes too near
     /// (a lead whose old path came near none is not searched), kept move by move, must match a recount.
     /// </summary>
@@ -66,10 +66,16 @@ public class AnnealStateTests
             state.Y[a] += rng.NextDouble() * 4 - 2;
             if (problem.Items[a].IsPart && rng.Next(3) == 0) state.Rot[a] = rng.Next(4);
             if (b >= 0) (state.X[b], state.Y[b]) = (state.X[a] + 1, state.Y[a] - 1);
-            var bounds = new[] { state.EvaluateNets(), state.EvaluatePairs(), state.EvaluateRunsStage() };
+            var bounds = new double[3];
+            var violationBounds = new double[3];
+            (bounds[0], violationBounds[0]) = (state.EvaluateNets(), state.ViolationBound);
+            (bounds[1], violationBounds[1]) = (state.EvaluatePairs(), state.ViolationBound);
+            (bounds[2], violationBounds[2]) = (state.EvaluateRunsStage(), state.ViolationBound);
             state.EvaluateCrossings();
             var whole = state.DeltaCost + state.Penalty * state.DeltaViolation;
             foreach (var bound in bounds) Assert.True(bound <= whole, $"move {k}: a stage's bound {bound} is above the whole change {whole}");
+            // the legaliser's searches stop on the violation alone (EvaluateWithin)
+            foreach (var bound in violationBounds) Assert.True(bound <= state.DeltaViolation, $"move {k}: a stage's violation bound {bound} is above the whole violation change {state.DeltaViolation}");
             if (bounds.Any(b => b > 0)) rejectable++;
             if (state.LeadPathViolation.Runs + state.LeadPathViolation.Crossings > 0) broken++;
             // keep downhill moves and some uphill ones, so the walk settles near legal and still breaks rules now and then

@@ -21,6 +21,10 @@ internal sealed partial class AnnealState
     private double _beforeRuns, _runsNew, _crossDelta;
     /// <summary>The committed violation of lead runs under bodies, and of lead crossings, kept move by move like <see cref="Violation"/>.</summary>
     private double _runViolation, _crossViolation;
+    /// <summary>The lower bound of the open move's violation change after the last stage evaluated.</summary>
+    private double _violationBound;
+    /// <summary><see cref="_violationBound"/>, for the verify test.</summary>
+    internal double ViolationBound => _violationBound;
     /// <summary>The committed violation of lead runs under bodies and of lead crossings, as kept move by move: for the verify test.</summary>
     internal (double Runs, double Crossings) LeadPathViolation => (_runViolation, _crossViolation);
     /// <summary>Relative margin of the stages' bounds: far above the rounding of a few sums of doubles (about 1e-16 each) and the drift of kept sums between recounts, far below any cost change a move makes.</summary>
@@ -100,6 +104,23 @@ internal sealed partial class AnnealState
     // runs under bodies at most the committed violation of all runs, lead crossings at most that of all crossings. A caller
     // that would reject the move at a bound rolls it back without the rest, and so decides exactly as the whole would.
 
+    /// <summary>
+    /// <see cref="Evaluate"/>, stopped after the first stage whose lower bound of the violation change already exceeds
+    /// <paramref name="violationLimit"/>: false then, and the move must be rolled back; true when evaluated whole. For a
+    /// search that wants only moves that change the violation by at most the limit (the legaliser's).
+    /// </summary>
+    public bool EvaluateWithin(double violationLimit)
+    {
+        EvaluateNets();
+        if (_violationBound > violationLimit) return false;
+        EvaluatePairs();
+        if (_violationBound > violationLimit) return false;
+        EvaluateRunsStage();
+        if (_violationBound > violationLimit) return false;
+        EvaluateCrossings();
+        return true;
+    }
+
     /// <summary>The first stage of <see cref="Evaluate"/>: the moved items' nets and own terms. Returns a lower bound of the whole move's annealing cost change.</summary>
     public double EvaluateNets()
     {
@@ -161,7 +182,8 @@ internal sealed partial class AnnealState
     {
         mendable = Math.Max(0, mendable);
         var margin = RoundingMargin * (1 + Math.Abs(_evalViol) + Math.Abs(_beforeViol) + mendable);
-        return _evalCost - _beforeCost + Penalty * (_evalViol - _beforeViol - mendable - margin);
+        _violationBound = _evalViol - _beforeViol - mendable - margin;
+        return _evalCost - _beforeCost + Penalty * _violationBound;
     }
 
     /// <summary>Keeps the evaluated move.</summary>

@@ -100,8 +100,7 @@ internal static class Legaliser
         var items = s.Problem.Items;
         if (a < 0 || b < 0 || a == b || items[a].Fixed || items[b].Fixed) return false;
         s.BeginTrade(a, b);
-        s.Evaluate();
-        if (s.DeltaViolation < -Clean) { s.Commit(); return true; }
+        if (s.EvaluateWithin(-Clean) && s.DeltaViolation < -Clean) { s.Commit(); return true; }
         s.Rollback();
         return false;
     }
@@ -117,8 +116,7 @@ internal static class Legaliser
             {
                 s.Begin(i);
                 s.SetGroundChoice(l, c);
-                s.Evaluate();
-                if (Better(s.DeltaViolation, s.DeltaCost, bestV, bestC)) { best = c; bestV = s.DeltaViolation; bestC = s.DeltaCost; }
+                if (s.EvaluateWithin(bestV + Clean) && Better(s.DeltaViolation, s.DeltaCost, bestV, bestC)) { best = c; bestV = s.DeltaViolation; bestC = s.DeltaCost; }
                 s.Rollback();
             }
             if (best < 0) continue;
@@ -153,8 +151,7 @@ internal static class Legaliser
                             s.X[i] = OnGrid(x0 + dx * step);
                             s.Y[i] = OnGrid(y0 + dy * step);
                             s.Rot[i] = rot;
-                            s.Evaluate();
-                            if (Better(s.DeltaViolation, s.DeltaCost, bestV, bestC)) { best = (s.X[i], s.Y[i], rot); bestV = s.DeltaViolation; bestC = s.DeltaCost; }
+                            if (s.EvaluateWithin(bestV + Clean) && Better(s.DeltaViolation, s.DeltaCost, bestV, bestC)) { best = (s.X[i], s.Y[i], rot); bestV = s.DeltaViolation; bestC = s.DeltaCost; }
                             s.Rollback();
                         }
                     }
@@ -169,6 +166,7 @@ internal static class Legaliser
         s.Commit();
     }
 
+    /// <summary>Less violation, or as little and less cost. A move whose violation change is above bestV + Clean is never better, so a search stops measuring it there (<see cref="AnnealState.EvaluateWithin"/>).</summary>
     private static bool Better(double dv, double dc, double bestV, double bestC) =>
         dv < bestV - Clean || (Math.Abs(dv - bestV) <= Clean && dc < bestC - 1e-9);
 }
