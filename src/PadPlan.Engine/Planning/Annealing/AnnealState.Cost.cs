@@ -166,13 +166,14 @@ internal sealed partial class AnnealState
             for (var k = 0; k < count; k++)
                 if (!_mstIn[k] && (best < 0 || _mstDist[k] < _mstDist[best])) best = k;
             _mstIn[best] = true;
-            total += _mstDist[best];
+            total += Math.Sqrt(_mstDist[best]);
             var s = isl[best];
+            var (sx, sy) = (_isX[s], _isY[s]);
             for (var k = 0; k < count; k++)
             {
                 if (_mstIn[k]) continue;
                 var t = isl[k];
-                var d = Math.Sqrt((_isX[s] - _isX[t]) * (_isX[s] - _isX[t]) + (_isY[s] - _isY[t]) * (_isY[s] - _isY[t]));
+                var d = (sx - _isX[t]) * (sx - _isX[t]) + (sy - _isY[t]) * (sy - _isY[t]); // squared: the same tree, one root per edge taken
                 if (d < _mstDist[k]) _mstDist[k] = d;
             }
         }
