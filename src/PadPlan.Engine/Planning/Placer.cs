@@ -121,18 +121,27 @@ public static class Placer
 
     /// <summary>
     /// The end of a run: legalised, reworked up to <see cref="PlacerLimits.ReworkTries"/> times when the legaliser leaves it a
-    /// little short, and when legal polished (the polish kept only if it stays legal). True when the layout breaks no rule.
+    /// little short (each time from the least broken layout so far, which a run that stays short also ends with), and when legal polished (the polish kept only if it stays legal). True when the layout breaks no rule.
     /// </summary>
     private static bool Finished(AnnealState state, Annealer annealer, PlacerSettings settings)
     {
         var items = state.Problem.Items.Length;
         var legal = Legaliser.Finish(state);
+        AnnealState? least = null;
         for (var rework = 0; !legal && rework < PlacerLimits.ReworkTries && state.Violation <= PlacerLimits.ReworkViolationPerItem * items; rework++)
         {
+            // each rework starts from the least broken layout so far: a warm rework can undo what the one before mended
+            least ??= new AnnealState(state.Problem) { Slack = 0, Penalty = Legaliser.Penalty }; // measured as the legaliser measures
+            if (rework == 0 || state.Violation < least.Violation) least.CopyFrom(state);
+            else state.CopyFrom(least);
             annealer.Rework(settings.MovesFactor, rework);
             legal = Legaliser.Finish(state);
         }
-        if (!legal) return false;
+        if (!legal)
+        {
+            if (least is not null && least.Violation < state.Violation) state.CopyFrom(least);
+            return false;
+        }
         var kept = new AnnealState(state.Problem);
         kept.CopyFrom(state);
         annealer.Polish(settings.MovesFactor);
