@@ -101,7 +101,8 @@ internal sealed partial class AnnealState
     // Penalty times violation) that the whole evaluation can give: what is still to come can only add cost and violation
     // (every term is at least 0), except that it can mend what is committed now. The item pairs, and the soft cost of bodies
     // over pads measured with them, can mend at most what the moved items' pairs hold now (already taken off in Begin); lead
-    // runs under bodies at most the committed violation of all runs, lead crossings at most that of all crossings. A caller
+    // runs under bodies at most the committed violation of the runs the move does not measure anew (those it does were taken
+    // off in Begin too), lead crossings at most that of all crossings. A caller
     // that would reject the move at a bound rolls it back without the rest, and so decides exactly as the whole would.
 
     /// <summary>
@@ -144,7 +145,7 @@ internal sealed partial class AnnealState
             viol += _ubViol;
         }
         (_evalCost, _evalViol) = (cost, viol);
-        return Bound(_runViolation + _crossViolation);
+        return Bound(_runViolation - _beforeRuns + _crossViolation);
     }
 
     /// <summary>The second stage of <see cref="Evaluate"/>: the moved items' pairs with every other item. Returns a lower bound of the whole move's annealing cost change.</summary>
@@ -158,7 +159,7 @@ internal sealed partial class AnnealState
             var l = _changed[i];
             if (_leads[l].Ground || _leads[l].OwnIsland >= 0) OwnLanding(l, _lxNew, _lyNew);
         }
-        return Bound(_runViolation + _crossViolation);
+        return Bound(_runViolation - _beforeRuns + _crossViolation);
     }
 
     /// <summary>The third stage of <see cref="Evaluate"/>: lead runs under bodies. Returns a lower bound of the whole move's annealing cost change.</summary>
