@@ -24,6 +24,8 @@ internal sealed partial class AnnealState
     private int[] _moved = [];
     /// <summary>Per lead: how many leads its committed path comes too near (pairs with a violation above 0), counted exactly, so a move can tell that a lead's old path meets nothing without searching.</summary>
     private int[] _crossCount = [];
+    /// <summary>Some lead the open move can change comes too near another now: only then can the move lower the crossing violation.</summary>
+    private bool _changedCross;
     /// <summary>The terms above 0 of a search that reads cells out of the leads' order: which lead, and how much.</summary>
     private int[] _termLead = [];
     private double[] _termValue = [];
@@ -175,11 +177,13 @@ internal sealed partial class AnnealState
     private void CollectChanged()
     {
         _changedCount = 0;
+        _changedCross = false;
         void Add(int l)
         {
             if (!_crosses[l] || _changedStamp[l] == _stamp) return;
             _changedStamp[l] = _stamp;
             _changed[_changedCount++] = l;
+            _changedCross |= _crossCount[l] > 0;
         }
         foreach (var l in _items[_ta].Leads) Add(l);
         if (_tb >= 0) foreach (var l in _items[_tb].Leads) Add(l);

@@ -102,7 +102,7 @@ internal sealed partial class AnnealState
     // (every term is at least 0), except that it can mend what is committed now. The item pairs, and the soft cost of bodies
     // over pads measured with them, can mend at most what the moved items' pairs hold now (already taken off in Begin); lead
     // runs under bodies at most the committed violation of the runs the move does not measure anew (those it does were taken
-    // off in Begin too), lead crossings at most that of all crossings. A caller
+    // off in Begin too), lead crossings at most that of all crossings, and nothing when no lead the move can change crosses. A caller
     // that would reject the move at a bound rolls it back without the rest, and so decides exactly as the whole would.
 
     /// <summary>
@@ -145,7 +145,7 @@ internal sealed partial class AnnealState
             viol += _ubViol;
         }
         (_evalCost, _evalViol) = (cost, viol);
-        return Bound(_runViolation - _beforeRuns + _crossViolation);
+        return Bound(_runViolation - _beforeRuns + MendableCrossings);
     }
 
     /// <summary>The second stage of <see cref="Evaluate"/>: the moved items' pairs with every other item. Returns a lower bound of the whole move's annealing cost change.</summary>
@@ -159,7 +159,7 @@ internal sealed partial class AnnealState
             var l = _changed[i];
             if (_leads[l].Ground || _leads[l].OwnIsland >= 0) OwnLanding(l, _lxNew, _lyNew);
         }
-        return Bound(_runViolation - _beforeRuns + _crossViolation);
+        return Bound(_runViolation - _beforeRuns + MendableCrossings);
     }
 
     /// <summary>The third stage of <see cref="Evaluate"/>: lead runs under bodies. Returns a lower bound of the whole move's annealing cost change.</summary>
@@ -167,7 +167,7 @@ internal sealed partial class AnnealState
     {
         _runsNew = EvaluateRuns();
         _evalViol += _runsNew;
-        return Bound(_crossViolation);
+        return Bound(MendableCrossings);
     }
 
     /// <summary>The last stage of <see cref="Evaluate"/>: lead crossings. Sets <see cref="DeltaCost"/> and <see cref="DeltaViolation"/>.</summary>
@@ -177,6 +177,9 @@ internal sealed partial class AnnealState
         _crossDelta = CrossingChange();
         DeltaViolation = _evalViol - _beforeViol + _crossDelta;
     }
+
+    /// <summary>What the crossing stage can mend at most: the committed crossing violation, or 0 when no lead the move can change comes too near another (each of its old pairs is then exactly 0).</summary>
+    private double MendableCrossings => _changedCross ? _crossViolation : 0;
 
     /// <summary>The lower bound after a stage: the cost and violation so far, less all that the stages to come could mend, less a margin for rounding.</summary>
     private double Bound(double mendable)
