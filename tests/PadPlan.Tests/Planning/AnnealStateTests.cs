@@ -94,6 +94,30 @@ public class AnnealStateTests
         Assert.True(broken > 100, $"lead paths broke a rule after only {broken} moves of 3000: the bounds never had violation to allow for, so the check proves little");
     }
 
+    /// <summary>
+    /// The crossing searches read only the lead paths the grid files near a path, out to the most any pair can need; they must
+    /// find every pair that comes too near. Against a sum over every pair of leads, on many crowded layouts.
+    /// </summary>
+    [Fact]
+    public void Crossing_searches_find_every_pair_that_comes_too_near()
+    {
+        // large enough that a scattered lead's path spans more grid cells than a search reads as a box (BucketGrid.AlongSegment)
+        var problem = ProblemBuilder.Build(TestCircuits.Random(11, 150), PlacerSettings.Default, CostWeights.Default);
+        var state = new AnnealState(problem);
+        var broken = 0;
+        for (var seed = 0; seed < 30; seed++)
+        {
+            new Annealer(state, seed).Scatter();
+            state.Slack = seed % 2 == 0 ? 0 : 0.4;
+            state.Recompute();
+            var everyPair = state.CrossingByEveryPair();
+            // summed in another order: equal to rounding, far below any pair's share
+            Assert.True(Math.Abs(everyPair - state.CrossingViolation) <= 1e-9 * Math.Max(1, everyPair), $"layout {seed}: every pair gives {everyPair} mm, the searches {state.CrossingViolation} mm");
+            if (everyPair > 0) broken++;
+        }
+        Assert.True(broken > 20, $"leads crossed on only {broken} of 30 layouts: the check proves little");
+    }
+
     private static (PlacementProblem Problem, AnnealState State) RandomWalk(double slack)
     {
         var problem = ProblemBuilder.Build(TestCircuits.Random(11, 14), PlacerSettings.Default, CostWeights.Default);

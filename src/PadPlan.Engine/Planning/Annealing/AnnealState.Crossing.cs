@@ -102,6 +102,19 @@ internal sealed partial class AnnealState
         return v;
     }
 
+    /// <summary>The committed crossing violation summed over every pair of leads, with no grid: for the verify test of the searches.</summary>
+    internal double CrossingByEveryPair()
+    {
+        var v = 0.0;
+        for (var p = 0; p < _leads.Length; p++)
+            for (var q = p + 1; q < _leads.Length; q++)
+                if (_crosses[p] && _crosses[q]) v += CrossPair(p, q, _exX[p], _exY[p], _lx[p], _ly[p], _exX[q], _exY[q], _lx[q], _ly[q]);
+        return v;
+    }
+
+    /// <summary>The committed crossing violation as the searches found it at the last recount and kept it since.</summary>
+    internal double CrossingViolation => _crossViolation;
+
     /// <summary>How many leads lead l's committed path comes too near, as kept move by move: for the verify test.</summary>
     internal int CrossCount(int l) => _crossCount[l];
 
