@@ -121,7 +121,8 @@ public static class Placer
 
     /// <summary>
     /// The end of a run: legalised, reworked up to <see cref="PlacerLimits.ReworkTries"/> times when the legaliser leaves it a
-    /// little short (each time from the least broken layout so far, which a run that stays short also ends with), and when legal polished (the polish kept only if it stays legal). True when the layout breaks no rule.
+    /// little short (each time from the least broken layout so far, which a run that stays short also ends with), and when
+    /// legal polished (the polish kept only if it stays legal). True when the layout breaks no rule.
     /// </summary>
     private static bool Finished(AnnealState state, Annealer annealer, PlacerSettings settings)
     {

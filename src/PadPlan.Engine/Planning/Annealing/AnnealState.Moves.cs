@@ -102,8 +102,9 @@ internal sealed partial class AnnealState
     // (every term is at least 0), except that it can mend what is committed now. The item pairs, and the soft cost of bodies
     // over pads measured with them, can mend at most what the moved items' pairs hold now (already taken off in Begin); lead
     // runs under bodies at most the committed violation of the runs the move does not measure anew (those it does were taken
-    // off in Begin too), lead crossings at most that of all crossings, and nothing when no lead the move can change crosses. A caller
-    // that would reject the move at a bound rolls it back without the rest, and so decides exactly as the whole would.
+    // off in Begin too); lead crossings at most that of all crossings, and nothing when no lead the move can change crosses
+    // now. A caller that would reject the move at a bound rolls it back without the rest, and so decides exactly as the
+    // whole evaluation would.
 
     /// <summary>
     /// <see cref="Evaluate"/>, stopped after the first stage whose lower bound of the violation change already exceeds
