@@ -58,14 +58,7 @@ public class AnnealStateTests
         var (rejectable, broken) = (0, 0);
         for (var k = 0; k < 3000; k++)
         {
-            var a = movable[rng.Next(movable.Length)];
-            var b = rng.Next(4) == 0 ? movable[rng.Next(movable.Length)] : -1;
-            if (b == a) b = -1;
-            state.Begin(a, b);
-            state.X[a] += rng.NextDouble() * 4 - 2;
-            state.Y[a] += rng.NextDouble() * 4 - 2;
-            if (problem.Items[a].IsPart && rng.Next(3) == 0) state.Rot[a] = rng.Next(4);
-            if (b >= 0) (state.X[b], state.Y[b]) = (state.X[a] + 1, state.Y[a] - 1);
+            OpenRandomMove(state, rng, movable, shift: 2, turnEveryTime: false);
             var bounds = new double[3];
             var violationBounds = new double[3];
             (bounds[0], violationBounds[0]) = (state.EvaluateNets(), state.ViolationBound);
@@ -118,6 +111,19 @@ public class AnnealStateTests
         Assert.True(broken > 20, $"leads crossed on only {broken} of 30 layouts: the check proves little");
     }
 
+    /// <summary>Opens a random move: an item shifted by up to <paramref name="shift"/> mm each way (a part turned every time, or one time in three), and one move in four a second item set beside it.</summary>
+    private static void OpenRandomMove(AnnealState state, Random rng, int[] movable, double shift, bool turnEveryTime)
+    {
+        var a = movable[rng.Next(movable.Length)];
+        var b = rng.Next(4) == 0 ? movable[rng.Next(movable.Length)] : -1;
+        if (b == a) b = -1;
+        state.Begin(a, b);
+        state.X[a] += rng.NextDouble() * 2 * shift - shift;
+        state.Y[a] += rng.NextDouble() * 2 * shift - shift;
+        if (state.Problem.Items[a].IsPart && (turnEveryTime || rng.Next(3) == 0)) state.Rot[a] = rng.Next(4);
+        if (b >= 0) (state.X[b], state.Y[b]) = (state.X[a] + 1, state.Y[a] - 1);
+    }
+
     private static (PlacementProblem Problem, AnnealState State) RandomWalk(double slack)
     {
         var problem = ProblemBuilder.Build(TestCircuits.Random(11, 14), PlacerSettings.Default, CostWeights.Default);
@@ -130,14 +136,7 @@ public class AnnealStateTests
         var movable = problem.Items.Where(i => !i.Fixed).Select(i => i.Index).ToArray();
         for (var k = 0; k < 3000; k++)
         {
-            var a = movable[rng.Next(movable.Length)];
-            var b = rng.Next(4) == 0 ? movable[rng.Next(movable.Length)] : -1;
-            if (b == a) b = -1;
-            state.Begin(a, b);
-            state.X[a] += rng.NextDouble() * 8 - 4;
-            state.Y[a] += rng.NextDouble() * 8 - 4;
-            if (problem.Items[a].IsPart) state.Rot[a] = rng.Next(4);
-            if (b >= 0) (state.X[b], state.Y[b]) = (state.X[a] + 1, state.Y[a] - 1);
+            OpenRandomMove(state, rng, movable, shift: 4, turnEveryTime: true);
             state.Evaluate();
             if (rng.Next(2) == 0) state.Commit();
             else state.Rollback();
