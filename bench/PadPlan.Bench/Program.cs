@@ -12,6 +12,7 @@ using PadPlan.Rules;
 // Usage: dotnet run -c Release --project bench/PadPlan.Bench -- [--sizes 20,50,100,200,500,1000] [--effort normal] [--seed 1]
 //          [--repeat 3] [--seeds 10] [--best-known 50] [--start mixed|spring|scatter] [--skip-compare] [--skip-steady] [--steady-only]
 //          [--write docs/benchmarks.md]
+//        ... -- --cost-breakdown CASE N (the placer's cost of seeds 1-N's layouts, term by term)
 //        ... -- --profile N (stage timings and work per move of one run), --preview PROJECT OUT.png (rough picture of a placed project),
 //        ... -- --edit-recheck N (the editor's work after one change on an N-part plan: edit, check, view)
 //        ... -- --sim-deck PROJECT (print the deck the operating point runs for a project)
@@ -49,6 +50,14 @@ for (var i = 0; i < args.Length; i++)
             var n = int.Parse(args[++i], CultureInfo.InvariantCulture);
             var c = Steadiness.Cases(ExampleNetlists.ImportAll(Path.Combine(FindRoot(), "examples"))).First(c => c.Name.Contains(name, StringComparison.Ordinal));
             RunsStudy.Run(c.Project, n, new PlacerSettings(seed, effort));
+            return 0;
+        }
+        case "--cost-breakdown":
+        {
+            var name = args[++i];
+            var n = int.Parse(args[++i], CultureInfo.InvariantCulture);
+            var c = Steadiness.Cases(ExampleNetlists.ImportAll(Path.Combine(FindRoot(), "examples"))).First(c => c.Name.Contains(name, StringComparison.Ordinal));
+            CostBreakdown.Run(c.Project, c.Name, n, new PlacerSettings(seed, effort));
             return 0;
         }
         case "--best-known": bestKnown = int.Parse(args[++i], CultureInfo.InvariantCulture); break;
