@@ -44,20 +44,20 @@ for (var i = 0; i < args.Length; i++)
         case "--skip-steady": steady = false; break;
         case "--steady-only": main = false; compare = false; break;
         case "--cases": only = args[++i]; break;
-        case "--runs-study":
+        case "--runs-study" or "--cost-breakdown":
         {
+            var study = args[i];
             var name = args[++i];
             var n = int.Parse(args[++i], CultureInfo.InvariantCulture);
-            var c = Steadiness.Cases(ExampleNetlists.ImportAll(Path.Combine(FindRoot(), "examples"))).First(c => c.Name.Contains(name, StringComparison.Ordinal));
-            RunsStudy.Run(c.Project, n, new PlacerSettings(seed, effort));
-            return 0;
-        }
-        case "--cost-breakdown":
-        {
-            var name = args[++i];
-            var n = int.Parse(args[++i], CultureInfo.InvariantCulture);
-            var c = Steadiness.Cases(ExampleNetlists.ImportAll(Path.Combine(FindRoot(), "examples"))).First(c => c.Name.Contains(name, StringComparison.Ordinal));
-            CostBreakdown.Run(c.Project, c.Name, n, new PlacerSettings(seed, effort));
+            var studied = Steadiness.Cases(Examples(FindRoot()));
+            var c = studied.FirstOrDefault(c => c.Name.Contains(name, StringComparison.Ordinal));
+            if (c.Project is null)
+            {
+                Console.Error.WriteLine($"{study}: no case's name contains \"{name}\"; the cases are {string.Join(", ", studied.Select(x => x.Name))}.");
+                return 2;
+            }
+            if (study == "--runs-study") RunsStudy.Run(c.Project, n, new PlacerSettings(seed, effort));
+            else CostBreakdown.Run(c.Project, c.Name, n, new PlacerSettings(seed, effort));
             return 0;
         }
         case "--best-known": bestKnown = int.Parse(args[++i], CultureInfo.InvariantCulture); break;
@@ -75,11 +75,9 @@ var root = FindRoot();
 var settings = new PlacerSettings(seed, effort) { Start = start };
 var cases = new List<(string Name, Project Project)>();
 foreach (var n in sizes) cases.Add(($"synthetic {n}", SyntheticCircuit.Make(n, 1000 + n)));
-foreach (var file in Directory.GetFiles(Path.Combine(root, "examples"), "*.padplan.json", SearchOption.AllDirectories).Order(StringComparer.Ordinal))
-    cases.Add(($"example {Path.GetFileName(file).Replace(".padplan.json", "")}", ProjectFile.Read(file) with { Layout = null }));
-var examples = ExampleNetlists.ImportAll(Path.Combine(root, "examples")).ToList();
-cases.AddRange(examples);
-examples.InsertRange(0, cases.Where(c => c.Name.StartsWith("example", StringComparison.Ordinal) && !examples.Any(e => e.Name == c.Name)));
+cases.AddRange(ExampleProjects(root));
+var examples = Examples(root);
+cases.AddRange(examples.Where(e => !cases.Any(c => c.Name == e.Name)));
 
 var loadBefore = Machine.Load();
 var began = DateTime.UtcNow;
@@ -199,6 +197,19 @@ static string StartTable(List<(string Name, Project Project)> cases, PlacerSetti
         table.AppendLine(FormattableString.Invariant($"| {name} | {cells[0]} | {cells[1]} | {winner} ({Math.Max(costs[0], costs[1]) / Math.Min(costs[0], costs[1]) - 1:P0}) |"));
     }
     return table.ToString();
+}
+
+// Every example project under examples/, its layout removed.
+static List<(string Name, Project Project)> ExampleProjects(string root) =>
+    [.. Directory.GetFiles(Path.Combine(root, "examples"), "*.padplan.json", SearchOption.AllDirectories).Order(StringComparer.Ordinal)
+        .Select(file => ($"example {Path.GetFileName(file).Replace(".padplan.json", "")}", ProjectFile.Read(file) with { Layout = null }))];
+
+// The examples of the steadiness table: the example projects that no example netlist imports as well, then every netlist imported.
+static List<(string Name, Project Project)> Examples(string root)
+{
+    var imported = ExampleNetlists.ImportAll(Path.Combine(root, "examples")).ToList();
+    imported.InsertRange(0, ExampleProjects(root).Where(p => !imported.Any(e => e.Name == p.Name)));
+    return imported;
 }
 
 static string FindRoot()
