@@ -49,7 +49,8 @@ for (var i = 0; i < args.Length; i++)
             var study = args[i];
             var name = args[++i];
             var n = int.Parse(args[++i], CultureInfo.InvariantCulture);
-            var studied = Steadiness.Cases(Examples(FindRoot()));
+            var home = FindRoot();
+            var studied = Steadiness.Cases(Examples(home, ExampleProjects(home)));
             var c = studied.FirstOrDefault(c => c.Name.Contains(name, StringComparison.Ordinal));
             if (c.Project is null)
             {
@@ -75,8 +76,9 @@ var root = FindRoot();
 var settings = new PlacerSettings(seed, effort) { Start = start };
 var cases = new List<(string Name, Project Project)>();
 foreach (var n in sizes) cases.Add(($"synthetic {n}", SyntheticCircuit.Make(n, 1000 + n)));
-cases.AddRange(ExampleProjects(root));
-var examples = Examples(root);
+var projects = ExampleProjects(root);
+cases.AddRange(projects);
+var examples = Examples(root, projects);
 cases.AddRange(examples.Where(e => !cases.Any(c => c.Name == e.Name)));
 
 var loadBefore = Machine.Load();
@@ -205,10 +207,10 @@ static List<(string Name, Project Project)> ExampleProjects(string root) =>
         .Select(file => ($"example {Path.GetFileName(file).Replace(".padplan.json", "")}", ProjectFile.Read(file) with { Layout = null }))];
 
 // The examples of the steadiness table: the example projects that no example netlist imports as well, then every netlist imported.
-static List<(string Name, Project Project)> Examples(string root)
+static List<(string Name, Project Project)> Examples(string root, List<(string Name, Project Project)> projects)
 {
     var imported = ExampleNetlists.ImportAll(Path.Combine(root, "examples")).ToList();
-    imported.InsertRange(0, ExampleProjects(root).Where(p => !imported.Any(e => e.Name == p.Name)));
+    imported.InsertRange(0, projects.Where(p => !imported.Any(e => e.Name == p.Name)));
     return imported;
 }
 
