@@ -55,7 +55,7 @@ public static class PlaceCommand
             ProjectFile.Write(result.Project!, file.FullName);
             if (!parse.GetValue(quiet))
             {
-                context.Out.WriteLine($"placed {input.Parts.Count} parts in {file.Name}; the check passed ({result.Report!.Warnings} warning{(result.Report.Warnings == 1 ? "" : "s")})");
+                context.Out.WriteLine($"placed {input.Parts.Count} parts in {file.Name}; the layout check passed ({result.Report!.Warnings} warning{(result.Report.Warnings == 1 ? "" : "s")}); 'padplan check' adds polarity and ratings at the operating point");
                 if (result.Tries > 1)
                     context.Out.WriteLine($"the checker failed {result.Tries - 1} earlier layout{(result.Tries > 2 ? "s" : "")}; this one is from seed {result.Summary!.Seed}");
                 foreach (var line in result.Summary!.Lines()) context.Out.WriteLine(line);

@@ -60,7 +60,7 @@ public static class SwapCommand
                 if (outcome.Placement is { } placed)
                 {
                     context.Out.WriteLine(PartSwap.UnmovedLine(outcome));
-                    context.Out.WriteLine($"the check passed ({placed.Report!.Warnings} warning{(placed.Report.Warnings == 1 ? "" : "s")})");
+                    context.Out.WriteLine($"the layout check passed ({placed.Report!.Warnings} warning{(placed.Report.Warnings == 1 ? "" : "s")}); 'padplan check' adds polarity and ratings at the operating point");
                     foreach (var line in PlaceCommand.SideBySide(LayoutFigures.Of(input), LayoutFigures.Of(outcome.Project))) context.Out.WriteLine(line);
                 }
                 else if (input.Layout?.Placements.Any(p => p.Ref == request.Ref) == true) context.Out.WriteLine("same footprint and pin order: nothing on the board moves.");

@@ -35,7 +35,8 @@ public class PlaceCommandTests
         var run = CliRunner.Run("place", path, "--seed", "5", "--effort", "quick");
         Assert.Equal(0, run.ExitCode);
         Assert.Contains("leads: total", run.Out);
-        Assert.Contains("the check passed", run.Out);
+        Assert.Contains("the layout check passed", run.Out);
+        Assert.Contains("'padplan check' adds polarity and ratings at the operating point", run.Out); // the gate checks the layout only: the operating point is check's
         Assert.Contains("board: 50 x 36 mm", run.Out);
         // The lead floor is a lower bound (WireFloorTests): the summary names it, and the layout's total is not below it.
         var total = double.Parse(Regex.Match(run.Out, @"leads: total ([0-9.]+) mm").Groups[1].Value, CultureInfo.InvariantCulture);

@@ -48,6 +48,7 @@ public sealed record SheetBook(string Title, DateOnly Date, ValueList<Sheet> She
         drafts.AddRange(AssemblySheet.Build(project, options));
         drafts.AddRange(ReportSheets.Build(project, options, check, tables, cutting));
 
+        var stop = NotReady(check, drafts.FindIndex(d => d.Kind == SheetKind.Report) + 1);
         var sheets = new List<Sheet>();
         var perKind = new Dictionary<SheetKind, int>();
         for (var i = 0; i < drafts.Count; i++)
@@ -56,10 +57,22 @@ public sealed record SheetBook(string Title, DateOnly Date, ValueList<Sheet> She
             perKind[draft.Kind] = perKind.GetValueOrDefault(draft.Kind) + 1;
             var page = new PageBuilder();
             foreach (var shape in draft.Body) page.Add(shape);
-            TitleBlock.Draw(page, draft.Frame, project, draft.Caption, options.Date, i + 1, drafts.Count);
+            TitleBlock.Draw(page, draft.Frame, project, draft.Caption, options.Date, i + 1, drafts.Count, stop);
             var title = $"{project.Name}: {draft.Caption} (sheet {i + 1} of {drafts.Count})";
             sheets.Add(new Sheet(draft.Kind, perKind[draft.Kind], page.ToPage(draft.Frame.Width, draft.Frame.Height, title), draft.View, draft.CheckBar));
         }
         return new SheetBook($"{project.Name}: PadPlan sheets", options.Date, sheets.ToValueList());
+    }
+
+    /// <summary>
+    /// The mark every page carries when the check found errors, so that no page of a plan that fails (a template taped to the
+    /// board, an assembly view at the bench) can be taken for a sound one on its own: "NOT READY: 1 error in the check
+    /// (sheet 3)". Null when the check passed or was left out.
+    /// </summary>
+    public static string? NotReady(CheckReport? check, int checkSheet)
+    {
+        if (check is not { Errors: > 0 } failed) return null;
+        var errors = failed.Errors == 1 ? "1 error" : $"{failed.Errors} errors";
+        return checkSheet > 0 ? $"NOT READY: {errors} in the check (sheet {checkSheet})" : $"NOT READY: {errors} in the check";
     }
 }

@@ -4,12 +4,16 @@ using PadPlan.Output.Drawing;
 
 namespace PadPlan.Output.Sheets;
 
-/// <summary>The box along the bottom of every sheet: project, what the sheet is, board size, paper, date, sheet n of m.</summary>
+/// <summary>
+/// The box along the bottom of every sheet: project, what the sheet is, board size, paper, date, sheet n of m. A plan that
+/// fails its check has its stop mark (<see cref="SheetBook.NotReady"/>) on the first line, in bold, and the project and
+/// sheet on the second.
+/// </summary>
 internal static class TitleBlock
 {
     private const double CellWidth = 27;
 
-    public static void Draw(PageBuilder page, PageFrame frame, Project project, string caption, DateOnly date, int number, int total)
+    public static void Draw(PageBuilder page, PageFrame frame, Project project, string caption, DateOnly date, int number, int total, string? stop = null)
     {
         var box = frame.TitleBox;
         page.Rect(box, SheetStyle.Normal);
@@ -22,8 +26,10 @@ internal static class TitleBlock
         };
         var x = box.Right - CellWidth * cells.Length;
         var nameWidth = x - box.Left - 4;
-        page.Text(TextMetrics.Fit(project.Name, SheetStyle.TextLarge, nameWidth, FontWeight.Bold), new Point(box.Left + 2, box.Top + 5.4), SheetStyle.TextLarge, weight: FontWeight.Bold);
-        page.Text(TextMetrics.Fit(caption, SheetStyle.TextNormal, nameWidth), new Point(box.Left + 2, box.Top + 10.6), SheetStyle.TextNormal);
+        var (first, second) = stop is null ? (project.Name, caption) : (stop, $"{project.Name} · {caption}");
+        var firstSize = stop is null ? SheetStyle.TextLarge : SheetStyle.TextNormal;
+        page.Text(TextMetrics.Fit(first, firstSize, nameWidth, FontWeight.Bold), new Point(box.Left + 2, box.Top + 5.4), firstSize, weight: FontWeight.Bold);
+        page.Text(TextMetrics.Fit(second, SheetStyle.TextNormal, nameWidth), new Point(box.Left + 2, box.Top + 10.6), SheetStyle.TextNormal);
         foreach (var (label, value) in cells)
         {
             page.Line(new Point(x, box.Top), new Point(x, box.Bottom), SheetStyle.Thin);
