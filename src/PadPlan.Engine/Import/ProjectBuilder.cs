@@ -125,6 +125,7 @@ public static class ProjectBuilder
     {
         PartKind.Subcircuit when !part.Positional => $"{part.Ref}: no footprint given, so the generic {footprint} is assumed, its pins taken as lead numbers. Name the footprint after the value (see 'padplan footprints').",
         PartKind.Subcircuit => $"{part.Ref}: {part.Model ?? "this part"} has no known footprint, so the generic {footprint} is assumed, pins in call order on leads 1, 2, 3... Add \"{part.Model ?? part.Ref}\": {{\"footprint\": \"...\", \"pins\": {{...}}}} under \"values\" in a parts map (--parts).",
+        PartKind.Diode => $"{part.Ref}: diode {part.Model ?? part.Value} is not a type number PadPlan knows, so the small-signal {footprint} is assumed, and its current is judged against that package's rating. A rectifier goes on diode-plastic-do41 (1 A) or diode-plastic-do201 (3 A): name the footprint in a parts map.",
         PartKind.Transformer => $"{part.Ref}: coupled windings ({part.Value}) are put on {footprint}; the core size is a guess. In a parts map, add \"{part.Model}\" (the K line) under \"values\", or \"{part.Ref}\" under \"parts\", with the right toroid.",
         _ => $"{part.Ref}: value {part.Value} is not known, so {footprint} is assumed; name the footprint in a parts map.",
     };

@@ -1,0 +1,48 @@
+namespace PadPlan.Tests.Import;
+
+/// <summary>
+/// A SPICE diode with no footprint named goes on the package its type number is made in, so that it fits the board and
+/// its current is judged against the right rating (the library's DO-35 is rated 0.2 A, DO-41 1 A, DO-201AD 3 A). Packages
+/// per the makers' data sheets for these JEDEC types, from memory: 1N4001-1N4007 and 1N5817-1N5819 in DO-41, 1N5400-1N5408
+/// and 1N5820-1N5822 in DO-201AD, 1N4728A-1N4764A (1 W zeners) and BZX85 in DO-41, 1N4148, 1N914, 1N5221B-1N5281B and BZX79
+/// in DO-35.
+/// </summary>
+public class DiodePackageTests
+{
+    [Theory]
+    [InlineData("D1N4001", "diode-plastic-do41")]
+    [InlineData("1n4007", "diode-plastic-do41")]
+    [InlineData("D1N5819", "diode-plastic-do41")]
+    [InlineData("1N4742A", "diode-plastic-do41")]
+    [InlineData("BZX85C12", "diode-plastic-do41")]
+    [InlineData("D1N5408", "diode-plastic-do201")]
+    [InlineData("1N5822", "diode-plastic-do201")]
+    [InlineData("D1N4148", "diode-glass-do35")]
+    [InlineData("D1N914", "diode-glass-do35")]
+    [InlineData("1N5231B", "diode-glass-do35")]
+    [InlineData("BZX79C5V1", "diode-glass-do35")]
+    [InlineData("DRECT", "diode-plastic-do41")] // the name says rectifier: the 1 A class, as before
+    public void A_known_type_number_chooses_its_package_and_is_not_a_guess(string model, string footprint)
+    {
+        var r = ImportFixture.Import($"test\nV1 a 0 DC 5\nR1 a k 1k\nD1 k 0 {model}\n.model {model} D(IS=1n)\n.end\n");
+        var d1 = r.Project.FindPart("D1")!;
+        Assert.Equal(footprint, d1.Footprint);
+        Assert.False(d1.FootprintAssumed);
+        Assert.DoesNotContain(r.Notes, n => n.Message.StartsWith("D1:", StringComparison.Ordinal));
+    }
+
+    /// <summary>A type the importer does not know goes on the small-signal package, marked as assumed, with a note that names the rectifier packages.</summary>
+    [Theory]
+    [InlineData("DMOD")]
+    [InlineData("D1N9999")] // a type number outside every range above
+    public void An_unknown_diode_goes_on_the_small_signal_package_marked_as_a_guess(string model)
+    {
+        var r = ImportFixture.Import($"test\nV1 a 0 DC 5\nR1 a k 1k\nD1 k 0 {model}\n.model {model} D(IS=1n)\n.end\n");
+        var d1 = r.Project.FindPart("D1")!;
+        Assert.Equal("diode-glass-do35", d1.Footprint);
+        Assert.True(d1.FootprintAssumed);
+        var note = Assert.Single(r.Notes, n => n.Message.StartsWith("D1:", StringComparison.Ordinal));
+        Assert.Contains("diode-plastic-do41 (1 A)", note.Message);
+        Assert.Contains("parts map", note.Message);
+    }
+}
