@@ -9,6 +9,10 @@ namespace PadPlan.Tests.Import;
 /// </summary>
 public class DiodePackageTests
 {
+    /// <summary>A supply, a resistor and one diode of the given model, as a SPICE deck.</summary>
+    private static PadPlan.Import.ImportResult WithDiode(string model) =>
+        ImportFixture.Import($"test\nV1 a 0 DC 5\nR1 a k 1k\nD1 k 0 {model}\n.model {model} D(IS=1n)\n.end\n");
+
     [Theory]
     [InlineData("D1N4001", "diode-plastic-do41")]
     [InlineData("1n4007", "diode-plastic-do41")]
@@ -24,7 +28,7 @@ public class DiodePackageTests
     [InlineData("DRECT", "diode-plastic-do41")] // the name says rectifier: the 1 A class, as before
     public void A_known_type_number_chooses_its_package_and_is_not_a_guess(string model, string footprint)
     {
-        var r = ImportFixture.Import($"test\nV1 a 0 DC 5\nR1 a k 1k\nD1 k 0 {model}\n.model {model} D(IS=1n)\n.end\n");
+        var r = WithDiode(model);
         var d1 = r.Project.FindPart("D1")!;
         Assert.Equal(footprint, d1.Footprint);
         Assert.False(d1.FootprintAssumed);
@@ -37,7 +41,7 @@ public class DiodePackageTests
     [InlineData("D1N9999")] // a type number outside every range above
     public void An_unknown_diode_goes_on_the_small_signal_package_marked_as_a_guess(string model)
     {
-        var r = ImportFixture.Import($"test\nV1 a 0 DC 5\nR1 a k 1k\nD1 k 0 {model}\n.model {model} D(IS=1n)\n.end\n");
+        var r = WithDiode(model);
         var d1 = r.Project.FindPart("D1")!;
         Assert.Equal("diode-glass-do35", d1.Footprint);
         Assert.True(d1.FootprintAssumed);
