@@ -1,10 +1,9 @@
 using System.Globalization;
-using System.Text.RegularExpressions;
 using PadPlan.Model;
 namespace PadPlan.Import;
 
 /// <summary>The footprint a part gets when neither the netlist nor a parts map names one. The value bands are common practice, no source.</summary>
-public static partial class DefaultFootprints
+public static class DefaultFootprints
 {
     /// <summary>The default footprint name, and whether it is only a guess the builder must confirm; null when no default fits.</summary>
     public static (string Name, bool Assumed)? For(NetlistPart part)
@@ -16,9 +15,9 @@ public static partial class DefaultFootprints
             PartKind.Resistor => ("res-axial-250mw", false),
             PartKind.Capacitor => (Capacitor(value), value is null),
             PartKind.Inductor => (value is > 1e-3 ? "choke-radial" : "choke-axial", value is null),
-            PartKind.Diode => Diode(model),
+            PartKind.Diode => TypePackages.Diode(model) is { } package ? (package, false) : PowerDiode(model) ? ("diode-plastic-do41", false) : ("diode-glass-do35", true),
             PartKind.Led => ("led-5mm", false),
-            PartKind.Bjt or PartKind.Jfet or PartKind.Mosfet => ("to92", false),
+            PartKind.Bjt or PartKind.Jfet or PartKind.Mosfet => TypePackages.Transistor(model) is { } package ? (package, false) : ("to92", true),
             PartKind.Crystal => ("hc49-u", false),
             PartKind.Trimmer => ("trimmer-pot", false),
             PartKind.TrimmerCap => ("trimmer-cap", false),
@@ -55,40 +54,6 @@ public static partial class DefaultFootprints
         <= 470e-6 * 1.0001 => "cap-elec-10mm",
         _ => "cap-elec-12.5mm",
     };
-
-    /// <summary>
-    /// A diode's package from its type number in the model name (D1N4001, 1n5819, BZX85C6V8): 1N4001-1N4007 and 1N5817-1N5819
-    /// on DO-41 (1 A), 1N5400-1N5408 and 1N5820-1N5822 on DO-201AD (3 A), the 1 W zeners 1N4728-1N4764 and the BZX85 on DO-41,
-    /// the small-signal 1N914, 1N916, 1N4148, 1N4150 and 1N4448, the 0.5 W zeners 1N5221-1N5281 and the BZX55 and BZX79 on
-    /// DO-35 (the makers' data sheets, from memory). A name that says rectifier or power goes on DO-41; any other diode on the
-    /// small-signal DO-35, marked as assumed, since a rectifier put there would be judged at a fifth of its current.
-    /// </summary>
-    private static (string Name, bool Assumed) Diode(string model)
-    {
-        const string Small = "diode-glass-do35", OneAmp = "diode-plastic-do41", ThreeAmp = "diode-plastic-do201";
-        var name = model.ToUpperInvariant();
-        if (Bzx().Match(name) is { Success: true } bzx)
-            return (bzx.Groups[1].Value == "85" ? OneAmp : Small, false);
-        if (Jedec().Match(name) is { Success: true } jedec)
-        {
-            var n = int.Parse(jedec.Groups[1].Value, CultureInfo.InvariantCulture);
-            string? known = n switch
-            {
-                >= 4001 and <= 4007 or >= 5817 and <= 5819 or >= 4728 and <= 4764 => OneAmp,
-                >= 5400 and <= 5408 or >= 5820 and <= 5822 => ThreeAmp,
-                914 or 916 or 4148 or 4150 or 4448 or >= 5221 and <= 5281 => Small,
-                _ => null,
-            };
-            if (known is not null) return (known, false);
-        }
-        return PowerDiode(model) ? (OneAmp, false) : (Small, true);
-    }
-
-    [GeneratedRegex(@"BZX(55|79|85)")]
-    private static partial Regex Bzx();
-
-    [GeneratedRegex(@"1N(\d{3,4})(?!\d)")]
-    private static partial Regex Jedec();
 
     private static bool PowerDiode(string model) =>
         model.Contains("rect", StringComparison.OrdinalIgnoreCase) || model.Contains("power", StringComparison.OrdinalIgnoreCase) || model.Contains("pwr", StringComparison.OrdinalIgnoreCase);
