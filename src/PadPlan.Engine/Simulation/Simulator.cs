@@ -12,7 +12,7 @@ public static class Simulator
     public static SimulationResult Run(Project project, SimulationOptions? options = null)
     {
         options ??= SimulationOptions.Default;
-        if (options.Off) return SimulationResult.Without("simulation switched off");
+        if (options.Off) return SimulationResult.Without(SimulationResult.SwitchedOff);
         var program = NgspiceProgram.Find(options);
         if (program is null) return SimulationResult.NotFound;
         CircuitDeck deck;

@@ -34,6 +34,34 @@ public class OperatingPointTests
         Assert.Equal(12 / 10.1e3, op.Of("R1")!.LargestCurrent, 7);
     }
 
+    /// <summary>
+    /// A MOSFET written with three nodes and an NMOS model, which ngspice itself refuses ("not enough nodes": only VDMOS takes
+    /// three), is simulated with its bulk on the source, as a discrete part has it. Square law by hand (level 1, Shichman and
+    /// Hodges 1968; ngspice's default W = L, so beta = KP): Id = KP / 2 x (Vgs - Vt)^2 = 1 mA/V^2 x (5 - 2)^2 = 9 mA, so
+    /// V(d) = 12 - 500 x 9 mA = 7.5 V, in saturation (Vds 7.5 V > Vgs - Vt = 3 V).
+    /// </summary>
+    [NgspiceFact]
+    public void A_three_node_nmos_gets_its_bulk_on_the_source_and_matches_the_square_law()
+    {
+        const string Deck = """
+            three-node mosfet
+            V1 vdd 0 12
+            R1 vdd g 7k
+            R2 g 0 5k
+            RD vdd d 500
+            M1 d g 0 MN
+            .model MN NMOS(LEVEL=1 VTO=2 KP=2m)
+            .end
+            """;
+        var imported = ImportFixture.Import(Deck);
+        var m1 = imported.Project.Imported!.Elements.Single(e => e.Name == "M1");
+        Assert.Equal(["d", "g", "GND", "GND"], m1.Nodes.Select(n => n.Net)); // node 0 is read as the ground net
+        Assert.Equal("S", m1.Nodes[3].Pin); // the bulk follows lead S wherever the layout puts it
+        Assert.Contains(imported.Notes, n => n.Message.Contains("only a VDMOS model takes three", StringComparison.Ordinal));
+        var op = Simulate(Deck);
+        Assert.Equal(7.5, op.Volts("d")!.Value, 3);
+    }
+
     [NgspiceFact]
     public void A_zener_shunt_regulator_matches_the_hand_calculation()
     {

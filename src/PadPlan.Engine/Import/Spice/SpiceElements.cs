@@ -184,6 +184,13 @@ internal sealed partial class SpiceElements(string file, SpiceScan scan, List<Im
         if (thermal < nodes.Count)
             notes.Add(new ImportNote(file, e.Line, $"{NetlistText.Echo(e.Name)}: nodes {NetlistText.Echo(string.Join(" ", nodes.Skip(thermal)))} are thermal nodes (junction and case temperature) of the model, not leads; they stay in the simulation only."));
         var modelType = scan.Models.GetValueOrDefault(model, "");
+        // Only a VDMOS model takes three nodes in ngspice; an NMOS or PMOS model wants the bulk as a fourth (ngspice refuses
+        // the line with "not enough nodes"). A discrete MOSFET ties its bulk to the source inside the package, so the deck does.
+        if (kind == PartKind.Mosfet && nodes.Count == 3 && modelType is "nmos" or "pmos")
+        {
+            recorded.Add(("S", nodes[2]));
+            notes.Add(new ImportNote(file, e.Line, $"{NetlistText.Echo(e.Name)}: three nodes with the {modelType.ToUpperInvariant()} model {NetlistText.Echo(model)}, but ngspice wants the bulk as a fourth node for it (only a VDMOS model takes three); the simulation and the exported deck tie the bulk to the source, as a discrete MOSFET does inside its package."));
+        }
         var isLed = kind == PartKind.Diode && (model.Contains("led", StringComparison.OrdinalIgnoreCase) || e.Name.StartsWith("DLED", StringComparison.OrdinalIgnoreCase));
         Add(new NetlistPart(e.Name, isLed ? PartKind.Led : kind, ModelText(model, modelType), null, model, null, null, pins.ToValueList(), Positional: false, e.Line));
         Record(e.Name, e.Name, recorded, e.TailFrom(at));

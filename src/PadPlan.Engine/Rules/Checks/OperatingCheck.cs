@@ -30,7 +30,7 @@ internal static class OperatingCheck
         {
             yield return Findings.Info(RuleIds.OperatingPoint,
                 $"{simulation.Label}: printed voltages are upper bounds, and the polarity and rating checks did not run.",
-                $"Install ngspice (Debian package ngspice) or name it with --ngspice or {SimulationOptions.EnvironmentVariable}; then check again.", null, project.Name);
+                simulation.Remedy, null, project.Name);
             yield break;
         }
         yield return Findings.Info(RuleIds.OperatingPoint,
