@@ -79,6 +79,10 @@ public class FootprintLibraryTests
         var e = Assert.Throws<InputException>(() => Lib.Require("to-92", "x.ppn", 4));
         Assert.Equal(4, e.Line);
         Assert.Contains("to92", e.Message);
+        // a size typed short ("6mm" for the 6.3 mm can) is named among the three: of the names two edits away, those that
+        // begin as the typed one does come first
+        var can = Assert.Throws<InputException>(() => Lib.Require("cap-elec-6mm", "x.ppn", 4));
+        Assert.Contains("cap-elec-6.3mm", can.Message);
     }
 
     [Fact]
