@@ -66,6 +66,9 @@ public sealed record Rating(double? Volts = null, double? Watts = null, double? 
     public double? Watts { get; } = Guard.PositiveOrNull(Watts, "rated power");
     public double? Amps { get; } = Guard.PositiveOrNull(Amps, "rated current");
 
+    /// <summary>What a part is judged against: its own figures (from a parts map) where given, else its footprint's typical ones.</summary>
+    public static Rating For(Part part, Footprint? footprint) => (part.Rating ?? None).Over(footprint?.Rating);
+
     /// <summary>This rating with the other's figures where the other gives them.</summary>
     public Rating Over(Rating? under) => under is null ? this : new(Volts ?? under.Volts, Watts ?? under.Watts, Amps ?? under.Amps);
 }

@@ -69,7 +69,7 @@ public sealed class MaterialsCliTests
         Assert.Equal(0, r.ExitCode);
         Assert.Contains("Bill of materials", r.Out);
         Assert.Contains("Build order", r.Out);
-        Assert.StartsWith("Qty,Part,Value,Code,Series,Footprint,References\r\n", File.ReadAllText(csv));
+        Assert.StartsWith("Qty,Part,Value,Code,Series,Rating,Footprint,References\r\n", File.ReadAllText(csv));
         Assert.StartsWith("Step,Do,What,Where,Note,Done\r\n", File.ReadAllText(Path.Combine(dir, "parts-build-order.csv")));
         var plain = CliRunner.Run("bom", TestPaths.TinyBuffer);
         Assert.DoesNotContain("Build order", plain.Out);

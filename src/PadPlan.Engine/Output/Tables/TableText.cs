@@ -15,7 +15,13 @@ public static class TableText
         var widths = table.Columns.Select(c => c.Length).ToArray();
         foreach (var row in table.Rows)
             for (var i = 0; i < row.Count; i++) widths[i] = Math.Max(widths[i], row[i].Length);
-        if (width is { } total) widths = Share(widths, total);
+        if (width is { } total)
+        {
+            var words = table.Columns.Select(LongestWord).ToArray();
+            foreach (var row in table.Rows)
+                for (var i = 0; i < row.Count; i++) words[i] = Math.Max(words[i], LongestWord(row[i]));
+            widths = Share(widths, words, total);
+        }
         var sb = new StringBuilder();
         AppendLines(sb, table.Title, width);
         AppendRow(sb, table.Columns, widths);
@@ -30,11 +36,34 @@ public static class TableText
     /// <summary>Narrowest a column is made when the table must shrink (characters); common practice, no source.</summary>
     private const int Narrowest = 4;
 
-    /// <summary>Column widths that fill at most `total` characters: the narrow columns keep their width, the wide ones share the rest equally (water filling).</summary>
-    private static int[] Share(int[] natural, int total)
+    private static int LongestWord(string text) => text.Split(' ').Max(w => w.Length);
+
+    /// <summary>
+    /// Column widths that fill at most `total` characters. When every column can be as wide as its longest word (a
+    /// footprint name, a reference), each gets that and the rest of the room goes to the narrowest columns that want more
+    /// first (water filling), so cells wrap between words and no word is split. Otherwise the narrow columns keep their
+    /// width and the wide ones share the rest equally, splitting words.
+    /// </summary>
+    private static int[] Share(int[] natural, int[] longestWord, int total)
     {
         var room = total - Gap * (natural.Length - 1);
         if (natural.Sum() <= room) return natural;
+        var floor = natural.Select((n, i) => Math.Min(n, Math.Max(Narrowest, longestWord[i]))).ToArray();
+        if (floor.Sum() > room) return Share(natural, room);
+        var spare = room - floor.Sum();
+        while (spare > 0)
+        {
+            var wanting = Enumerable.Range(0, floor.Length).Where(i => floor[i] < natural[i]).ToList();
+            if (wanting.Count == 0) break;
+            floor[wanting.MinBy(i => floor[i])]++;
+            spare--;
+        }
+        return floor;
+    }
+
+    /// <summary>Column widths that fill at most `room` characters of cells: the narrow columns keep their width, the wide ones share the rest equally (water filling).</summary>
+    private static int[] Share(int[] natural, int room)
+    {
         var result = new int[natural.Length];
         var open = Enumerable.Range(0, natural.Length).OrderBy(i => natural[i]).ToList();
         while (open.Count > 0)

@@ -42,7 +42,7 @@ internal static class OperatingCheck
             var footprint = project.FindFootprint(part.Footprint);
             if (footprint is null) continue;
             var kind = PartKinds.Of(part, footprint);
-            var rating = (part.Rating ?? Rating.None).Over(footprint.Rating);
+            var rating = Rating.For(part, footprint);
             string Whose(Func<Rating, double?> figure) => part.Rating is { } own && figure(own) is not null ? "its own rating" : $"the {footprint.Name} footprint's rating ({Rating.TypicalWarning})";
 
             if (PolarisedLeads(part, footprint) is var (plus, minus) && op.LeadVolts(part, plus) is { } vp && op.LeadVolts(part, minus) is { } vm)
