@@ -29,6 +29,7 @@ public static class BomCommand
             TableOutput.Print(context, tables.Select(t => t.Table), SharedOptions.TableWidth(context, parse, wide));
             var csvFile = parse.GetValue(csv);
             if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, tables, parse.GetValue(force));
+            if (withOrder) TableOutput.WarnIfNotReady(context, file, loaded);
             return ExitCodes.Success;
         }));
         return command;

@@ -39,6 +39,7 @@ public static class CutlistCommand
             var csvFile = parse.GetValue(csv);
             if (csvFile is not null)
                 TableOutput.WriteCsv(context, csvFile, [("rounds", tables[0]), ("pieces", tables[1]), ("plan", tables[2])], parse.GetValue(force));
+            TableOutput.WarnIfNotReady(context, file, placed);
             if (list.Plan.Complete) return ExitCodes.Success;
             context.Err.WriteLine($"error: the stock is too small: {list.Plan.Unplaced.Count} piece(s) do not fit ({string.Join(", ", list.Plan.Unplaced.Select(p => p.Id))}). Give more or larger stock with --stock WxH.");
             return ExitCodes.RuleViolations;

@@ -2,6 +2,8 @@ using PadPlan.IO;
 using PadPlan.Model;
 using PadPlan.Output.Tables;
 using PadPlan.ProjectFiles;
+using PadPlan.Rules;
+using PadPlan.Simulation;
 
 namespace PadPlan.Cli.Commands;
 
@@ -15,6 +17,19 @@ public static class TableOutput
         if (project.Layout is null || project.Layout.Pads.Count == 0)
             throw new InputException(file.FullName, "the project has no layout (no pads) yet. Run 'padplan place' on it first, or add a layout by hand.");
         return project;
+    }
+
+    /// <summary>
+    /// Says on stderr when the plan fails its check, so that a cut list, build order or test sheet of a plan that is not
+    /// ready cannot pass for a sound one (as every sheet page is marked NOT READY). The check is the full one, at the
+    /// operating point when ngspice is found (the simulation given, else ngspice from the environment or PATH).
+    /// </summary>
+    public static void WarnIfNotReady(CommandContext context, FileInfo file, Project project, SimulationResult? simulation = null)
+    {
+        var errors = Checker.Check(project, new CheckOptions(Simulation: simulation ?? Simulator.Run(project))).Errors;
+        if (errors == 0) return;
+        var them = errors == 1 ? "it" : "them";
+        context.Err.WriteLine($"warning: NOT READY: the plan fails its check with {errors} error{(errors == 1 ? "" : "s")}; 'padplan check {file.Name}' lists {them}. Fix {them} before cutting board.");
     }
 
     /// <summary>Prints the tables as text to standard output, a blank line between them, fitted to `width` characters when given.</summary>

@@ -22,7 +22,8 @@ public static class TestplanCommand
         var command = new Command("testplan", "Write a continuity test sheet for checking the finished board, and the power-up steps.") { project, csv, threshold, ngspice, wide, force };
         command.SetAction(parse => context.Guarded(() =>
         {
-            var placed = TableOutput.ReadPlaced(parse.GetValue(project)!);
+            var file = parse.GetValue(project)!;
+            var placed = TableOutput.ReadPlaced(file);
             var ohms = parse.GetValue(threshold);
             if (!(ohms > 0) || !double.IsFinite(ohms)) throw new UsageException($"--beep-below {ohms}: give your beeper's threshold in ohms, more than 0 (often 30 to 50).");
             var simulation = SharedOptions.Simulate(parse, ngspice, placed);
@@ -30,6 +31,7 @@ public static class TestplanCommand
             TableOutput.Print(context, tables, SharedOptions.TableWidth(context, parse, wide));
             var csvFile = parse.GetValue(csv);
             if (csvFile is not null) TableOutput.WriteCsv(context, csvFile, [("tests", tables[0]), ("paths", tables[1]), ("power-up", tables[2])], parse.GetValue(force));
+            TableOutput.WarnIfNotReady(context, file, placed, simulation);
             return ExitCodes.Success;
         }));
         return command;

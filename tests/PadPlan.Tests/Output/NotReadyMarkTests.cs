@@ -50,10 +50,11 @@ public class NotReadyMarkTests
 
     /// <summary>
     /// On the command line: a part moved 20 mm from where its leads land breaks lead reach (docs/rules.md); `sheets` still
-    /// prints (the pages show what is wrong) but says on stderr that every page is marked, and points to `check`.
+    /// prints (the pages show what is wrong) but says on stderr that every page is marked, and points to `check`; so do
+    /// the cut list, the build order and the test sheet.
     /// </summary>
     [Fact]
-    public void Sheets_of_a_failing_plan_say_on_the_terminal_that_every_page_is_marked()
+    public void Sheets_and_tables_of_a_failing_plan_say_so_on_the_terminal()
     {
         var dir = TestPaths.NewTempDir();
         var path = Path.Combine(dir, "moved.padplan.json");
@@ -74,5 +75,16 @@ public class NotReadyMarkTests
         var sound = CliRunner.Run("sheets", TestPaths.TinyBuffer, "-o", Path.Combine(dir, "sound"), "--date", "2025-03-01", "--formats", "svg", "--ngspice", "none");
         Assert.Equal(0, sound.ExitCode);
         Assert.DoesNotContain("NOT READY", sound.Err);
+
+        // the tables for the bench say it too: what to cut, the build order, the test sheet
+        foreach (var args in new[] { new[] { "cutlist" }, ["bom", "--build-order"], ["testplan", "--ngspice", "none"] })
+        {
+            var failing = CliRunner.Run([args[0], path, .. args[1..]]);
+            Assert.Equal(0, failing.ExitCode);
+            Assert.Contains("warning: NOT READY: the plan fails its check with", failing.Err);
+            Assert.Contains("'padplan check moved.padplan.json' lists", failing.Err);
+            var passing = CliRunner.Run([args[0], TestPaths.TinyBuffer, .. args[1..]]);
+            Assert.DoesNotContain("NOT READY", passing.Err);
+        }
     }
 }
