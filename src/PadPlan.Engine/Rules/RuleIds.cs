@@ -9,6 +9,7 @@ public static class RuleIds
     public const string PartUnplaced = "part-unplaced";
     public const string LeadUnplaced = "lead-unplaced";
     public const string SingleConnection = "single-connection";
+    public const string FootprintAssumed = "footprint-assumed";
 
     // Connectivity rebuilt from geometry
     public const string Open = "open";
@@ -55,7 +56,7 @@ public static class RuleIds
     /// <summary>Every rule id, in the order docs/rules.md lists them.</summary>
     public static IReadOnlyList<string> All { get; } =
     [
-        LayoutMissing, BoardSize, PartUnplaced, LeadUnplaced, SingleConnection,
+        LayoutMissing, BoardSize, PartUnplaced, LeadUnplaced, SingleConnection, FootprintAssumed,
         Open, Short, LeadWrongPad, LeadOffPad, GroundOnPad, PadShort, JumperShort, JumperEnd, LandingMismatch, PadUnused,
         PadGap, GroundGap, LeadEdge, LeadReach, LeadLength, PadCapacity, LeadCrossing,
         BodyOverlap, BodyOverPad, LeadMeetsBody, BoardMargin, Keepout,

@@ -2,7 +2,7 @@ using PadPlan.Model;
 
 namespace PadPlan.Rules.Checks;
 
-/// <summary>Nets that join nothing, parts the layout does not place, and leads of placed parts that carry a net but land nowhere.</summary>
+/// <summary>Nets that join nothing, footprints the import only guessed, parts the layout does not place, and leads of placed parts that carry a net but land nowhere.</summary>
 internal static class CompletenessCheck
 {
     public static IEnumerable<Finding> Run(CheckContext ctx)
@@ -12,6 +12,11 @@ internal static class CompletenessCheck
                 $"part {part.Ref} ({part.Value}) is in the netlist but not on the board.",
                 "Run 'padplan place' again, or add a placement for it to the layout.", null, part.Ref);
         foreach (var f in SingleConnections(ctx.Plan.Project)) yield return f;
+        foreach (var part in ctx.Plan.Project.Parts.Where(p => p.FootprintAssumed).OrderBy(p => p.Ref, NaturalOrder.Comparer))
+            yield return Findings.Warning(RuleIds.FootprintAssumed,
+                $"{part.Ref} ({part.Value}) is on {part.Footprint} because the import could not tell its package from the netlist: its body, lead spacing and rating may not be those of the part you have.",
+                $"Check the part in hand. 'padplan swap PROJECT {part.Ref} --footprint NAME' puts it on the right footprint, or confirms {part.Footprint} when you name that; a parts map does the same at import.",
+                null, part.Ref);
         foreach (var lead in ctx.Plan.Leads.Where(l => l.Net is not null && l.Landing is null))
             yield return Findings.Error(RuleIds.LeadUnplaced,
                 $"lead {lead.Name} should join net {lead.Net} but has no landing point.",
