@@ -70,6 +70,23 @@ public sealed class TableWidthTests
     {
         Assert.Equal(["lay the", "strip"], TableText.Wrap("lay the strip", 8));
         Assert.Equal(["abcdefgh", "ij k"], TableText.Wrap("abcdefghij k", 8));
+        // a hyphenated name longer than the column breaks after its last hyphen that fits, not inside a piece
+        Assert.Equal(["res-axial-", "250mw"], TableText.Wrap("res-axial-250mw", 12));
+        Assert.Equal(["res-", "axial-", "250mw"], TableText.Wrap("res-axial-250mw", 6));
+    }
+
+    /// <summary>
+    /// At 80 columns a table whose columns cannot all hold their longest word whole (the tiny buffer's BOM) is given widths
+    /// that hold every piece of a hyphenated name, so nothing is cut inside a piece ("res-axial-25" / "0mw" before).
+    /// </summary>
+    [Fact]
+    public void A_table_too_wide_for_whole_words_wraps_after_hyphens_and_cuts_nothing()
+    {
+        var table = BomTable.From(ProjectFile.Read(TestPaths.TinyBuffer));
+        var text = TableText.ToText(table, 80);
+        Assert.True(Longest(text) <= 80);
+        Assert.Contains("res-axial-", text);
+        Assert.DoesNotContain("0mw", text.Replace("250mw", ""));
     }
 
     [Fact]

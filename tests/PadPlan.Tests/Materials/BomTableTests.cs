@@ -41,8 +41,7 @@ public sealed class BomTableTests
         var bom = BomTable.From(project);
         var refs = bom.Rows.SelectMany(r => r[7].Split(' ')).Order().ToList();
         Assert.Equal(project.Parts.Select(p => p.Ref).Order(), refs);
-        // the project's own copy of the footprint states no rating, so there is none to show (and none the check judges by)
-        Assert.Equal(["2", "resistor", "47 kΩ", "47k", "E12", "", "res-axial-250mw", "R1 R2"], Line(bom, "R1"));
+        Assert.Equal(["2", "resistor", "47 kΩ", "47k", "E12", "0.25\u00A0W", "res-axial-250mw", "R1 R2"], Line(bom, "R1"));
     }
 
     /// <summary>

@@ -17,10 +17,14 @@ public static class TableText
             for (var i = 0; i < row.Count; i++) widths[i] = Math.Max(widths[i], row[i].Length);
         if (width is { } total)
         {
-            var words = table.Columns.Select(LongestWord).ToArray();
-            foreach (var row in table.Rows)
-                for (var i = 0; i < row.Count; i++) words[i] = Math.Max(words[i], LongestWord(row[i]));
-            widths = Share(widths, words, total);
+            int[] Longest(Func<string, int> measure)
+            {
+                var longest = table.Columns.Select(measure).ToArray();
+                foreach (var row in table.Rows)
+                    for (var i = 0; i < row.Count; i++) longest[i] = Math.Max(longest[i], measure(row[i]));
+                return longest;
+            }
+            widths = Share(widths, Longest(LongestWord), total) ?? Share(widths, Longest(LongestPiece), total) ?? Share(widths, total - Gap * (widths.Length - 1));
         }
         var sb = new StringBuilder();
         AppendLines(sb, table.Title, width);
@@ -38,18 +42,22 @@ public static class TableText
 
     private static int LongestWord(string text) => text.Split(' ').Max(w => w.Length);
 
+    /// <summary>The longest piece of a word between spaces and after hyphens (res-axial-250mw: "axial-", 6).</summary>
+    private static int LongestPiece(string text) =>
+        text.Split(' ').SelectMany(w => System.Text.RegularExpressions.Regex.Split(w, "(?<=-)")).Max(p => p.Length);
+
     /// <summary>
-    /// Column widths that fill at most `total` characters. When every column can be as wide as its longest word (a
-    /// footprint name, a reference), each gets that and the rest of the room goes to the narrowest columns that want more
-    /// first (water filling), so cells wrap between words and no word is split. Otherwise the narrow columns keep their
-    /// width and the wide ones share the rest equally, splitting words.
+    /// Column widths that fill at most `total` characters when every column can be as wide as its longest unbreakable
+    /// piece (a word, or a piece of a hyphenated name): each gets that, and the rest of the room goes to the narrowest
+    /// columns that want more first (water filling), so cells wrap between words (or after hyphens) and nothing is cut.
+    /// Null when even that does not fit.
     /// </summary>
-    private static int[] Share(int[] natural, int[] longestWord, int total)
+    private static int[]? Share(int[] natural, int[] longestPiece, int total)
     {
         var room = total - Gap * (natural.Length - 1);
         if (natural.Sum() <= room) return natural;
-        var floor = natural.Select((n, i) => Math.Min(n, Math.Max(Narrowest, longestWord[i]))).ToArray();
-        if (floor.Sum() > room) return Share(natural, room);
+        var floor = natural.Select((n, i) => Math.Min(n, Math.Max(Narrowest, longestPiece[i]))).ToArray();
+        if (floor.Sum() > room) return null;
         var spare = room - floor.Sum();
         while (spare > 0)
         {
@@ -102,7 +110,10 @@ public static class TableText
             foreach (var part in width is { } w ? Wrap(line, w) : [line]) sb.Append(part).Append('\n');
     }
 
-    /// <summary>Breaks text into lines of at most `width` characters at spaces; a word longer than the width is cut.</summary>
+    /// <summary>
+    /// Breaks text into lines of at most `width` characters at spaces; a word longer than the width breaks after its last
+    /// hyphen that fits (res-axial- / 250mw), else it is cut.
+    /// </summary>
     public static IReadOnlyList<string> Wrap(string text, int width)
     {
         if (text.Length <= width || width <= 0) return [text];
@@ -117,7 +128,13 @@ public static class TableText
                 continue;
             }
             if (line.Length > 0) { lines.Add(line.ToString()); line.Clear(); }
-            while (rest.Length > width) { lines.Add(rest[..width]); rest = rest[width..]; }
+            while (rest.Length > width)
+            {
+                var hyphen = rest.LastIndexOf('-', width - 1, width);
+                var take = hyphen > 0 ? hyphen + 1 : width;
+                lines.Add(rest[..take]);
+                rest = rest[take..];
+            }
             line.Append(rest);
         }
         if (line.Length > 0 || lines.Count == 0) lines.Add(line.ToString());
