@@ -1,6 +1,8 @@
 using System.CommandLine;
 using PadPlan.Import;
+using PadPlan.Model;
 using PadPlan.ProjectFiles;
+using PadPlan.Simulation;
 
 namespace PadPlan.Cli.Commands;
 
@@ -44,10 +46,11 @@ public static class ImportCommand
             }
             var result = ProjectBuilder.Build(preview, new ImportOptions(library, map, size, recorded.Distinct().ToList()));
             foreach (var note in result.Notes) context.Err.WriteLine($"warning: {note.Describe()}");
-            ProjectFile.Write(result.Project, outFile.FullName);
+            var project = Oriented(result.Project);
+            ProjectFile.Write(project, outFile.FullName);
             if (!parse.GetValue(quiet))
             {
-                var p = result.Project;
+                var p = project;
                 if (Output.Tables.ImportSummaryTable.For(p) is { } summary) context.Err.Write(Output.Tables.TableText.ToText(summary));
                 var assumed = p.Parts.Count(x => x.FootprintAssumed);
                 context.Err.WriteLine($"imported {p.Parts.Count} parts, {p.Nets.Count} nets, {p.Footprints.Count} footprints" +
@@ -57,5 +60,16 @@ public static class ImportCommand
             return ExitCodes.Success;
         }));
         return command;
+    }
+
+    /// <summary>
+    /// Electrolytics from a SPICE deck turned so + is on the higher net at the operating point (<see cref="ElectrolyticOrientation"/>),
+    /// when ngspice is found (environment or PATH) and the circuit simulates; otherwise as the deck's node order has them, and
+    /// `check` reports any that sit reversed.
+    /// </summary>
+    private static Project Oriented(Project project)
+    {
+        if (project.Imported is not { Elements.Count: > 0 } || !project.Parts.Any(p => project.FindFootprint(p.Footprint)?.PolarisedLeads(p) is not null)) return project;
+        return Simulator.Run(project).Point is { } op ? ElectrolyticOrientation.Orient(project, op) : project;
     }
 }

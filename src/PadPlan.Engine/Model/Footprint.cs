@@ -155,6 +155,18 @@ public sealed record Footprint
     /// <summary>The figures are nominal, not a published outline: the source does not name a JEDEC outline, or says it is recalled from memory.</summary>
     public bool IsNominal => !Source.StartsWith("JEDEC", StringComparison.OrdinalIgnoreCase) || Source.Contains("from memory", StringComparison.OrdinalIgnoreCase);
 
+    /// <summary>The symbol pins on a polarised part's + and - leads (the footprint marks the + lead: an electrolytic), or null.</summary>
+    public (string Plus, string Minus)? PolarisedLeads(Part part)
+    {
+        var mark = Marks.FirstOrDefault(m => m.Kind == MarkKind.Plus);
+        if (mark is null || Leads.Count != 2 || part.Pins.Count != 2) return null;
+        var names = PinNames(part.Variant);
+        var index = Leads.ToList().FindIndex(l => l.Name == mark.Lead);
+        var plus = names[index];
+        var minus = names[1 - index];
+        return part.NetOf(plus) is null || part.NetOf(minus) is null ? null : (plus, minus);
+    }
+
     /// <summary>The symbol pin name each lead carries, in lead order, for a variant (or the lead names when none is given).</summary>
     public IReadOnlyList<string> PinNames(string? variant)
     {

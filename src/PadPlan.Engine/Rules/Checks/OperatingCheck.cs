@@ -11,8 +11,8 @@ namespace PadPlan.Rules.Checks;
 /// </summary>
 internal static class OperatingCheck
 {
-    /// <summary>A polarised capacitor reversed by more than this (V) is an error. Common practice, no source: aluminium electrolytics take well under 1 V reverse (from memory).</summary>
-    public const double ReverseVolts = 0.1;
+    /// <summary>A polarised capacitor reversed by more than this (V) is an error (<see cref="ElectrolyticOrientation.ReverseVolts"/>).</summary>
+    public const double ReverseVolts = ElectrolyticOrientation.ReverseVolts;
 
     /// <summary>Derating for capacitor voltage: at most 80 % of the rating. Common practice, no source.</summary>
     public const double CapDerating = 0.8;
@@ -45,7 +45,7 @@ internal static class OperatingCheck
             var rating = Rating.For(part, footprint);
             string Whose(Func<Rating, double?> figure) => part.Rating is { } own && figure(own) is not null ? "its own rating" : $"the {footprint.Name} footprint's rating ({Rating.TypicalWarning})";
 
-            if (PolarisedLeads(part, footprint) is var (plus, minus) && op.LeadVolts(part, plus) is { } vp && op.LeadVolts(part, minus) is { } vm)
+            if (footprint.PolarisedLeads(part) is var (plus, minus) && op.LeadVolts(part, plus) is { } vp && op.LeadVolts(part, minus) is { } vm)
             {
                 var across = vp - vm;
                 if (across < -ReverseVolts)
@@ -88,18 +88,6 @@ internal static class OperatingCheck
                         $"Raise the series resistance a little, or state the part's own rating in the parts map.", null, part.Ref);
             }
         }
-    }
-
-    /// <summary>The symbol pins on a polarised capacitor's + and - leads (the footprint marks the + lead), or null.</summary>
-    public static (string Plus, string Minus)? PolarisedLeads(Part part, Footprint footprint)
-    {
-        var mark = footprint.Marks.FirstOrDefault(m => m.Kind == MarkKind.Plus);
-        if (mark is null || footprint.Leads.Count != 2 || part.Pins.Count != 2) return null;
-        var names = footprint.PinNames(part.Variant);
-        var index = footprint.Leads.ToList().FindIndex(l => l.Name == mark.Lead);
-        var plus = names[index];
-        var minus = names[1 - index];
-        return part.NetOf(plus) is null || part.NetOf(minus) is null ? null : (plus, minus);
     }
 
     // The current from anode to cathode: into the anode lead (the lead the footprint does not band), else the larger lead current.
