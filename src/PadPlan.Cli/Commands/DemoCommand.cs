@@ -57,7 +57,7 @@ public static class DemoCommand
         say.WriteLine($"1. import: {imported.Project.Parts.Count} parts, {imported.Project.Nets.Count} nets");
 
         // 2. place
-        var placed = CheckedPlacer.Place(imported.Project, PlacerSettings.Default);
+        var placed = CheckedPlacer.Place(Simulation.ElectrolyticOrientation.AtImport(imported.Project), PlacerSettings.Default);
         if (!placed.Succeeded)
         {
             say.WriteLine($"error: placement failed: {placed.Failure!.Message} ({placed.Failure.Hint})");

@@ -1,6 +1,5 @@
 using System.CommandLine;
 using PadPlan.Import;
-using PadPlan.Model;
 using PadPlan.ProjectFiles;
 using PadPlan.Simulation;
 
@@ -46,7 +45,7 @@ public static class ImportCommand
             }
             var result = ProjectBuilder.Build(preview, new ImportOptions(library, map, size, recorded.Distinct().ToList()));
             foreach (var note in result.Notes) context.Err.WriteLine($"warning: {note.Describe()}");
-            var project = Oriented(result.Project);
+            var project = ElectrolyticOrientation.AtImport(result.Project);
             ProjectFile.Write(project, outFile.FullName);
             if (!parse.GetValue(quiet))
             {
@@ -60,16 +59,5 @@ public static class ImportCommand
             return ExitCodes.Success;
         }));
         return command;
-    }
-
-    /// <summary>
-    /// Electrolytics from a SPICE deck turned so + is on the higher net at the operating point (<see cref="ElectrolyticOrientation"/>),
-    /// when ngspice is found (environment or PATH) and the circuit simulates; otherwise as the deck's node order has them, and
-    /// `check` reports any that sit reversed.
-    /// </summary>
-    private static Project Oriented(Project project)
-    {
-        if (project.Imported is not { Elements.Count: > 0 } || !project.Parts.Any(p => project.FindFootprint(p.Footprint)?.PolarisedLeads(p) is not null)) return project;
-        return Simulator.Run(project).Point is { } op ? ElectrolyticOrientation.Orient(project, op) : project;
     }
 }

@@ -14,6 +14,16 @@ public static class ElectrolyticOrientation
     /// <summary>A polarised capacitor reversed by more than this (V) is reversed. Common practice, no source: aluminium electrolytics take well under 1 V reverse (from memory).</summary>
     public const double ReverseVolts = 0.1;
 
+    /// <summary>
+    /// At import: the project with its deck's electrolytics turned (<see cref="Orient"/>) when there are any and ngspice, found
+    /// as the simulation finds it, gives the operating point; otherwise as it is, and `check` reports any that sit reversed.
+    /// </summary>
+    public static Project AtImport(Project project, SimulationOptions? options = null)
+    {
+        if (project.Imported is not { Elements.Count: > 0 } || !project.Parts.Any(p => project.FindFootprint(p.Footprint)?.PolarisedLeads(p) is not null)) return project;
+        return Simulator.Run(project, options).Point is { } op ? Orient(project, op) : project;
+    }
+
     /// <summary>The project with every SPICE-imported polarised capacitor that sits reversed at the operating point turned round (its + and - nets traded, in the part and in the recorded deck line), and a summary line for each.</summary>
     public static Project Orient(Project project, OperatingPoint op)
     {
