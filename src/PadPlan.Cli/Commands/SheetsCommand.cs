@@ -44,8 +44,7 @@ public static class SheetsCommand
             context.Err.WriteLine(PadPlan.Simulation.NetVoltage.Summary(simulation));
             SheetOutput.Write(context, book, parse.GetValue(output)!.FullName, chosenFormats, resolution, parse.GetValue(force));
             context.Err.WriteLine($"{book.Summary()}; on {chosenPaper.Name}, dated {printedDate:yyyy-MM-dd}.");
-            if (check.Errors > 0)
-                context.Err.WriteLine($"warning: the check found {check.Errors} error{(check.Errors == 1 ? "" : "s")}, so every page is marked NOT READY; 'padplan check {file.Name}' lists {(check.Errors == 1 ? "it" : "them")}. Fix {(check.Errors == 1 ? "it" : "them")} before cutting board.");
+            if (check.Errors > 0) context.Err.WriteLine(TableOutput.NotReadyWarning(check.Errors, file.Name, pagesMarked: true));
             context.Err.WriteLine("Print the template at actual size and measure its check bar before cutting.");
             return ExitCodes.Success;
         }));

@@ -27,9 +27,15 @@ public static class TableOutput
     public static void WarnIfNotReady(CommandContext context, FileInfo file, Project project, SimulationResult? simulation = null)
     {
         var errors = Checker.Check(project, new CheckOptions(Simulation: simulation ?? Simulator.Run(project))).Errors;
-        if (errors == 0) return;
+        if (errors > 0) context.Err.WriteLine(NotReadyWarning(errors, file.Name, pagesMarked: false));
+    }
+
+    /// <summary>The one wording of the stop on the terminal, for the tables and (with every page marked) for the sheets.</summary>
+    public static string NotReadyWarning(int errors, string fileName, bool pagesMarked)
+    {
         var them = errors == 1 ? "it" : "them";
-        context.Err.WriteLine($"warning: NOT READY: the plan fails its check with {errors} error{(errors == 1 ? "" : "s")}; 'padplan check {file.Name}' lists {them}. Fix {them} before cutting board.");
+        return $"warning: NOT READY: the plan fails its check with {errors} error{(errors == 1 ? "" : "s")}{(pagesMarked ? ", and every page is marked so" : "")}; " +
+               $"'padplan check {fileName}' lists {them}. Fix {them} before cutting board.";
     }
 
     /// <summary>Prints the tables as text to standard output, a blank line between them, fitted to `width` characters when given.</summary>

@@ -68,7 +68,8 @@ public class NotReadyMarkTests
 
         var run = CliRunner.Run("sheets", path, "-o", Path.Combine(dir, "sheets"), "--date", "2025-03-01", "--dpi", "40", "--formats", "svg", "--ngspice", "none");
         Assert.Equal(0, run.ExitCode);
-        Assert.Contains("every page is marked NOT READY", run.Err);
+        Assert.Contains("warning: NOT READY: the plan fails its check with", run.Err);
+        Assert.Contains(", and every page is marked so;", run.Err);
         Assert.Contains("'padplan check moved.padplan.json' lists", run.Err);
         Assert.Contains("NOT READY:", File.ReadAllText(Path.Combine(dir, "sheets", "template-1.svg")));
 
