@@ -6,7 +6,7 @@ namespace PadPlan.Tests.Import;
 /// DO-201AD 3 A; TO-92 0.625 W, TO-126 1.25 W, TO-220 2 W). Packages per the makers' data sheets for these types, from
 /// memory: 1N4001-1N4007 and 1N5817-1N5819 in DO-41, 1N5400-1N5408 and 1N5820-1N5822 in DO-201AD, 1N4728A-1N4764A (1 W
 /// zeners) and BZX85 in DO-41, 1N4148, 1N914, 1N5221B-1N5281B and BZX79 in DO-35; TIP31C, TIP120, IRF510 and IRFZ44N in
-/// TO-220, BD139 in TO-126, 2N3904, BC547B, 2N7000 and J310 in TO-92.
+/// TO-220, BD139 in TO-126, 2N4401, BC547B, 2N7000 and J310 in TO-92.
 /// </summary>
 public class TypePackageTests
 {
@@ -61,7 +61,7 @@ public class TypePackageTests
     [InlineData("M", "MIRF510", "NMOS(VTO=4)", "to220")]
     [InlineData("M", "IRFZ44N", "NMOS(VTO=3)", "to220")]
     [InlineData("Q", "BD139", "NPN(BF=100)", "to126")]
-    [InlineData("Q", "Q2N3904", "NPN(BF=300)", "to92")]
+    [InlineData("Q", "Q2N4401", "NPN(BF=300)", "to92")]
     [InlineData("Q", "BC547B", "NPN(BF=300)", "to92")]
     [InlineData("M", "M2N7000", "NMOS(VTO=2)", "to92")]
     [InlineData("J", "J310", "NJF(VTO=-3)", "to92")]

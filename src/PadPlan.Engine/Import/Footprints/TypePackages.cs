@@ -4,7 +4,7 @@ using System.Text.RegularExpressions;
 namespace PadPlan.Import;
 
 /// <summary>
-/// The library package a semiconductor is made in, read from the type number in its SPICE model name (D1N4001, Q2N3904,
+/// The library package a semiconductor is made in, read from the type number in its SPICE model name (D1N4001, Q2N4401,
 /// MIRF510, BD139), so that it fits the board and its current and power are judged against the right rating. The packages
 /// are the makers' data sheets' for these JEDEC and European types, from memory; a type not listed gives null, and the
 /// importer then assumes the small package and says so.
@@ -35,7 +35,7 @@ public static partial class TypePackages
     /// <summary>
     /// TO-220: the TIP29-TIP42 and TIP120-TIP127 families, BD241-BD244, MJE3055T and MJE2955T, and the MOSFETs IRF510-IRF540,
     /// IRF9540, IRF610-IRF640, IRF740, IRF840, IRFZ24-IRFZ44 and IRL520, IRL540. TO-126: BD135-BD140, MJE340, MJE350. TO-92:
-    /// 2N3904, 2N3906, 2N4401, 2N4403, 2N5401, 2N5551, PN2222A, PN2907A, BC546-BC560, MPSA13, MPSA14, MPSA42, MPSA92, the
+    /// 2N4401, 2N4403, 2N5401, 2N5551, PN2222A, PN2907A, BC546-BC560, MPSA13, MPSA14, MPSA42, MPSA92, the
     /// MOSFETs 2N7000 and BS170, and the JFETs J309, J310, MPF102 and 2N5457-2N5459, 2N5484-2N5486.
     /// </summary>
     public static string? Transistor(string model)
@@ -59,6 +59,6 @@ public static partial class TypePackages
     [GeneratedRegex(@"BD1(3[5-9]|40)(?![0-9])|MJE3[45]0(?![0-9])")]
     private static partial Regex To126();
 
-    [GeneratedRegex(@"2N(3904|3906|4401|4403|5401|5551|7000|545[7-9]|548[4-6])(?![0-9])|PN(2222|2907)A?(?![0-9])|BC5(4[6-9]|5[0-9]|60)(?![0-9])|MPSA(13|14|42|92)(?![0-9])|BS170(?![0-9])|J3(09|10)(?![0-9])|MPF102(?![0-9])")]
+    [GeneratedRegex(@"2N(4401|4403|5401|5551|7000|545[7-9]|548[4-6])(?![0-9])|PN(2222|2907)A?(?![0-9])|BC5(4[6-9]|5[0-9]|60)(?![0-9])|MPSA(13|14|42|92)(?![0-9])|BS170(?![0-9])|J3(09|10)(?![0-9])|MPF102(?![0-9])")]
     private static partial Regex To92();
 }
