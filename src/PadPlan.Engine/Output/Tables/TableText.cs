@@ -24,7 +24,8 @@ public static class TableText
                     for (var i = 0; i < row.Count; i++) longest[i] = Math.Max(longest[i], measure(row[i]));
                 return longest;
             }
-            widths = Share(widths, Longest(LongestWord), total) ?? Share(widths, Longest(LongestPiece), total) ?? Share(widths, total - Gap * (widths.Length - 1));
+            var room = total - Gap * (widths.Length - 1);
+            if (widths.Sum() > room) widths = Share(widths, Longest(LongestWord), room) ?? Share(widths, Longest(LongestPiece), room) ?? Share(widths, room);
         }
         var sb = new StringBuilder();
         AppendLines(sb, table.Title, width);
@@ -47,15 +48,13 @@ public static class TableText
         text.Split(' ').SelectMany(w => System.Text.RegularExpressions.Regex.Split(w, "(?<=-)")).Max(p => p.Length);
 
     /// <summary>
-    /// Column widths that fill at most `total` characters when every column can be as wide as its longest unbreakable
-    /// piece (a word, or a piece of a hyphenated name): each gets that, and the rest of the room goes to the narrowest
-    /// columns that want more first (water filling), so cells wrap between words (or after hyphens) and nothing is cut.
-    /// Null when even that does not fit.
+    /// Column widths that fill at most `room` characters of cells when every column can be as wide as its longest
+    /// unbreakable piece (a word, or a piece of a hyphenated name): each gets that, and the rest of the room goes to the
+    /// narrowest columns that want more first (water filling), so cells wrap between words (or after hyphens) and nothing
+    /// is cut. Null when even that does not fit.
     /// </summary>
-    private static int[]? Share(int[] natural, int[] longestPiece, int total)
+    private static int[]? Share(int[] natural, int[] longestPiece, int room)
     {
-        var room = total - Gap * (natural.Length - 1);
-        if (natural.Sum() <= room) return natural;
         var floor = natural.Select((n, i) => Math.Min(n, Math.Max(Narrowest, longestPiece[i]))).ToArray();
         if (floor.Sum() > room) return null;
         var spare = room - floor.Sum();

@@ -11,9 +11,6 @@ namespace PadPlan.Rules.Checks;
 /// </summary>
 internal static class OperatingCheck
 {
-    /// <summary>A polarised capacitor reversed by more than this (V) is an error (<see cref="ElectrolyticOrientation.ReverseVolts"/>).</summary>
-    public const double ReverseVolts = ElectrolyticOrientation.ReverseVolts;
-
     /// <summary>
     /// The rating a capacitor of no stated rating may have: small disc ceramic and film capacitors are commonly sold at 50 V
     /// and up (common practice, no source; from memory), so above 80 % of that a stated rating is asked for.
@@ -102,7 +99,7 @@ internal static class OperatingCheck
         var (plus, minus) = polarised ?? (part.Pins[0].Pin, part.Pins[1].Pin);
         if (op.LeadVolts(part, plus) is not { } vp || op.LeadVolts(part, minus) is not { } vm) yield break;
         var across = vp - vm;
-        if (polarised is not null && across < -ReverseVolts)
+        if (polarised is not null && across < -ElectrolyticOrientation.ReverseVolts)
             yield return Findings.Error(RuleIds.CapReversed,
                 $"{part.Ref} ({part.Value}) is reversed: its + lead (net {part.NetOf(plus)}) sits at {V(vp)} and its - lead (net {part.NetOf(minus)}) at {V(vm)}, {V(-across)} the wrong way. A reversed electrolytic can heat, vent or burst at power-up.",
                 $"Turn {part.Ref} round in the netlist (+ to net {part.NetOf(minus)}), or use a non-polarised capacitor.", null, part.Ref);
